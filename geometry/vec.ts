@@ -1,0 +1,82 @@
+/**
+ * Small vector helpers and the one place gl-matrix is configured.
+ *
+ * gl-matrix allocates Float32Array by default; every geometry module imports
+ * from here so that all of its vectors and quaternions are Float64.
+ */
+import { glMatrix, vec3, quat, mat3 } from "gl-matrix";
+
+glMatrix.setMatrixArrayType(Float64Array as unknown as Float32ArrayConstructor);
+
+export { vec3, quat, mat3 };
+
+/** A 3-vector as a plain tuple (for public results and JSON). */
+export type Vec3 = [number, number, number];
+
+/** Length below which a vector counts as zero (dimensionless, unit-sphere scale). */
+export const ZERO_LENGTH = 1e-12;
+
+export function dot3(a: Readonly<Vec3>, b: Readonly<Vec3>): number {
+  return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+}
+
+export function cross3(a: Readonly<Vec3>, b: Readonly<Vec3>): Vec3 {
+  return [a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]];
+}
+
+export function norm3(a: Readonly<Vec3>): number {
+  return Math.hypot(a[0], a[1], a[2]);
+}
+
+/** Unit vector along `a`; throws RangeError for a zero or non-finite vector. */
+export function unit3(a: Readonly<Vec3>): Vec3 {
+  const n = norm3(a);
+  if (!Number.isFinite(n) || n < ZERO_LENGTH) {
+    throw new RangeError(`cannot normalise vector (${a.join(", ")}): it is zero or not finite`);
+  }
+  return [a[0] / n, a[1] / n, a[2] / n];
+}
+
+export function scale3(a: Readonly<Vec3>, k: number): Vec3 {
+  return [a[0] * k, a[1] * k, a[2] * k];
+}
+
+export function add3(a: Readonly<Vec3>, b: Readonly<Vec3>): Vec3 {
+  return [a[0] + b[0], a[1] + b[1], a[2] + b[2]];
+}
+
+export function sub3(a: Readonly<Vec3>, b: Readonly<Vec3>): Vec3 {
+  return [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
+}
+
+/** Angle between two vectors in radians, by atan2(|a x b|, a . b) (stable near 0 and pi). */
+export function angleBetween(a: Readonly<Vec3>, b: Readonly<Vec3>): number {
+  return Math.atan2(norm3(cross3(a, b)), dot3(a, b));
+}
+
+/**
+ * A unit vector perpendicular to unit `n`: the component of `hint` across `n`,
+ * or of a fallback axis when `hint` is (nearly) parallel to `n`.
+ */
+export function perpendicularUnit(n: Readonly<Vec3>, hint: Readonly<Vec3> = [0, 0, 1]): Vec3 {
+  const tryHint = (h: Readonly<Vec3>): Vec3 | null => {
+    const d = dot3(h, n);
+    const p: Vec3 = [h[0] - d * n[0], h[1] - d * n[1], h[2] - d * n[2]];
+    const len = norm3(p);
+    return len > 1e-6 ? [p[0] / len, p[1] / len, p[2] / len] : null;
+  };
+  return tryHint(hint) ?? tryHint([1, 0, 0]) ?? (tryHint([0, 1, 0]) as Vec3);
+}
+
+/** Rotates `v` about unit axis `axis` by `angleRad` (right-hand rule), via a gl-matrix quaternion. */
+export function rotateAbout(v: Readonly<Vec3>, axis: Readonly<Vec3>, angleRad: number): Vec3 {
+  const q = quat.setAxisAngle(quat.create(), axis as unknown as vec3, angleRad);
+  const out = vec3.transformQuat(vec3.create(), v as unknown as vec3, q);
+  return [out[0], out[1], out[2]];
+}
+
+export function clamp(x: number, lo: number, hi: number): number {
+  return x < lo ? lo : x > hi ? hi : x;
+}
+
+export const DEG = Math.PI / 180;

@@ -1,0 +1,160 @@
+/**
+ * The exact time-averaged separation-band sampler.
+ *
+ * Work in the ball frame, where the seam is fixed and the flow turns. The spin
+ * axis is the unit vector w (ball frame); s = sin(gyro), k = cos(gyro). Over one
+ * revolution the stagnation direction v traces the circle
+ *     v(phi) = s w + k (cos phi e1 - sin phi e2),   e2 = w x e1,
+ * so for a seam point q with qw = q . w and rho = |q - qw w|,
+ *     q . v = s qw + k rho cos(phi'),    phi' = phi - psi_q (psi_q: q's own phase).
+ * The band condition cos(theta2) <= q . v <= cos(theta1) is cos(phi') in [L, U] with
+ *     L = (cos theta2 - s qw) / (k rho),  U = (cos theta1 - s qw) / (k rho),
+ * and the set of phases where it holds is phi' in +-[arccos U, arccos L], hence
+ *     share of the turn in band      = (arccos L - arccos U) / pi            (clamped to [-1, 1])
+ *     turn-average of cos(phi') there = (sqrt(1 - L^2) - sqrt(1 - U^2)) / pi.
+ * The flow-fixed split vector a = (w - s v) / k gives q . a = qw k - s rho cos(phi'),
+ * so each side is again an interval of cos(phi') (cut at K = qw k / (s rho)).
+ *
+ * The Magnus split m = w x v / |w x v| gives q . m = rho sin(psi_q - phi): odd about
+ * phi' = 0, while the band set is even. Hence, exactly, magnusPlus = magnusMinus =
+ * seamInBand / 2 and the asymmetry has no Magnus component (alongMagnus = 0): the
+ * time-averaged seam picture can only push along +-a, across the Magnus direction.
+ *
+ * The seam integral is the periodic trapezoid rule on the arc-length samples.
+ */
+import type { SeamSamples } from "../../geometry/seamSamples.js";
+import type { Band } from "./band.js";
+
+/** Below this k * rho a seam point is on the spin axis: it does not move (unit-sphere length). */
+const ON_AXIS = 1e-12;
+
+export interface BandAverages {
+  /** Turn-averaged share of the seam length inside the band, 0..1. */
+  seamInBand: number;
+  /** The same, restricted to q . a > 0. */
+  axisPlus: number;
+  /** The same, restricted to q . a < 0. */
+  axisMinus: number;
+  /** The same, restricted to q . m > 0 (always seamInBand / 2). */
+  magnusPlus: number;
+  /** The same, restricted to q . m < 0 (always seamInBand / 2). */
+  magnusMinus: number;
+  /** Asymmetry vector's component along a (unit-sphere length). */
+  alongAxis: number;
+  /** Asymmetry vector's component along m (exactly 0, see the header). */
+  alongMagnus: number;
+  /** |asymmetry vector|. */
+  magnitude: number;
+}
+
+export function emptyAverages(): BandAverages {
+  return { seamInBand: 0, axisPlus: 0, axisMinus: 0, magnusPlus: 0, magnusMinus: 0, alongAxis: 0, alongMagnus: 0, magnitude: 0 };
+}
+
+/** arccos of x clamped to [-1, 1]. */
+function acosClamped(x: number): number {
+  return x <= -1 ? Math.PI : x >= 1 ? 0 : Math.acos(x);
+}
+
+/** sqrt(1 - x^2) for x clamped to [-1, 1]. */
+function sinOfAcos(x: number): number {
+  return x <= -1 || x >= 1 ? 0 : Math.sqrt(1 - x * x);
+}
+
+/**
+ * Exact turn-averaged band occupancy for one spin axis.
+ * @param seam arc-length samples of the seam (ball frame)
+ * @param wx,wy,wz unit spin axis in the ball frame (positive end by the right-hand rule)
+ * @param gyroRad gyro angle, |gyro| < pi/2; positive when the axis's positive end leans toward the flight direction
+ * @param band separation band
+ * @param out result record, overwritten and returned
+ */
+export function bandAveragesExact(
+  seam: SeamSamples,
+  wx: number,
+  wy: number,
+  wz: number,
+  gyroRad: number,
+  band: Band,
+  out: BandAverages = emptyAverages(),
+): BandAverages {
+  const pts = seam.points;
+  const n = seam.count;
+  const s = Math.sin(gyroRad);
+  const k = Math.cos(gyroRad);
+  const cosHi = Math.cos(band.centerRad - band.widthRad / 2); // upper limit of q . v
+  const cosLo = Math.cos(band.centerRad + band.widthRad / 2); // lower limit of q . v
+  const invPi = 1 / Math.PI;
+  let inBand = 0;
+  let plus = 0;
+  let minus = 0;
+  let axisMoment = 0; // sum of turn-averaged q . a over in-band time
+  for (let i = 0; i < n; i++) {
+    const qx = pts[3 * i];
+    const qy = pts[3 * i + 1];
+    const qz = pts[3 * i + 2];
+    const qw = qx * wx + qy * wy + qz * wz;
+    const rho2 = 1 - qw * qw;
+    const rho = rho2 > 0 ? Math.sqrt(rho2) : 0;
+    const r = k * rho;
+    const centre = s * qw;
+    if (r < ON_AXIS) {
+      if (centre >= cosLo && centre <= cosHi) {
+        const qa = qw * k;
+        inBand += 1;
+        if (qa > 0) plus += 1;
+        else if (qa < 0) minus += 1;
+        else {
+          plus += 0.5;
+          minus += 0.5;
+        }
+        axisMoment += qa;
+      }
+      continue;
+    }
+    const invR = 1 / r;
+    const lower = (cosLo - centre) * invR;
+    const upper = (cosHi - centre) * invR;
+    if (lower >= 1 || upper <= -1) continue;
+    const aLower = acosClamped(lower);
+    const aUpper = acosClamped(upper);
+    const share = (aLower - aUpper) * invPi;
+    const meanCos = (sinOfAcos(lower) - sinOfAcos(upper)) * invPi;
+    inBand += share;
+    // turn average of q . a over in-band phases: qw k share - s rho meanCos
+    axisMoment += qw * k * share - s * rho * meanCos;
+    // side split: q . a > 0  <=>  s rho cos(phi') < qw k
+    if (s === 0) {
+      if (qw > 0) plus += share;
+      else if (qw < 0) minus += share;
+      else {
+        plus += 0.5 * share;
+        minus += 0.5 * share;
+      }
+      continue;
+    }
+    const cut = (qw * k) / (s * rho);
+    // share with cos(phi') in [lower, min(upper, cut)]
+    const lo = lower > -1 ? lower : -1;
+    const hi = upper < 1 ? upper : 1;
+    let below = 0;
+    if (cut > lo) below = cut >= hi ? share : (aLower - acosClamped(cut)) * invPi;
+    if (s > 0) {
+      plus += below;
+      minus += share - below;
+    } else {
+      minus += below;
+      plus += share - below;
+    }
+  }
+  const w = 1 / n;
+  out.seamInBand = inBand * w;
+  out.axisPlus = plus * w;
+  out.axisMinus = minus * w;
+  out.magnusPlus = 0.5 * out.seamInBand;
+  out.magnusMinus = 0.5 * out.seamInBand;
+  out.alongAxis = -axisMoment * w;
+  out.alongMagnus = 0;
+  out.magnitude = Math.abs(out.alongAxis);
+  return out;
+}
