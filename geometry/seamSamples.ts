@@ -11,7 +11,7 @@
 import { assertSeamShape, seamPoint, seamSpeed, seamTangent } from "./seamCurve.js";
 
 /** Seam points per ball used unless the caller asks otherwise (set by the convergence study in DEVELOPERS.md). */
-export const DEFAULT_SEAM_POINTS = 1024;
+export const DEFAULT_SEAM_POINTS = 2048;
 /** Accepted range of seam point counts. */
 export const SEAM_POINTS_RANGE: readonly [number, number] = [64, 262144];
 

@@ -14,7 +14,7 @@
  */
 import { mat3, quat, vec3 } from "../../geometry/vec.js";
 import type { SeamSamples } from "../../geometry/seamSamples.js";
-import { emptyAverages, type BandAverages } from "./exact.js";
+import { emptyAverages, SPLIT_TIE, type BandAverages } from "./exact.js";
 import type { Band } from "./band.js";
 
 /**
@@ -98,14 +98,14 @@ export function bandAveragesBrute(
       const qa = m0 * x + m3 * y + m6 * z;
       const qm = -(m1 * x + m4 * y + m7 * z);
       inBand += 1;
-      if (qa > 0) stepPlus += 1;
-      else if (qa < 0) stepMinus += 1;
+      if (qa > SPLIT_TIE) stepPlus += 1;
+      else if (qa < -SPLIT_TIE) stepMinus += 1;
       else {
         stepPlus += 0.5;
         stepMinus += 0.5;
       }
-      if (qm > 0) mPlus += 1;
-      else if (qm < 0) mMinus += 1;
+      if (qm > SPLIT_TIE) mPlus += 1;
+      else if (qm < -SPLIT_TIE) mMinus += 1;
       else {
         mPlus += 0.5;
         mMinus += 0.5;

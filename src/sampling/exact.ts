@@ -27,6 +27,8 @@ import type { Band } from "./band.js";
 
 /** Below this k * rho a seam point is on the spin axis: it does not move (unit-sphere length). */
 const ON_AXIS = 1e-12;
+/** |q . a| below this counts as on the split plane: half to each side (keeps symmetric sums exact). */
+export const SPLIT_TIE = 1e-12;
 
 export interface BandAverages {
   /** Turn-averaged share of the seam length inside the band, 0..1. */
@@ -64,7 +66,7 @@ function sinOfAcos(x: number): number {
 /**
  * Exact turn-averaged band occupancy for one spin axis.
  * @param seam arc-length samples of the seam (ball frame)
- * @param wx,wy,wz unit spin axis in the ball frame (positive end by the right-hand rule)
+ * @param wx,wy,wz spin axis in the ball frame, unit length (the caller normalises), positive end by the right-hand rule
  * @param gyroRad gyro angle, |gyro| < pi/2; positive when the axis's positive end leans toward the flight direction
  * @param band separation band
  * @param out result record, overwritten and returned
@@ -102,8 +104,8 @@ export function bandAveragesExact(
       if (centre >= cosLo && centre <= cosHi) {
         const qa = qw * k;
         inBand += 1;
-        if (qa > 0) plus += 1;
-        else if (qa < 0) minus += 1;
+        if (qa > SPLIT_TIE) plus += 1;
+        else if (qa < -SPLIT_TIE) minus += 1;
         else {
           plus += 0.5;
           minus += 0.5;
@@ -125,8 +127,8 @@ export function bandAveragesExact(
     axisMoment += qw * k * share - s * rho * meanCos;
     // side split: q . a > 0  <=>  s rho cos(phi') < qw k
     if (s === 0) {
-      if (qw > 0) plus += share;
-      else if (qw < 0) minus += share;
+      if (qw > SPLIT_TIE) plus += share;
+      else if (qw < -SPLIT_TIE) minus += share;
       else {
         plus += 0.5 * share;
         minus += 0.5 * share;

@@ -1,0 +1,29 @@
+#!/usr/bin/env node
+/** The `seam-atlas` command: parse, validate, call the library, write. */
+import yargs from "yargs";
+import { hideBin } from "yargs/helpers";
+import { TOOL_VERSION } from "../version.js";
+import { exitWithError, InputError } from "./errors.js";
+import { registerLandmarks } from "./landmarks.js";
+import { registerMeasure } from "./measure.js";
+
+export async function main(args: string[]): Promise<void> {
+  let cli = yargs(args)
+    .scriptName("seam-atlas")
+    .usage("$0 <command> [options]\n\nSeam-orientation geometry: where the spin axis pierces the ball, how much seam sits in the separation band through a turn, and the seam-shifted-wake push that follows.")
+    .version(TOOL_VERSION)
+    .strict()
+    .demandCommand(1, "give a command: measure or landmarks (see --help)")
+    .recommendCommands()
+    .wrap(Math.min(110, process.stdout.columns || 100))
+    .fail((msg, err) => {
+      // yargs' own complaints (unknown option, missing value) are input errors too
+      if (err) throw err;
+      throw new InputError(msg.replace(/\s+/g, " ").trim());
+    });
+  cli = registerMeasure(cli);
+  cli = registerLandmarks(cli);
+  await cli.parseAsync();
+}
+
+main(hideBin(process.argv)).catch(exitWithError);
