@@ -18,8 +18,8 @@ export async function main(args: string[]): Promise<void> {
     .wrap(Math.min(110, process.stdout.columns || 100))
     .fail((msg, err) => {
       // yargs' own complaints (unknown option, missing value) are input errors too
-      if (err) throw err;
-      throw new InputError(msg.replace(/\s+/g, " ").trim());
+      if (err && err.name !== "YError") throw err;
+      throw new InputError((msg ?? err?.message ?? "bad command line").replace(/\s+/g, " ").trim());
     });
   cli = registerMeasure(cli);
   cli = registerLandmarks(cli);

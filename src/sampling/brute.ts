@@ -85,18 +85,18 @@ export function bandAveragesBrute(
     quat.setAxisAngle(turn, wf, (2 * Math.PI * j) / steps);
     quat.multiply(q, turn, q0);
     mat3.fromQuat(m, q);
-    // row 0 gives q . a (a = x), row 1 gives -(q . m) (m = -y), row 2 gives q . v
     const m0 = m[0], m1 = m[1], m2 = m[2], m3 = m[3], m4 = m[4], m5 = m[5], m6 = m[6], m7 = m[7], m8 = m[8];
     let stepPlus = 0;
     let stepMinus = 0;
     for (let i = 0; i < n; i++) {
+      // rotate the seam point into the flow frame, then test it
       const x = pts[3 * i];
       const y = pts[3 * i + 1];
       const z = pts[3 * i + 2];
-      const qv = m2 * x + m5 * y + m8 * z;
+      const qa = m0 * x + m3 * y + m6 * z; // q . a, a = +x
+      const qm = -(m1 * x + m4 * y + m7 * z); // q . m, m = -y
+      const qv = m2 * x + m5 * y + m8 * z; // q . v, v = +z
       if (qv < cosLo || qv > cosHi) continue;
-      const qa = m0 * x + m3 * y + m6 * z;
-      const qm = -(m1 * x + m4 * y + m7 * z);
       inBand += 1;
       if (qa > SPLIT_TIE) stepPlus += 1;
       else if (qa < -SPLIT_TIE) stepMinus += 1;

@@ -27,6 +27,17 @@ import type { Band } from "./band.js";
 
 /** Below this k * rho a seam point is on the spin axis: it does not move (unit-sphere length). */
 const ON_AXIS = 1e-12;
+/** Samples between fresh arccos evaluations in the carried-angle recurrence. */
+const RESEED = 32;
+/**
+ * Largest arcsin argument taken by the series x + x^3/6 + 3x^5/40 + 15x^7/336 + 105x^9/3456
+ * (Abramowitz & Stegun 4.4.40); the first omitted term is below 1e-18 for |x| < 0.01.
+ */
+const SMALL_STEP = 0.01;
+const ASIN3 = 1 / 6;
+const ASIN5 = 3 / 40;
+const ASIN7 = 15 / 336;
+const ASIN9 = 105 / 3456;
 /** |q . a| below this counts as on the split plane: half to each side (keeps symmetric sums exact). */
 export const SPLIT_TIE = 1e-12;
 
@@ -58,11 +69,6 @@ function acosClamped(x: number): number {
   return x <= -1 ? Math.PI : x >= 1 ? 0 : Math.acos(x);
 }
 
-/** sqrt(1 - x^2) for x clamped to [-1, 1]. */
-function sinOfAcos(x: number): number {
-  return x <= -1 || x >= 1 ? 0 : Math.sqrt(1 - x * x);
-}
-
 /**
  * Exact turn-averaged band occupancy for one spin axis.
  * @param seam arc-length samples of the seam (ball frame)
@@ -87,10 +93,14 @@ export function bandAveragesExact(
   const cosHi = Math.cos(band.centerRad - band.widthRad / 2); // upper limit of q . v
   const cosLo = Math.cos(band.centerRad + band.widthRad / 2); // lower limit of q . v
   const invPi = 1 / Math.PI;
+  const kkOverS = s !== 0 ? (k * k) / s : 0; // cut = qw k / (s rho) = qw (k^2 / s) / (k rho)
   let inBand = 0;
   let plus = 0;
   let minus = 0;
   let axisMoment = 0; // sum of turn-averaged q . a over in-band time
+  // carried arccos state for the two band limits (see the loop)
+  let prevLower = 0, prevSLower = 0, prevALower = 0, runLower = 0;
+  let prevUpper = 0, prevSUpper = 0, prevAUpper = 0, runUpper = 0;
   for (let i = 0; i < n; i++) {
     const qx = pts[3 * i];
     const qy = pts[3 * i + 1];
@@ -101,6 +111,8 @@ export function bandAveragesExact(
     const r = k * rho;
     const centre = s * qw;
     if (r < ON_AXIS) {
+      runLower = 0;
+      runUpper = 0;
       if (centre >= cosLo && centre <= cosHi) {
         const qa = qw * k;
         inBand += 1;
@@ -117,11 +129,53 @@ export function bandAveragesExact(
     const invR = 1 / r;
     const lower = (cosLo - centre) * invR;
     const upper = (cosHi - centre) * invR;
-    if (lower >= 1 || upper <= -1) continue;
-    const aLower = acosClamped(lower);
-    const aUpper = acosClamped(upper);
+    if (lower >= 1 || upper <= -1) {
+      runLower = 0;
+      runUpper = 0;
+      continue;
+    }
+    // arccos and sqrt(1 - x^2) of the clamped limits (pi, 0 and 0, 0 at the clamps).
+    // Neighbouring seam samples have nearly equal limits, so the arccos is carried
+    // from the previous sample by the angle-difference identity
+    //   arccos x = arccos x' + arcsin(sqrt(1 - x^2) x' - x sqrt(1 - x'^2)),
+    // with a short series for the small arcsin, and taken afresh at least every
+    // RESEED samples, after any clamp, and whenever the step is not small.
+    let aLower = Math.PI;
+    let sLower = 0;
+    if (lower > -1) {
+      sLower = Math.sqrt((1 - lower) * (1 + lower));
+      const d = sLower * prevLower - lower * prevSLower;
+      if (runLower > 0 && d < SMALL_STEP && d > -SMALL_STEP) {
+        const d2 = d * d;
+        aLower = prevALower + d * (1 + d2 * (ASIN3 + d2 * (ASIN5 + d2 * (ASIN7 + d2 * ASIN9))));
+        runLower--;
+      } else {
+        aLower = Math.acos(lower);
+        runLower = RESEED;
+      }
+      prevLower = lower;
+      prevSLower = sLower;
+      prevALower = aLower;
+    } else runLower = 0;
+    let aUpper = 0;
+    let sUpper = 0;
+    if (upper < 1) {
+      sUpper = Math.sqrt((1 - upper) * (1 + upper));
+      const d = sUpper * prevUpper - upper * prevSUpper;
+      if (runUpper > 0 && d < SMALL_STEP && d > -SMALL_STEP) {
+        const d2 = d * d;
+        aUpper = prevAUpper + d * (1 + d2 * (ASIN3 + d2 * (ASIN5 + d2 * (ASIN7 + d2 * ASIN9))));
+        runUpper--;
+      } else {
+        aUpper = Math.acos(upper);
+        runUpper = RESEED;
+      }
+      prevUpper = upper;
+      prevSUpper = sUpper;
+      prevAUpper = aUpper;
+    } else runUpper = 0;
     const share = (aLower - aUpper) * invPi;
-    const meanCos = (sinOfAcos(lower) - sinOfAcos(upper)) * invPi;
+    const meanCos = (sLower - sUpper) * invPi;
     inBand += share;
     // turn average of q . a over in-band phases: qw k share - s rho meanCos
     axisMoment += qw * k * share - s * rho * meanCos;
@@ -135,7 +189,7 @@ export function bandAveragesExact(
       }
       continue;
     }
-    const cut = (qw * k) / (s * rho);
+    const cut = qw * kkOverS * invR;
     // share with cos(phi') in [lower, min(upper, cut)]
     const lo = lower > -1 ? lower : -1;
     const hi = upper < 1 ? upper : 1;
