@@ -159,3 +159,27 @@ export function orbitRepresentatives(grid: SphereGrid): Int32Array {
   }
   return rep;
 }
+
+/**
+ * The cells that touch cell `index`: its two ring neighbours and, in each adjacent
+ * ring, the cells whose longitude spans meet its own (writes into `out`, returns the count).
+ */
+export function gridNeighbours(grid: SphereGrid, index: number, out: Int32Array): number {
+  const rings = grid.ringCount.length;
+  const i = grid.ring[index];
+  const j = grid.slot[index];
+  const n = grid.ringCount[i];
+  let count = 0;
+  out[count++] = grid.ringStart[i] + ((j + 1) % n);
+  out[count++] = grid.ringStart[i] + ((j + n - 1) % n);
+  const lon0 = j / n;
+  const lon1 = (j + 1) / n;
+  for (const ni of [i - 1, i + 1]) {
+    if (ni < 0 || ni >= rings) continue;
+    const m = grid.ringCount[ni];
+    const first = Math.floor(lon0 * m);
+    const last = Math.ceil(lon1 * m) - 1;
+    for (let s = first; s <= last && count < out.length; s++) out[count++] = grid.ringStart[ni] + (((s % m) + m) % m);
+  }
+  return count;
+}

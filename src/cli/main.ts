@@ -6,6 +6,7 @@ import { TOOL_VERSION } from "../version.js";
 import { exitWithError, InputError } from "./errors.js";
 import { registerLandmarks } from "./landmarks.js";
 import { registerMeasure } from "./measure.js";
+import { registerScreen } from "./screen.js";
 
 export async function main(args: string[]): Promise<void> {
   let cli = yargs(args)
@@ -13,7 +14,7 @@ export async function main(args: string[]): Promise<void> {
     .usage("$0 <command> [options]\n\nSeam-orientation geometry: where the spin axis pierces the ball, how much seam sits in the separation band through a turn, and the seam-shifted-wake push that follows.")
     .version(TOOL_VERSION)
     .strict()
-    .demandCommand(1, "give a command: measure or landmarks (see --help)")
+    .demandCommand(1, "give a command: measure, screen or landmarks (see --help)")
     .recommendCommands()
     .wrap(Math.min(110, process.stdout.columns || 100))
     .fail((msg, err) => {
@@ -22,6 +23,7 @@ export async function main(args: string[]): Promise<void> {
       throw new InputError((msg ?? err?.message ?? "bad command line").replace(/\s+/g, " ").trim());
     });
   cli = registerMeasure(cli);
+  cli = registerScreen(cli);
   cli = registerLandmarks(cli);
   await cli.parseAsync();
 }

@@ -1,0 +1,245 @@
+/**
+ * Pitches from the command line or from a pitch file, checked field by field and
+ * converted once to SI and radians.
+ *
+ * Pitch file (JSON, our format): either one pitch
+ *   { "name": "sinker", "pitcher": "Iris Talvela", "hand": "right", "speedMph": 92,
+ *     "spinRpm": 2150, "tilt": "1:45", "view": "pitcher", "gyroDeg": 10, "want": "arm" }
+ * or a staff
+ *   { "team": "...", "pitchers": [ { "name": "Iris Talvela", "hand": "right",
+ *       "pitches": [ { "name": "sinker", "speedMph": 92, ... } ] } ] }
+ * where each pitch takes the pitcher's name and hand. `efficiencyPct` may replace
+ * `gyroDeg` (then the gyro is taken positive). `view` defaults to "pitcher", `want`
+ * to "any", `gyroDeg` to 0.
+ */
+import { readFileSync } from "node:fs";
+import { parseClock, clockToAngle, gyroFromEfficiency } from "../../geometry/frames.js";
+import { DEG } from "../../geometry/vec.js";
+import {
+  assertPitch,
+  HANDS,
+  MPH_TO_M_PER_S,
+  RPM_TO_RAD_PER_S,
+  SPEED_RANGE_MPH,
+  SPIN_RANGE_RPM,
+  VIEWS,
+  WANTS,
+  type Pitch,
+} from "../screening/pitch.js";
+import { InputError } from "./errors.js";
+import { parseJsonWithLines, type LocatedJson } from "./jsonLines.js";
+import { parseNumber } from "./parse.js";
+
+/** A pitch with the numbers as the user gave them (for echoing). */
+export interface PitchInput {
+  readonly pitch: Pitch;
+  readonly echo: {
+    name: string;
+    pitcher: string;
+    hand: string;
+    speedMph: number;
+    spinRpm: number;
+    tilt: string;
+    view: string;
+    gyroDeg: number;
+    efficiencyPct: number;
+    want: string;
+  };
+}
+
+const PITCH_FIELDS = ["name", "pitcher", "hand", "speedMph", "spinRpm", "tilt", "view", "gyroDeg", "efficiencyPct", "want"];
+const OTHER_UNITS: Record<string, string> = {
+  speed: "speedMph (mph)",
+  speedKph: "speedMph (mph)",
+  speedKmh: "speedMph (mph)",
+  speedMps: "speedMph (mph)",
+  speedMPerS: "speedMph (mph)",
+  spin: "spinRpm (rpm)",
+  spinRps: "spinRpm (rpm)",
+  spinRadPerS: "spinRpm (rpm)",
+  gyro: "gyroDeg (degrees)",
+  gyroRad: "gyroDeg (degrees)",
+  efficiency: "efficiencyPct (percent)",
+  tiltDeg: "tilt (a clock reading such as \"1:45\")",
+  tiltRad: "tilt (a clock reading such as \"1:45\")",
+};
+
+interface RawPitch {
+  [key: string]: unknown;
+}
+
+/** Builds and checks one pitch; `where(field)` names the field's place for messages. */
+function buildPitch(raw: RawPitch, where: (field: string) => string): PitchInput {
+  for (const key of Object.keys(raw)) {
+    if (PITCH_FIELDS.includes(key)) continue;
+    if (OTHER_UNITS[key]) throw new InputError(`${where(key)}: field "${key}" is not read; give ${OTHER_UNITS[key]}`);
+    throw new InputError(`${where(key)}: unknown field "${key}"; expected ${PITCH_FIELDS.join(", ")}`);
+  }
+  const text = (field: string, fallback?: string): string => {
+    const v = raw[field];
+    if (v === undefined) {
+      if (fallback !== undefined) return fallback;
+      throw new InputError(`${where(field)}: field "${field}" is missing`);
+    }
+    if (typeof v !== "string") throw new InputError(`${where(field)}: "${field}" must be text, got ${JSON.stringify(v)}`);
+    return v;
+  };
+  const num = (field: string, unit: string, fallback?: number): number => {
+    const v = raw[field];
+    if (v === undefined) {
+      if (fallback !== undefined) return fallback;
+      throw new InputError(`${where(field)}: field "${field}" is missing (a number of ${unit})`);
+    }
+    if (typeof v !== "number" || !Number.isFinite(v)) throw new InputError(`${where(field)}: "${field}" must be a number of ${unit}, got ${JSON.stringify(v)}`);
+    return v;
+  };
+  const oneOf = (field: string, allowed: readonly string[], fallback?: string): string => {
+    const v = text(field, fallback);
+    if (!allowed.includes(v)) throw new InputError(`${where(field)}: "${field}" is "${v}"; expected one of ${allowed.join(", ")}`);
+    return v;
+  };
+  const speedMph = num("speedMph", "mph");
+  if (!(speedMph >= SPEED_RANGE_MPH[0] && speedMph <= SPEED_RANGE_MPH[1])) {
+    throw new InputError(`${where("speedMph")}: speedMph ${speedMph} is outside ${SPEED_RANGE_MPH[0]} to ${SPEED_RANGE_MPH[1]} mph`);
+  }
+  const spinRpm = num("spinRpm", "rpm");
+  if (!(spinRpm >= SPIN_RANGE_RPM[0] && spinRpm <= SPIN_RANGE_RPM[1])) {
+    throw new InputError(`${where("spinRpm")}: spinRpm ${spinRpm} is outside ${SPIN_RANGE_RPM[0]} to ${SPIN_RANGE_RPM[1]} rpm`);
+  }
+  const tilt = text("tilt");
+  let tiltRad: number;
+  try {
+    tiltRad = clockToAngle(parseClock(tilt));
+  } catch (err) {
+    throw new InputError(`${where("tilt")}: ${(err as Error).message}`);
+  }
+  if (raw.gyroDeg !== undefined && raw.efficiencyPct !== undefined) {
+    throw new InputError(`${where("efficiencyPct")}: give gyroDeg or efficiencyPct, not both`);
+  }
+  let gyroDeg: number;
+  let efficiencyPct: number;
+  if (raw.efficiencyPct !== undefined) {
+    efficiencyPct = num("efficiencyPct", "percent");
+    if (!(efficiencyPct > 0 && efficiencyPct <= 100)) throw new InputError(`${where("efficiencyPct")}: efficiencyPct ${efficiencyPct} must be above 0 and at most 100 percent`);
+    gyroDeg = gyroFromEfficiency(efficiencyPct / 100) / DEG;
+  } else {
+    gyroDeg = num("gyroDeg", "degrees", 0);
+    if (!(gyroDeg > -90 && gyroDeg < 90)) throw new InputError(`${where("gyroDeg")}: gyroDeg ${gyroDeg} must be strictly between -90 and 90 degrees`);
+    efficiencyPct = 100 * Math.cos(gyroDeg * DEG);
+  }
+  const echo = {
+    name: text("name", "pitch"),
+    pitcher: text("pitcher", ""),
+    hand: oneOf("hand", HANDS),
+    speedMph,
+    spinRpm,
+    tilt,
+    view: oneOf("view", VIEWS, "pitcher"),
+    gyroDeg,
+    efficiencyPct,
+    want: oneOf("want", WANTS, "any"),
+  };
+  const pitch: Pitch = {
+    name: echo.name,
+    pitcher: echo.pitcher,
+    hand: echo.hand as Pitch["hand"],
+    speedMPerS: speedMph * MPH_TO_M_PER_S,
+    spinRadPerS: spinRpm * RPM_TO_RAD_PER_S,
+    tiltRad,
+    view: echo.view as Pitch["view"],
+    gyroRad: gyroDeg * DEG,
+    want: echo.want as Pitch["want"],
+  };
+  assertPitch(pitch);
+  return { pitch, echo };
+}
+
+export interface PitchFlags {
+  hand?: string;
+  speed?: string;
+  spin?: string;
+  tilt?: string;
+  view?: string;
+  gyro?: string;
+  efficiency?: string;
+  want?: string;
+  name?: string;
+}
+
+/** One pitch from flags. */
+export function pitchFromFlags(f: PitchFlags): PitchInput {
+  const missing = (["hand", "speed", "spin", "tilt"] as const).filter((k) => f[k] === undefined);
+  if (missing.length) throw new InputError(`--${missing[0]} is missing; a pitch needs --hand, --speed, --spin and --tilt (or --pitch FILE)`);
+  if (f.gyro !== undefined && f.efficiency !== undefined) throw new InputError(`give --gyro or --efficiency, not both`);
+  const raw: RawPitch = {
+    name: f.name ?? "pitch",
+    hand: f.hand,
+    speedMph: parseNumber("speed", f.speed, "mph"),
+    spinRpm: parseNumber("spin", f.spin, "rpm"),
+    tilt: f.tilt,
+    view: f.view ?? "pitcher",
+    want: f.want ?? "any",
+  };
+  if (f.gyro !== undefined) raw.gyroDeg = parseNumber("gyro", f.gyro, "degrees");
+  if (f.efficiency !== undefined) raw.efficiencyPct = parseNumber("efficiency", f.efficiency, "percent");
+  const flagOf: Record<string, string> = { speedMph: "speed", spinRpm: "spin", gyroDeg: "gyro", efficiencyPct: "efficiency" };
+  return buildPitch(raw, (field) => `--${flagOf[field] ?? field}`);
+}
+
+export interface PitchFile {
+  readonly team?: string;
+  readonly pitches: PitchInput[];
+}
+
+/** All pitches of a pitch file (one pitch or a staff). */
+export function pitchesFromFile(path: string): PitchFile {
+  let text: string;
+  try {
+    text = readFileSync(path, "utf8");
+  } catch (err) {
+    throw new InputError(`--pitch ${path}: cannot read the file (${(err as NodeJS.ErrnoException).code ?? "error"})`);
+  }
+  const doc: LocatedJson = parseJsonWithLines(text, path);
+  const at = (p: string) => {
+    const line = doc.lineOf(p);
+    return `${path}${line ? ` line ${line}` : ""} (${p || "top level"})`;
+  };
+  const v = doc.value;
+  if (typeof v !== "object" || v === null || Array.isArray(v)) throw new InputError(`${at("")}: expected a pitch or a staff object`);
+  const obj = v as Record<string, unknown>;
+  if (!("pitchers" in obj)) return { pitches: [buildPitch(obj, (f) => at(f))] };
+  for (const key of Object.keys(obj)) {
+    if (key !== "team" && key !== "pitchers") throw new InputError(`${at(key)}: unknown field "${key}" in a staff; expected team, pitchers`);
+  }
+  if (!Array.isArray(obj.pitchers) || obj.pitchers.length === 0) throw new InputError(`${at("pitchers")}: "pitchers" must be a non-empty list`);
+  const pitches: PitchInput[] = [];
+  obj.pitchers.forEach((pr, i) => {
+    const base = `pitchers[${i}]`;
+    if (typeof pr !== "object" || pr === null || Array.isArray(pr)) throw new InputError(`${at(base)}: each pitcher must be an object`);
+    const pitcher = pr as Record<string, unknown>;
+    for (const key of Object.keys(pitcher)) {
+      if (!["name", "hand", "pitches"].includes(key)) throw new InputError(`${at(`${base}.${key}`)}: unknown field "${key}" for a pitcher; expected name, hand, pitches`);
+    }
+    if (typeof pitcher.name !== "string" || pitcher.name.trim() === "") throw new InputError(`${at(`${base}.name`)}: each pitcher needs a "name"`);
+    if (!Array.isArray(pitcher.pitches) || pitcher.pitches.length === 0) throw new InputError(`${at(`${base}.pitches`)}: "pitches" must be a non-empty list`);
+    pitcher.pitches.forEach((raw, j) => {
+      const pbase = `${base}.pitches[${j}]`;
+      if (typeof raw !== "object" || raw === null || Array.isArray(raw)) throw new InputError(`${at(pbase)}: each pitch must be an object`);
+      const merged: RawPitch = { pitcher: pitcher.name, ...(pitcher.hand !== undefined ? { hand: pitcher.hand } : {}), ...(raw as RawPitch) };
+      pitches.push(buildPitch(merged, (f) => at(f in (raw as RawPitch) ? `${pbase}.${f}` : f === "hand" ? `${base}.hand` : pbase)));
+    });
+  });
+  return { team: typeof obj.team === "string" ? obj.team : undefined, pitches };
+}
+
+/** Picks pitches by name ("sinker" or "Iris Talvela/sinker"); throws listing the names when none match. */
+export function selectPitches(file: PitchFile, selector: string | undefined, source: string): PitchInput[] {
+  if (selector === undefined) return file.pitches;
+  const key = selector.trim().toLowerCase();
+  const label = (p: PitchInput) => (p.echo.pitcher ? `${p.echo.pitcher}/${p.echo.name}` : p.echo.name);
+  const found = file.pitches.filter((p) => label(p).toLowerCase() === key || p.echo.name.toLowerCase() === key);
+  if (found.length === 0) {
+    throw new InputError(`--pitch-name "${selector}" is not in ${source}; expected one of ${file.pitches.map(label).join(", ")}`);
+  }
+  return found;
+}

@@ -1,0 +1,101 @@
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { runCli } from "./run.js";
+
+const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-screen-"));
+const SINKER = ["--hand", "right", "--speed", "92", "--spin", "2150", "--tilt", "1:45", "--gyro", "10", "--want", "arm"];
+
+describe("seam-atlas screen", () => {
+  it("prints JSON with candidates, references, grid and the echo of the inputs", () => {
+    const r = runCli(["screen", ...SINKER, "--top", "3", "--json", "--grid", "4"]);
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.grid.spacingDeg).toBe(4);
+    expect(j.grid.count).toBeGreaterThan(2000);
+    expect(j.input.pitch).toMatchObject({ hand: "right", speedMph: 92, spinRpm: 2150, tilt: "1:45", view: "pitcher", gyroDeg: 10, want: "arm" });
+    expect(j.candidates.length).toBeGreaterThanOrEqual(1);
+    for (const c of [...j.candidates, ...j.references]) {
+      for (const k of ["axis", "latLon", "landmark", "score", "push", "crossingsPerRevolution", "robustness", "fingers"]) expect(c).toHaveProperty(k);
+      expect(c.push).toHaveProperty("clock");
+      expect(c.push).toHaveProperty("armSide");
+      expect(c.push).toHaveProperty("up");
+      expect(c.robustness).toHaveProperty("mean");
+      expect(c.robustness).toHaveProperty("p10");
+      expect(c.fingers.map((f: { finger: string }) => f.finger)).toEqual(["index", "middle", "thumb"]);
+    }
+    expect(j.references.map((x: { reference: string }) => x.reference)).toEqual(["four-seam", "two-seam"]);
+  });
+
+  it("gives the same numbers in CSV, the table and JSON", () => {
+    const j = JSON.parse(runCli(["screen", ...SINKER, "--grid", "4", "--json"]).stdout);
+    const csv = runCli(["screen", ...SINKER, "--grid", "4", "--csv"]).stdout.trim().split("\n");
+    expect(csv[0].split(",")).toContain("score");
+    const first = csv[1].split(",");
+    const col = csv[0].split(",").indexOf("score");
+    expect(Number(first[col])).toBe(j.candidates[0].score);
+    const table = runCli(["screen", ...SINKER, "--grid", "4"]).stdout;
+    expect(table).toContain((1000 * j.candidates[0].score).toFixed(2));
+  });
+
+  it("screens the demo staff from its file and writes the sphere maps, one per pitch", () => {
+    const dir = join(tmp, "maps");
+    const r = runCli(["screen", "--demo", "--grid", "6", "--top", "2", "--json", "--map", dir]);
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.pitches.length).toBe(6);
+    const m = JSON.parse(readFileSync(join(dir, "iris-talvela-sinker.json"), "utf8"));
+    expect(m.cells.length).toBe(m.count);
+    expect(m.columns).toContain("score");
+  });
+
+  it("selects one pitch of a staff by name", () => {
+    const j = JSON.parse(runCli(["screen", "--demo", "--pitch-name", "Luz Arrieta/curveball", "--grid", "6", "--json"]).stdout);
+    expect(j.pitches).toHaveLength(1);
+    expect(j.pitches[0].input.pitch.hand).toBe("left");
+  });
+
+  const write = (name: string, text: string) => {
+    const p = join(tmp, name);
+    writeFileSync(p, text);
+    return p;
+  };
+  const staff = (pitch: string) => `{\n  "pitchers": [\n    {\n      "name": "A. Tester",\n      "hand": "right",\n      "pitches": [\n        ${pitch}\n      ]\n    }\n  ]\n}\n`;
+  const badFiles: [string, string, RegExp][] = [
+    ["malformed JSON", `{\n  "pitchers": [\n    { "name": "x", }\n  ]\n}`, /malformed JSON at line 3/],
+    ["a missing field", staff(`{ "name": "sinker", "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedMph" is missing/],
+    ["wrong units", staff(`{ "name": "sinker", "speedKph": 148, "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedKph" is not read; give speedMph \(mph\)/],
+    ["a number as text", staff(`{ "name": "sinker", "speedMph": "92 mph", "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedMph" must be a number of mph/],
+    ["a bad tilt", staff(`{ "name": "sinker", "speedMph": 92, "spinRpm": 2150, "tilt": "13:45" }`), /line 7 .*tilt "13:45"/],
+    ["an unknown hand", `{ "name": "x", "hand": "both", "speedMph": 92, "spinRpm": 2150, "tilt": "1:45" }`, /line 1 .*"hand" is "both"; expected one of right, left/],
+  ];
+  for (const [what, text, message] of badFiles) {
+    it(`rejects a pitch file with ${what}: one line naming the field and line, exit 2`, () => {
+      const out = join(tmp, `out-${what.replace(/\W+/g, "-")}.json`);
+      const r = runCli(["screen", "--pitch", write(`${what.replace(/\W+/g, "-")}.json`, text), "--out", out]);
+      expect(r.code).toBe(2);
+      expect(r.stderr).toMatch(message);
+      expect(r.stderr.trim().split("\n")).toHaveLength(1);
+      expect(existsSync(out)).toBe(false);
+    });
+  }
+
+  const badFlags: [string, string[], RegExp][] = [
+    ["a missing spin", ["--hand", "right", "--speed", "92", "--tilt", "1:45"], /--spin is missing/],
+    ["an unknown hand", ["--hand", "both", "--speed", "92", "--spin", "2150", "--tilt", "1:45"], /"hand" is "both"/],
+    ["a speed out of range", ["--hand", "right", "--speed", "200", "--spin", "2150", "--tilt", "1:45"], /speedMph 200 is outside 30 to 110 mph/],
+    ["gyro and efficiency together", [...SINKER, "--efficiency", "90"], /--gyro or --efficiency, not both/],
+    ["an unknown pitch name", ["--demo", "--pitch-name", "knuckler"], /--pitch-name "knuckler" is not in .*expected one of/],
+    ["a bad rank", [...SINKER, "--rank", "best"], /--rank "best" is not one of blend, strength, robust/],
+    ["a missing pitch file", ["--pitch", "/nonexistent/staff.json"], /cannot read the file \(ENOENT\)/],
+  ];
+  for (const [what, args, message] of badFlags) {
+    it(`rejects ${what}: one line, exit 2`, () => {
+      const r = runCli(["screen", ...args]);
+      expect(r.code).toBe(2);
+      expect(r.stderr).toMatch(message);
+      expect(r.stderr.trim().split("\n")).toHaveLength(1);
+    });
+  }
+});
