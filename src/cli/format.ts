@@ -24,17 +24,7 @@ export function table(rows: readonly (readonly [string, string])[], indent = "  
   return rows.map(([k, v]) => `${indent}${k.padEnd(width)}  ${v}`).join("\n");
 }
 
-export function percent(x: number, digits = 2): string {
-  return `${(100 * x).toFixed(digits)} %`;
-}
 
-export function signed(x: number, digits = 5): string {
-  const s = fixed(x, digits);
-  return s.startsWith("-") ? s : `+${s}`;
-}
 
-/** toFixed without a minus sign on values that round to zero. */
-export function fixed(x: number, digits: number): string {
-  const s = x.toFixed(digits);
-  return /^-0\.?0*$/.test(s) ? s.slice(1) : s;
-}
+
+export { fixed, percent, signed } from "../screening/numbers.js";

@@ -8,7 +8,8 @@ import { DEFAULT_SPREAD_DEG } from "../screening/robustness.js";
 import { DEFAULT_GRID_SPACING_DEG, DEFAULT_TOP, RANKS, screenPitch, type RankBy } from "../screening/screen.js";
 import { projectRoot, TOOL_NAME, TOOL_VERSION } from "../version.js";
 import { InputError } from "./errors.js";
-import { fixed, signed } from "./format.js";
+import { formatScore } from "../screening/numbers.js";
+import { fixed } from "./format.js";
 import { parseSamplerSettings, withSamplerOptions } from "./measure.js";
 import { parseInteger, parseNumber, assertOneOf } from "./parse.js";
 import { pitchesFromFile, pitchFromFlags, selectPitches, type PitchInput } from "./pitchInput.js";
@@ -173,9 +174,7 @@ export function screenCsv(reports: readonly ScreenReport[]): string {
 const WANT_WORDS: Record<string, string> = { arm: "toward the arm side", glove: "toward the glove side", up: "up", down: "down", any: "any direction" };
 
 /** Score and push numbers in the one rounding used on screen and on paper. */
-export function fmtScore(x: number): string {
-  return signed(1000 * x, 2);
-}
+export const fmtScore = formatScore;
 
 function fingerWords(o: OrientationReport): string {
   return o.fingers
