@@ -16,6 +16,12 @@ import { computeSphereMap } from "../sampling/sphereMap.js";
 import { projectRoot, TOOL_VERSION } from "../version.js";
 import { pitchesFromFile } from "../cli/pitchInput.js";
 import { screenPitch } from "../screening/screen.js";
+import { Explainer } from "../physics/explain.js";
+import { simulateFlight } from "../physics/flight.js";
+import { releasePosition, releaseVelocity } from "../physics/launch.js";
+import { airState } from "../physics/air.js";
+import { seamForceHook } from "../physics/seamForce.js";
+import { spinVector } from "../physics/pitchFlight.js";
 
 const BRUTE_STEPS = 720;
 
@@ -102,6 +108,25 @@ function main(): void {
   const tStaff = performance.now();
   for (const p of staff) screenPitch(p.pitch);
   const staffSeconds = (performance.now() - tStaff) / 1000;
+  // flight: one full pitch with drag, Magnus and the seam-force hook
+  const sinker = staff[1].pitch;
+  const air = airState();
+  const launch = { releasePositionM: releasePosition({ hand: sinker.hand }), releaseVelocityMPerS: releaseVelocity(sinker.speedMPerS, -DEG, 0.02), spinRadPerS: spinVector(sinker) };
+  const hook = seamForceHook({ axis: [0, 0, 1], gyroRad: sinker.gyroRad, coefficient: { alongAxis: 0.01, alongMagnus: 0.005, magnitude: 0.0112 } });
+  const flightsPerSecond = rate(() => {
+    for (let i = 0; i < 50; i++) sink += simulateFlight(launch, { air, seamForce: hook }).timeToPlateS;
+    return 50;
+  }, 2);
+  // explain: 3,000 tracked pitches with gyro angles spread over -20 to 45 deg (maps included)
+  const explainer = new Explainer();
+  const rows = 3000;
+  const t1 = performance.now();
+  for (let i = 0; i < rows; i++) {
+    const g = (-20 + (65 * ((i * 0.618034) % 1))) * DEG;
+    const e = explainer.explain({ pitch: { ...sinker, gyroRad: g }, observedArmSideM: 0.42, observedUpM: 0.3 });
+    sink += e.residualArmSideM;
+  }
+  const explainRowsPerSecond = rows / ((performance.now() - t1) / 1000);
   const mem = process.memoryUsage();
   const result = {
     tool: "seam-atlas",
@@ -125,6 +150,8 @@ function main(): void {
       staffSeconds: Math.round(staffSeconds * 1000) / 1000,
       staffPitches: staff.length,
     },
+    flight: { pitchesPerSecond: Math.round(flightsPerSecond) },
+    explain: { rowsPerSecond: Math.round(explainRowsPerSecond), rows },
     memory: { rssMB: Math.round(mem.rss / 1e5) / 10, heapUsedMB: Math.round(mem.heapUsed / 1e5) / 10 },
   };
   if (!Number.isFinite(sink)) throw new Error("benchmark produced a non-finite sum");
@@ -145,6 +172,8 @@ function main(): void {
       `  full-sphere map      ${result.sphereMap.seconds} s (best of 3) for ${result.sphereMap.cells.toLocaleString("en-US")} axes at 1 deg (${result.sphereMap.evaluated.toLocaleString("en-US")} evaluated, the rest by symmetry; target <= 2 s)`,
       `  screen, one pitch    ${result.screen.seconds} s (default settings, best of 3; target <= 3 s)`,
       `  screen, demo staff   ${result.screen.staffSeconds} s for ${result.screen.staffPitches} pitches`,
+      `  flight               ${result.flight.pitchesPerSecond.toLocaleString("en-US")} pitches/s (RK4, 1 ms steps, drag, Magnus, seam force; target >= 2,000)`,
+      `  explain              ${result.explain.rowsPerSecond} rows/s over ${rows} rows with varied gyro (target >= 200)`,
       `  memory               ${result.memory.rssMB} MB resident`,
       `  written to out/bench.json`,
     ].join("\n") + "\n",

@@ -7,6 +7,8 @@ import { exitWithError, InputError } from "./errors.js";
 import { registerLandmarks } from "./landmarks.js";
 import { registerMeasure } from "./measure.js";
 import { registerScreen } from "./screen.js";
+import { registerFlight } from "./flight.js";
+import { registerExplain } from "./explain.js";
 
 export async function main(args: string[]): Promise<void> {
   let cli = yargs(args)
@@ -14,7 +16,7 @@ export async function main(args: string[]): Promise<void> {
     .usage("$0 <command> [options]\n\nSeam-orientation geometry: where the spin axis pierces the ball, how much seam sits in the separation band through a turn, and the seam-shifted-wake push that follows.")
     .version(TOOL_VERSION)
     .strict()
-    .demandCommand(1, "give a command: measure, screen or landmarks (see --help)")
+    .demandCommand(1, "give a command: measure, screen, flight, explain or landmarks (see --help)")
     .recommendCommands()
     .wrap(Math.min(110, process.stdout.columns || 100))
     .fail((msg, err) => {
@@ -24,6 +26,8 @@ export async function main(args: string[]): Promise<void> {
     });
   cli = registerMeasure(cli);
   cli = registerScreen(cli);
+  cli = registerFlight(cli);
+  cli = registerExplain(cli);
   cli = registerLandmarks(cli);
   await cli.parseAsync();
 }

@@ -64,12 +64,12 @@ const OTHER_UNITS: Record<string, string> = {
   tiltRad: "tilt (a clock reading such as \"1:45\")",
 };
 
-interface RawPitch {
+export interface RawPitch {
   [key: string]: unknown;
 }
 
 /** Builds and checks one pitch; `where(field)` names the field's place for messages. */
-function buildPitch(raw: RawPitch, where: (field: string) => string): PitchInput {
+export function buildPitch(raw: RawPitch, where: (field: string) => string): PitchInput {
   for (const key of Object.keys(raw)) {
     if (PITCH_FIELDS.includes(key)) continue;
     if (OTHER_UNITS[key]) throw new InputError(`${where(key)}: field "${key}" is not read; give ${OTHER_UNITS[key]}`);
