@@ -133,8 +133,20 @@ function angleToArc(p: Readonly<Vec3>, a: Vec3, b: Vec3): number {
   return Math.min(angleBetween(p, a), angleBetween(p, b));
 }
 
-/** Computes every landmark of the seam with shape `b`. */
-export function findLandmarks(b: number): Landmark[] {
+const landmarkCache = new Map<number, readonly Landmark[]>();
+
+/** Every landmark of the seam with shape `b` (computed once per shape, then shared: do not modify). */
+export function findLandmarks(b: number): readonly Landmark[] {
+  let found = landmarkCache.get(b);
+  if (!found) {
+    found = Object.freeze(computeLandmarks(b));
+    if (landmarkCache.size > 16) landmarkCache.clear();
+    landmarkCache.set(b, found);
+  }
+  return found;
+}
+
+function computeLandmarks(b: number): Landmark[] {
   const out: Landmark[] = [];
   const dt = (2 * Math.PI) / SCAN;
   const z = (t: number) => point(b, t)[2];
