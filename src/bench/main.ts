@@ -21,7 +21,11 @@ import { simulateFlight } from "../physics/flight.js";
 import { releasePosition, releaseVelocity } from "../physics/launch.js";
 import { airState } from "../physics/air.js";
 import { seamForceHook } from "../physics/seamForce.js";
-import { spinVector } from "../physics/pitchFlight.js";
+import { seamMovementIn, spinVector } from "../physics/pitchFlight.js";
+import { renderAtlasPdf } from "../render/paper/atlas.js";
+import { loadLayout } from "../render/paper/layouts.js";
+import { screenReport } from "../screening/report.js";
+import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG } from "../sampling/band.js";
 
 const BRUTE_STEPS = 720;
 
@@ -69,7 +73,7 @@ function bestRates(a: () => number, b: () => number, rounds: number, secondsEach
   return [bestA, bestB];
 }
 
-function main(): void {
+async function main(): Promise<void> {
   const json = process.argv.includes("--json");
   const seam = seamFor(DEFAULT_SEAM_SHAPE, DEFAULT_SEAM_POINTS);
   const gyro = 10 * DEG;
@@ -127,6 +131,16 @@ function main(): void {
     sink += e.residualArmSideM;
   }
   const explainRowsPerSecond = rows / ((performance.now() - t1) / 1000);
+  // the demo staff's atlas, as `seam-atlas atlas --demo` makes it (default settings, top 4)
+  const tAtlas = performance.now();
+  const atlasPitches = staff.map((p) => {
+    const result = screenPitch(p.pitch, { top: 4 });
+    const report = screenReport(result, p.echo, DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG);
+    const movements = [...result.candidates, ...result.references].map((o) => seamMovementIn(p.pitch, o.axis));
+    return { result, report, movements };
+  });
+  const atlas = await renderAtlasPdf({ layout: loadLayout(join(projectRoot(), "templates", "layouts"), "atlas-letter"), pitches: atlasPitches, band: DEFAULT_BAND, seamShape: DEFAULT_SEAM_SHAPE });
+  const atlasSeconds = (performance.now() - tAtlas) / 1000;
   const mem = process.memoryUsage();
   const result = {
     tool: "seam-atlas",
@@ -151,6 +165,7 @@ function main(): void {
       staffPitches: staff.length,
     },
     flight: { pitchesPerSecond: Math.round(flightsPerSecond) },
+    atlas: { seconds: Math.round(atlasSeconds * 100) / 100, pages: atlas.pages, bytes: atlas.bytes.length },
     explain: { rowsPerSecond: Math.round(explainRowsPerSecond), rows },
     memory: { rssMB: Math.round(mem.rss / 1e5) / 10, heapUsedMB: Math.round(mem.heapUsed / 1e5) / 10 },
   };
@@ -174,10 +189,14 @@ function main(): void {
       `  screen, demo staff   ${result.screen.staffSeconds} s for ${result.screen.staffPitches} pitches`,
       `  flight               ${result.flight.pitchesPerSecond.toLocaleString("en-US")} pitches/s (RK4, 1 ms steps, drag, Magnus, seam force; target >= 2,000)`,
       `  explain              ${result.explain.rowsPerSecond} rows/s over ${rows} rows with varied gyro (target >= 200)`,
+      `  atlas, demo staff    ${result.atlas.seconds} s, ${result.atlas.pages} pages (target <= 15 s)`,
       `  memory               ${result.memory.rssMB} MB resident`,
       `  written to out/bench.json`,
     ].join("\n") + "\n",
   );
 }
 
-main();
+main().catch((err) => {
+  process.stderr.write(`benchmark failed: ${(err as Error).message}\n`);
+  process.exit(1);
+});

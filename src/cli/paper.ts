@@ -1,8 +1,7 @@
 /** `seam-atlas card`, `atlas` and `handout`: the printed outputs. */
 import { join } from "node:path";
 import type { Argv } from "yargs";
-import { flyPitch, toArmSide } from "../physics/pitchFlight.js";
-import { M_PER_IN } from "../physics/units.js";
+import { seamMovementIn } from "../physics/pitchFlight.js";
 import { renderAtlasPdf, type AtlasPitch } from "../render/paper/atlas.js";
 import { cardContent, cardOrigins, drawCard } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
@@ -36,9 +35,8 @@ function layoutOf(name: string, kinds: readonly string[]): Layout {
 
 /** Seam-induced movement of an orientation at the plate, inches (standard air, aimed at the zone). */
 export function seamMovement(result: ScreenResult, o: ScreenedOrientation): SeamMovement {
-  const f = flyPitch({ pitch: result.pitch, axisBall: o.axis, seamForce: { band: result.settings.band, seamShape: result.settings.seamShape, seamPoints: result.settings.seamPoints } });
-  const m = toArmSide(f.movement.seamBreakM.xM, f.movement.seamBreakM.zM, result.pitch.hand);
-  return { armSideIn: m.armSideM / M_PER_IN, upIn: m.upM / M_PER_IN };
+  const s = result.settings;
+  return seamMovementIn(result.pitch, o.axis, { band: s.band, seamShape: s.seamShape, seamPoints: s.seamPoints });
 }
 
 function outputPath(argv: Record<string, unknown>, fallback: string): string {

@@ -25,7 +25,7 @@ import {
   type SeamForceModel,
   type SeamForceParams,
 } from "./seamForce.js";
-import { M_PER_FT } from "./units.js";
+import { M_PER_FT, M_PER_IN } from "./units.js";
 
 /** Where an aimed pitch crosses the front of the plate: the middle of a typical zone, m. */
 export const ZONE_CENTRE_M: readonly [number, number] = [0, 2.5 * M_PER_FT];
@@ -145,4 +145,11 @@ export function flyPitch(input: PitchFlightInput): PitchFlight {
 export function toArmSide(xM: number, zM: number, hand: Pitch["hand"]): { armSideM: number; upM: number } {
   // arm side is -x for a right-hander, +x for a left-hander (geometry/frames.ts)
   return { armSideM: hand === "right" ? -xM : xM, upM: zM };
+}
+
+/** The seam part of the movement at the plate, inches toward the arm side and up (standard air unless given, aimed at the zone). */
+export function seamMovementIn(pitch: Pitch, axisBall: Readonly<Vec3>, seamForce: SeamForceParams = {}, air?: AirConditions): { armSideIn: number; upIn: number } {
+  const f = flyPitch({ pitch, axisBall, seamForce, air });
+  const m = toArmSide(f.movement.seamBreakM.xM, f.movement.seamBreakM.zM, pitch.hand);
+  return { armSideIn: m.armSideM / M_PER_IN, upIn: m.upM / M_PER_IN };
 }
