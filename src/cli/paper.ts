@@ -14,7 +14,7 @@ import { projectRoot } from "../version.js";
 import { InputError } from "./errors.js";
 import { withSamplerOptions } from "./measure.js";
 import { parseInteger } from "./parse.js";
-import { runScreens, withPitchOptions, withScreenOptions } from "./screen.js";
+import { pitchesFromArgs, runScreens, withPitchOptions, withScreenOptions } from "./screen.js";
 import { writeAtomic } from "./writeAtomic.js";
 
 export function layoutsDir(): string {
@@ -29,7 +29,8 @@ function layoutOf(name: string, kinds: readonly string[]): Layout {
     if (err instanceof LayoutError) throw new InputError(err.message);
     throw err;
   }
-  if (!kinds.includes(layout.kind)) throw new InputError(`--layout ${name} is a ${layout.kind} layout; this command takes a ${kinds.join(" or ")} layout`);
+  const a = (k: string) => (/^[aeiou]/.test(k) ? `an ${k}` : `a ${k}`);
+  if (!kinds.includes(layout.kind)) throw new InputError(`--layout ${name} is ${a(layout.kind)} layout; this command takes ${a(kinds.join(" or "))} layout`);
   return layout;
 }
 
@@ -108,6 +109,8 @@ async function runCard(argv: Record<string, unknown>): Promise<void> {
   if (n < 1) throw new InputError(`--candidate ${n} is out of range; expected 1 or more`);
   const cardLayout = layout.kind === "card" ? layout : layout.card!;
   const perPage = layout.kind === "card" ? 1 : layout.grid!.columns * layout.grid!.rows;
+  const count = pitchesFromArgs(argv).pitches.length;
+  if (count !== 1) throw new InputError(`card takes one pitch; the file has ${count} (choose one with --pitch-name, or use atlas)`);
   const { results, sampler } = runScreens(argv, Math.max(n, perPage));
   if (results.length !== 1) throw new InputError(`card takes one pitch; the file has ${results.length} (choose one with --pitch-name, or use atlas)`);
   const { result, report } = results[0];
