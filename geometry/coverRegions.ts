@@ -11,6 +11,7 @@
  */
 import { angleToSeam, findLandmarks, type Landmark } from "./landmarks.js";
 import { sampleSeam, type SeamSamples } from "./seamSamples.js";
+import { signedTriangleSum } from "./sphereArea.js";
 import { angleBetween, type Vec3 } from "./vec.js";
 
 export type CoverHalf = "A" | "B";
@@ -26,21 +27,6 @@ export interface CoverRegion {
   readonly seamDistanceRad: number;
 }
 
-function signedSolidAngle(pts: Float64Array, p: Readonly<Vec3>): number {
-  const n = pts.length / 3;
-  const [px, py, pz] = p;
-  let sum = 0;
-  for (let i = 0; i < n; i++) {
-    const j = (i + 1) % n;
-    const ax = pts[3 * i], ay = pts[3 * i + 1], az = pts[3 * i + 2];
-    const bx = pts[3 * j], by = pts[3 * j + 1], bz = pts[3 * j + 2];
-    const det = px * (ay * bz - az * by) + py * (az * bx - ax * bz) + pz * (ax * by - ay * bx);
-    const den = 1 + px * ax + py * ay + pz * az + px * bx + py * by + pz * bz + ax * bx + ay * by + az * bz;
-    sum += 2 * Math.atan2(det, den);
-  }
-  return sum;
-}
-
 /** Precomputed seam and landmarks for region queries on a seam of shape b. */
 export interface CoverModel {
   readonly seam: SeamSamples;
@@ -50,12 +36,12 @@ export interface CoverModel {
 
 export function coverModel(b: number, seamPoints = 4096): CoverModel {
   const seam = sampleSeam(b, seamPoints);
-  return { seam, landmarks: findLandmarks(b), signA: Math.sign(signedSolidAngle(seam.points, [0, 0, -1])) };
+  return { seam, landmarks: findLandmarks(b), signA: Math.sign(signedTriangleSum(seam.points, [0, 0, -1])) };
 }
 
 /** The half holding unit point p. */
 export function coverHalf(model: CoverModel, p: Readonly<Vec3>): CoverHalf {
-  return Math.sign(signedSolidAngle(model.seam.points, [-p[0], -p[1], -p[2]])) === model.signA ? "A" : "B";
+  return Math.sign(signedTriangleSum(model.seam.points, [-p[0], -p[1], -p[2]])) === model.signA ? "A" : "B";
 }
 
 /**

@@ -11,6 +11,13 @@ import type { Vec3 } from "./vec.js";
 
 /** Area (steradians) of the region on the left of the closed polyline `pts` (flat unit points), seen from outside. */
 export function enclosedArea(pts: Float64Array, apex: Readonly<Vec3>): number {
+  const full = 4 * Math.PI;
+  const sum = signedTriangleSum(pts, apex);
+  return ((sum % full) + full) % full;
+}
+
+/** The raw sum of the signed triangle areas (p, q_i, q_i+1), before reduction modulo 4 pi. */
+export function signedTriangleSum(pts: Float64Array, apex: Readonly<Vec3>): number {
   const n = pts.length / 3;
   const [px, py, pz] = apex;
   let sum = 0;
@@ -26,6 +33,5 @@ export function enclosedArea(pts: Float64Array, apex: Readonly<Vec3>): number {
     comp = t - sum - y;
     sum = t;
   }
-  const full = 4 * Math.PI;
-  return ((sum % full) + full) % full;
+  return sum;
 }

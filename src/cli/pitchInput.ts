@@ -26,6 +26,7 @@ import {
   WANTS,
   type Pitch,
 } from "../screening/pitch.js";
+import type { PitchEcho } from "../screening/report.js";
 import { InputError } from "./errors.js";
 import { parseJsonWithLines, type LocatedJson } from "./jsonLines.js";
 import { parseNumber } from "./parse.js";
@@ -33,18 +34,7 @@ import { parseNumber } from "./parse.js";
 /** A pitch with the numbers as the user gave them (for echoing). */
 export interface PitchInput {
   readonly pitch: Pitch;
-  readonly echo: {
-    name: string;
-    pitcher: string;
-    hand: string;
-    speedMph: number;
-    spinRpm: number;
-    tilt: string;
-    view: string;
-    gyroDeg: number;
-    efficiencyPct: number;
-    want: string;
-  };
+  readonly echo: PitchEcho;
 }
 
 const PITCH_FIELDS = ["name", "pitcher", "hand", "speedMph", "spinRpm", "tilt", "view", "gyroDeg", "efficiencyPct", "want"];
