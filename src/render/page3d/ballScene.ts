@@ -1,0 +1,180 @@
+/// <reference lib="dom" />
+/**
+ * The WebGL scene: field frame at the root (drawn y-up, see sceneMath.ts), the flow
+ * frame inside it (band, flight, spin axis, push, all fixed), and the ball inside
+ * the flow frame, turned by its pose at the current phase.
+ */
+import { AmbientLight, DirectionalLight, Group, Mesh, PerspectiveCamera, Quaternion, Scene, Vector3, WebGLRenderer, type Object3D } from "three";
+import type { SeamSamples } from "../../../geometry/seamSamples.js";
+import type { Stitches } from "../../../geometry/stitches.js";
+import type { Vec3 } from "../../../geometry/vec.js";
+import type { Band } from "../../sampling/band.js";
+import { coverMesh, seamTube, stitchMesh, type SeamTube } from "./ballMeshes.js";
+import type { FieldFrameVectors } from "./data.js";
+import { aimArrow, arrowMesh, bandGroup, labelSprite } from "./overlays.js";
+import { hexToInt, PALETTE } from "./palette.js";
+import { BallPose, FIELD_TO_WORLD, flowSpinAxis, flowToFieldQuaternion } from "./sceneMath.js";
+
+/** Where the arrows start and how long they are, unit-ball lengths. */
+const ARROW_GAP = 1.04;
+const FLIGHT_LENGTH = 0.8;
+const SPIN_HALF_LENGTH = 1.5;
+const PUSH_MIN_LENGTH = 0.25;
+const PUSH_SPAN_LENGTH = 0.65;
+/** Side labels: distance from the centre and azimuth off the a line about v. */
+const SIDE_LABEL_RADIUS = 1.26;
+const SIDE_LABEL_AZIMUTH_RAD = (40 * Math.PI) / 180;
+/** The push arrow's start: azimuth off the a line about v, radians. */
+const PUSH_AZIMUTH_RAD = (32 * Math.PI) / 180;
+/** |alongAxis| below this draws no push arrow: there is no direction to show (asymmetry units). */
+const NO_PUSH = 1e-12;
+
+/** Frees the GPU buffers of everything under `root` (geometries, materials, textures) once it leaves the scene. */
+function dispose(root: Object3D): void {
+  root.traverse((o) => {
+    if (o instanceof Mesh) {
+      o.geometry.dispose();
+      for (const m of Array.isArray(o.material) ? o.material : [o.material]) m.dispose();
+    }
+  });
+}
+
+/** Thrown when the browser gives no WebGL 2 context. */
+export class NoWebGLError extends Error {}
+
+/** Whether the browser hands out a WebGL 2 context (the probe's context is released at once). */
+function hasWebGL2(doc: Document): boolean {
+  try {
+    const gl = doc.createElement("canvas").getContext("webgl2");
+    gl?.getExtension("WEBGL_lose_context")?.loseContext();
+    return gl !== null;
+  } catch {
+    return false;
+  }
+}
+
+export class BallScene {
+  readonly renderer: WebGLRenderer;
+  readonly camera = new PerspectiveCamera(34, 1, 0.1, 60);
+  private readonly scene = new Scene();
+  private readonly flow = new Group();
+  private readonly ball = new Group();
+  private readonly pose = new BallPose();
+  private readonly poseScratch = new Quaternion();
+  private seam: SeamTube | null = null;
+  private geometryKey = "";
+  private band: Group | null = null;
+  private bandCenterRad = Math.PI / 2;
+  private readonly spinArrow = arrowMesh(PALETTE.spinAxis, 2 * SPIN_HALF_LENGTH, 0.014);
+  private readonly flightArrow = arrowMesh(PALETTE.flight, FLIGHT_LENGTH);
+  private pushArrow: Group | null = null;
+  private readonly spinLabel = labelSprite("spin axis", PALETTE.spinAxis);
+  private readonly flightLabel = labelSprite("flight", PALETTE.flight);
+  private readonly pushLabel = labelSprite("seam push", PALETTE.push);
+  private readonly plusLabel = labelSprite("+ side", PALETTE.sidePlus, 0.13);
+  private readonly minusLabel = labelSprite("\u2212 side", PALETTE.sideMinus, 0.13);
+
+  constructor(canvas: HTMLCanvasElement) {
+    // asked first on a spare canvas, so a browser without WebGL 2 gets our message and no console error from three.js
+    if (!hasWebGL2(canvas.ownerDocument)) throw new NoWebGLError("this browser gives no WebGL 2 context");
+    try {
+      // preserveDrawingBuffer: the picture stays readable after each frame (saving it, the page tests)
+      this.renderer = new WebGLRenderer({ canvas, antialias: true, preserveDrawingBuffer: true });
+    } catch (err) {
+      throw new NoWebGLError((err as Error).message);
+    }
+    this.renderer.setClearColor(hexToInt(PALETTE.background), 1);
+    const field = new Group();
+    field.quaternion.copy(FIELD_TO_WORLD);
+    field.add(this.flow);
+    this.flow.add(this.ball, this.spinArrow, this.flightArrow, this.spinLabel, this.flightLabel, this.pushLabel, this.plusLabel, this.minusLabel);
+    this.scene.add(field, new AmbientLight(0xffffff, 0.9));
+    // the key light rides with the camera so the side you look at is always lit
+    const key = new DirectionalLight(0xffffff, 2.2);
+    key.position.set(2, 3, 4);
+    this.camera.add(key);
+    this.scene.add(this.camera);
+    aimArrow(this.flightArrow, new Vector3(0, 0, ARROW_GAP), new Vector3(0, 0, 1));
+    this.flightLabel.position.set(0.06, 0, ARROW_GAP + FLIGHT_LENGTH + 0.08);
+  }
+
+  /** The ball's meshes and the band, rebuilt only when the seam or the band changes. */
+  setGeometry(seam: SeamSamples, stitches: Stitches, band: Band): void {
+    const key = `${seam.shape}/${seam.count}/${band.centerRad}/${band.widthRad}`;
+    if (key === this.geometryKey) return;
+    this.geometryKey = key;
+    for (const child of [...this.ball.children]) {
+      this.ball.remove(child);
+      dispose(child);
+    }
+    this.seam = seamTube(seam);
+    this.ball.add(coverMesh(), this.seam.mesh, stitchMesh(stitches));
+    if (this.band) {
+      this.flow.remove(this.band);
+      dispose(this.band);
+    }
+    this.band = bandGroup(band);
+    this.flow.add(this.band);
+    // side labels sit on the band centre line, turned off the a line so the spin axis and push do not cover them
+    const r = SIDE_LABEL_RADIUS * Math.sin(band.centerRad);
+    const z = SIDE_LABEL_RADIUS * Math.cos(band.centerRad);
+    this.plusLabel.position.set(r * Math.cos(SIDE_LABEL_AZIMUTH_RAD), -r * Math.sin(SIDE_LABEL_AZIMUTH_RAD), z);
+    this.minusLabel.position.set(-r * Math.cos(SIDE_LABEL_AZIMUTH_RAD), -r * Math.sin(SIDE_LABEL_AZIMUTH_RAD), z);
+    this.bandCenterRad = band.centerRad;
+  }
+
+  /** Places the flow frame in the field for a pitch and aims the spin axis. */
+  setPitch(frame: FieldFrameVectors, gyroRad: number): void {
+    flowToFieldQuaternion(frame, this.flow.quaternion);
+    const w = flowSpinAxis(gyroRad);
+    aimArrow(this.spinArrow, w.clone().multiplyScalar(-SPIN_HALF_LENGTH), w);
+    this.spinLabel.position.copy(w.clone().multiplyScalar(SPIN_HALF_LENGTH + 0.06));
+  }
+
+  /**
+   * Sets the orientation shown: the ball-frame spin axis, the gyro, and the push
+   * (`alongAxis` in asymmetry units, drawn along +-a with a length relative to `pushScale`).
+   */
+  setOrientation(axis: Readonly<Vec3>, gyroRad: number, alongAxis: number, pushScale: number): void {
+    this.pose.setOrientation(axis, gyroRad);
+    if (this.pushArrow) {
+      this.flow.remove(this.pushArrow);
+      dispose(this.pushArrow);
+    }
+    this.pushArrow = null;
+    this.pushLabel.visible = Math.abs(alongAxis) > NO_PUSH;
+    if (!this.pushLabel.visible) return;
+    const length = PUSH_MIN_LENGTH + PUSH_SPAN_LENGTH * Math.min(1, Math.abs(alongAxis) / Math.max(pushScale, NO_PUSH));
+    const side = Math.sign(alongAxis);
+    const direction = new Vector3(side, 0, 0);
+    // from the band's centre line on the side it points to, turned off the a line (towards flow +y, away from the
+    // side labels) so that it stands clear of the spin axis, which leaves the ball close to +-a
+    const ring = Math.sin(this.bandCenterRad);
+    const start = new Vector3(side * ring * Math.cos(PUSH_AZIMUTH_RAD), ring * Math.sin(PUSH_AZIMUTH_RAD), Math.cos(this.bandCenterRad)).multiplyScalar(ARROW_GAP);
+    this.pushArrow = arrowMesh(PALETTE.push, length, 0.03);
+    aimArrow(this.pushArrow, start, direction);
+    this.flow.add(this.pushArrow);
+    this.pushLabel.position.copy(start).addScaledVector(direction, length + 0.06).add(new Vector3(0, 0, -0.12));
+  }
+
+  /** Turns the ball to phase `phiRad` (radians) of its revolution. */
+  setPhase(phiRad: number): void {
+    this.ball.quaternion.copy(this.pose.at(phiRad, this.poseScratch));
+  }
+
+  /** Colours the seam by each sample's band state (liveShare.ts). */
+  setSeamStates(states: Uint8Array): void {
+    this.seam?.setStates(states);
+  }
+
+  resize(widthPx: number, heightPx: number, pixelRatio: number): void {
+    this.renderer.setPixelRatio(pixelRatio);
+    this.renderer.setSize(widthPx, heightPx, false);
+    this.camera.aspect = widthPx / Math.max(1, heightPx);
+    this.camera.updateProjectionMatrix();
+  }
+
+  render(): void {
+    this.renderer.render(this.scene, this.camera);
+  }
+}

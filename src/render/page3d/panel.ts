@@ -1,0 +1,90 @@
+/// <reference lib="dom" />
+/**
+ * The side panel's words and numbers, written into the page's elements. Every
+ * figure is taken from the embedded screen report and printed with the terminal's
+ * rules (numbers.ts), so the page and `seam-atlas screen` show the same digits.
+ */
+import type { OrientationReport, ScreenReport } from "../../screening/report.js";
+import type { ListedOrientation } from "./data.js";
+import { fixedDigits, percentText, thousandthsText } from "./numbers.js";
+
+const WANT_WORDS: Record<string, string> = { arm: "toward the arm side", glove: "toward the glove side", up: "up", down: "down", any: "any direction" };
+
+/** The pitch in one sentence, in the terminal table's words. */
+export function pitchSummary(report: ScreenReport): string {
+  const p = report.input.pitch;
+  const s = report.input.settings;
+  return (
+    `${p.hand === "right" ? "RHP" : "LHP"}: ${fixedDigits(p.speedMph, 1)} mph, ${fixedDigits(p.spinRpm, 0)} rpm, tilt ${p.tilt} from behind the ${p.view}, ` +
+    `gyro ${fixedDigits(p.gyroDeg, 1)} deg (spin efficiency ${fixedDigits(p.efficiencyPct, 1)} %); wanted push: ${WANT_WORDS[p.want] ?? p.want}. ` +
+    `The seam push acts along ${report.pushLine.clock ?? "-"} / its opposite. Band ${fixedDigits(s.bandCenterDeg - s.bandWidthDeg / 2, 1)} to ` +
+    `${fixedDigits(s.bandCenterDeg + s.bandWidthDeg / 2, 1)} deg from the stagnation point; grid ${s.gridSpacingDeg} deg, ranked by ${s.rank}.`
+  );
+}
+
+/** The fingers as the terminal table words them. */
+export function fingerText(o: OrientationReport): string {
+  return o.fingers
+    .map((f) => `${f.finger} ${fixedDigits(f.seamDistanceIn, 2)} in from seam (${f.region.part === "seam" ? "on the seam" : f.region.near})`)
+    .join("; ");
+}
+
+/** The displayed figures of one orientation, keyed as the page's data-field attributes. */
+export function orientationFigures(o: OrientationReport): [field: string, label: string, value: string][] {
+  return [
+    ["score", "Score", thousandthsText(o.score)],
+    ["push-clock", "Push (clock, same view)", o.push.clock ?? "-"],
+    ["arm-side", "Push toward arm side", thousandthsText(o.push.armSide)],
+    ["up", "Push up", thousandthsText(o.push.up)],
+    ["crossings", "Seam crossings per turn", String(o.crossingsPerRevolution)],
+    ["robust-mean", "Robustness: mean", thousandthsText(o.robustness.mean)],
+    ["robust-p10", "Robustness: 10th percentile", thousandthsText(o.robustness.p10)],
+    ["axis", "Axis on the ball", o.latLon.text],
+    ["landmark", "Nearest landmark", `${o.landmark.name} ${fixedDigits(o.landmark.angleDeg, 0)} deg`],
+    ["seam-in-band", "Seam in band, turn average", percentText(o.seamInBand)],
+    ["fingers", "Fingers", fingerText(o)],
+  ];
+}
+
+/** Fills the <dl> with the orientation's figures. */
+export function renderFigures(dl: HTMLElement, o: OrientationReport): void {
+  const doc = dl.ownerDocument;
+  dl.replaceChildren();
+  for (const [field, label, value] of orientationFigures(o)) {
+    const dt = doc.createElement("dt");
+    dt.textContent = label;
+    const dd = doc.createElement("dd");
+    dd.dataset.field = field;
+    dd.textContent = value;
+    // sentences read better across the whole panel than squeezed into the number column
+    if (field === "fingers") dt.className = dd.className = "wide";
+    dl.append(dt, dd);
+  }
+}
+
+/** The list of orientations as pressable buttons; the chosen one is aria-pressed. */
+export function renderOrientationList(ul: HTMLElement, listed: readonly ListedOrientation[], chosen: number, onChoose: (index: number) => void): void {
+  const doc = ul.ownerDocument;
+  ul.replaceChildren();
+  listed.forEach((item, index) => {
+    const li = doc.createElement("li");
+    const button = doc.createElement("button");
+    button.type = "button";
+    button.dataset.index = String(index);
+    button.setAttribute("aria-pressed", String(index === chosen));
+    const name = doc.createElement("span");
+    name.textContent = `${item.label}  ${item.orientation.latLon.text}`;
+    const what = doc.createElement("span");
+    what.className = "what";
+    what.textContent = `score ${thousandthsText(item.orientation.score)}`;
+    button.append(name, what);
+    button.addEventListener("click", () => onChoose(index));
+    li.append(button);
+    ul.append(li);
+  });
+}
+
+/** Moves the pressed state to `chosen` without rebuilding the list (keeps keyboard focus where it is). */
+export function markChosen(ul: HTMLElement, chosen: number): void {
+  for (const button of ul.querySelectorAll("button")) button.setAttribute("aria-pressed", String(button.dataset.index === String(chosen)));
+}

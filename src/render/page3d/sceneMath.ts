@@ -1,0 +1,64 @@
+/**
+ * Where the ball and the flow sit in the 3-D scene (pure maths on three.js types, no DOM).
+ *
+ * Three frames, from the inside out:
+ *   ball frame   the seam curve's axes (geometry/seamCurve.ts);
+ *   flow frame   src/sampling/brute.ts: v = +z the flight direction, a = +x the push
+ *                line, w = (k, 0, s) the spin axis, m = -y; the ball turns by +phi
+ *                about w, and at phi = 0 the stagnation point sits on its path at the
+ *                point nearest the ball's +z pole (`ballToFlowAtPhaseZero`);
+ *   field frame  geometry/frames.ts: x toward the catcher's right, y toward the
+ *                pitcher, z up.
+ * three.js draws with +y up, so the scene's root turns the field frame by -90 deg
+ * about x: field (x, y, z) is drawn at (x, z, -y).
+ */
+import { Matrix4, Quaternion, Vector3 } from "three";
+import { unit3, type Vec3 } from "../../../geometry/vec.js";
+import { ballToFlowAtPhaseZero } from "../../sampling/brute.js";
+import type { FieldFrameVectors } from "./data.js";
+
+/** The rotation that draws the field frame in three.js's y-up world. */
+export const FIELD_TO_WORLD = new Quaternion().setFromAxisAngle(new Vector3(1, 0, 0), -Math.PI / 2);
+
+/** Field direction to three.js world direction. */
+export function fieldToWorld(v: Readonly<Vec3>): Vector3 {
+  return new Vector3(v[0], v[2], -v[1]);
+}
+
+/**
+ * The rotation taking flow-frame vectors to the field frame: a to the push line,
+ * v to the flight direction, and -m (flow +y) to minus the Magnus direction.
+ * Proper because a x (-m) = v holds in both frames (m = a x v).
+ */
+export function flowToFieldQuaternion(frame: FieldFrameVectors, out: Quaternion = new Quaternion()): Quaternion {
+  const [a, m, v] = [frame.pushLine, frame.magnus, frame.flight];
+  const basis = new Matrix4().makeBasis(new Vector3(a[0], a[1], a[2]), new Vector3(-m[0], -m[1], -m[2]), new Vector3(v[0], v[1], v[2]));
+  return out.setFromRotationMatrix(basis);
+}
+
+/** The flow-frame spin axis w = (cos gyro, 0, sin gyro). */
+export function flowSpinAxis(gyroRad: number): Vector3 {
+  return new Vector3(Math.cos(gyroRad), 0, Math.sin(gyroRad));
+}
+
+/** The ball's attitude in the flow frame through the turn: q(phi) = turn(w, phi) q0. */
+export class BallPose {
+  private readonly q0 = new Quaternion();
+  private readonly spin = new Vector3(1, 0, 0);
+  private readonly turn = new Quaternion();
+
+  /** Sets the ball-frame spin axis (any non-zero length) and the gyro angle, radians. */
+  setOrientation(axis: Readonly<Vec3>, gyroRad: number): void {
+    const w = unit3(axis);
+    const q = ballToFlowAtPhaseZero(w[0], w[1], w[2], gyroRad);
+    // gl-matrix and three.js both order quaternions [x, y, z, w]
+    this.q0.set(q[0], q[1], q[2], q[3]);
+    this.spin.copy(flowSpinAxis(gyroRad));
+  }
+
+  /** Ball-to-flow rotation at phase `phiRad` (radians); writes into and returns `out`. */
+  at(phiRad: number, out: Quaternion = new Quaternion()): Quaternion {
+    this.turn.setFromAxisAngle(this.spin, phiRad);
+    return out.multiplyQuaternions(this.turn, this.q0);
+  }
+}
