@@ -4,6 +4,7 @@ import { angleToClock, directionToClockAngle, formatClock } from "../../geometry
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
 import { DEG, unit3, type Vec3 } from "../../geometry/vec.js";
 import type { AirConditions } from "../physics/air.js";
+import type { DragModel } from "../physics/drag.js";
 import { flyPitch, toArmSide, type PitchFlight } from "../physics/pitchFlight.js";
 import { M_PER_FT, M_PER_IN } from "../physics/units.js";
 import { formatMovementIn, fixed } from "../screening/numbers.js";
@@ -73,6 +74,9 @@ export function registerFlight(y: Argv): Argv {
             .option("extension-ft", { type: "string", default: "6", describe: "release extension in front of the rubber, ft", requiresArg: true })
             .option("vertical-angle", { type: "string", describe: "launch angle above level, deg (with --horizontal-angle; default: aim at the middle of the zone)", requiresArg: true })
             .option("horizontal-angle", { type: "string", describe: "launch angle toward the catcher's right, deg", requiresArg: true })
+            .option("drag", { type: "string", default: "giordano", describe: "drag model: giordano (Giordano & Nakanishi's speed-dependent fit, scaled to the air's density) or constant", requiresArg: true })
+            .option("drag-coefficient", { type: "string", describe: "C_D for --drag constant [default: 0.35]", requiresArg: true })
+            .option("spin-decay-s", { type: "string", describe: "spin decays as exp(-t / TAU), TAU in seconds [default: no decay]", requiresArg: true })
             .option("seam-scale", { type: "string", default: "1", describe: "calibration factor on the seam force, 0 to 10", requiresArg: true })
             .option("json", { type: "boolean", default: false, describe: "print JSON" })
             .option("out", { type: "string", describe: "also write the JSON to this file", requiresArg: true })
@@ -135,8 +139,24 @@ function runFlight(argv: Record<string, unknown>): void {
   }
   const scale = parseNumber("seam-scale", argv["seam-scale"], "a factor from 0 to 10");
   if (!(scale >= 0 && scale <= 10)) throw new InputError(`--seam-scale ${scale} is out of range; expected 0 to 10`);
+  const dragName = String(argv.drag);
+  if (dragName !== "giordano" && dragName !== "constant") throw new InputError(`--drag "${dragName}" is not one of giordano, constant`);
+  if (argv["drag-coefficient"] !== undefined && dragName !== "constant") throw new InputError(`--drag-coefficient goes with --drag constant`);
+  let drag: DragModel = { name: "giordano" };
+  if (dragName === "constant") {
+    const cd = argv["drag-coefficient"] === undefined ? 0.35 : parseNumber("drag-coefficient", argv["drag-coefficient"], "a drag coefficient from 0 to 2");
+    if (!(cd >= 0 && cd <= 2)) throw new InputError(`--drag-coefficient ${cd} is out of range; expected 0 to 2`);
+    drag = { name: "constant", dragCoefficient: cd };
+  }
+  let spinDecayTimeConstantS: number | undefined;
+  if (argv["spin-decay-s"] !== undefined) {
+    spinDecayTimeConstantS = parseNumber("spin-decay-s", argv["spin-decay-s"], "seconds above 0");
+    if (!(spinDecayTimeConstantS > 0)) throw new InputError(`--spin-decay-s ${spinDecayTimeConstantS} must be above 0 seconds`);
+  }
   const f = flyPitch({
     pitch,
+    drag,
+    spinDecayTimeConstantS,
     axisBall: axis,
     air,
     vacuum: airMode === "none",
@@ -160,6 +180,9 @@ function runFlight(argv: Record<string, unknown>): void {
       releaseSideFt: sideFt,
       extensionFt,
       seamScale: scale,
+      drag: dragName,
+      dragCoefficient: drag.name === "constant" ? drag.dragCoefficient : null,
+      spinDecayS: spinDecayTimeConstantS ?? null,
       bandCenterDeg: sampler.bandCenterDeg,
       bandWidthDeg: sampler.bandWidthDeg,
       seamShape: sampler.seamShape,

@@ -14,6 +14,7 @@ import type { Vec3 } from "../../geometry/vec.js";
 import type { Pitch } from "../screening/pitch.js";
 import { airState, reynoldsNumber, spinFactor, type AirConditions, type AirState } from "./air.js";
 import { BALL_RADIUS_M } from "./ball.js";
+import type { DragModel } from "./drag.js";
 import { simulateFlight, type FlightOptions, type FlightResult, type Launch } from "./flight.js";
 import { releasePosition, releaseVelocity, type ReleasePoint } from "./launch.js";
 import { movementVersusSpinless, type Movement } from "./movement.js";
@@ -46,6 +47,10 @@ export interface PitchFlightInput {
   /** Launch angles, rad; when absent the pitch is aimed at ZONE_CENTRE_M. */
   readonly launch?: { readonly verticalRad: number; readonly horizontalRad: number };
   readonly seamForce?: SeamForceParams;
+  /** Drag model (drag.ts); default the Giordano-Nakanishi fit. */
+  readonly drag?: DragModel;
+  /** Exponential spin decay time constant, s; default none. */
+  readonly spinDecayTimeConstantS?: number;
 }
 
 export interface PitchFlight {
@@ -119,7 +124,13 @@ export function flyPitch(input: PitchFlightInput): PitchFlight {
   const spin = spinVector(pitch);
   const coefficient = turnAveragedSeamForceCoefficient(seamModelFor(input.seamForce), input.axisBall, pitch.gyroRad);
   const hook = seamForceHook({ axis: input.axisBall, gyroRad: pitch.gyroRad, params: input.seamForce, coefficient });
-  const options: FlightOptions = { air, seamForce: hook, vacuum: input.vacuum ?? false };
+  const options: FlightOptions = {
+    air,
+    seamForce: hook,
+    vacuum: input.vacuum ?? false,
+    ...(input.drag ? { drag: input.drag } : {}),
+    ...(input.spinDecayTimeConstantS !== undefined ? { spinDecayTimeConstantS: input.spinDecayTimeConstantS } : {}),
+  };
   const position = releasePosition({ ...input.release, hand: pitch.hand });
   const angles = input.launch ?? aimLaunch(position, pitch.speedMPerS, spin, options);
   const launch: Launch = {

@@ -131,20 +131,31 @@ export function screenReport(r: ScreenResult, echo: PitchEcho, bandCenterDeg: nu
   };
 }
 
-/** One sphere map as plain JSON: cell centres (ball frame) and per-cell numbers, rounded to 6 decimals. */
+/**
+ * One sphere map as plain JSON: cell centres (ball frame) and per-cell numbers,
+ * rounded to 6 decimals. The push of every position lies on the pitch's push line,
+ * so its clock reading is `pushClock.positive` where alongAxis > 0 and
+ * `pushClock.negative` where it is < 0; `pushArmSide` and `pushUp` are its components.
+ */
 export function sphereMapReport(r: ScreenResult) {
   const g = r.map.grid;
   const round = (x: number) => Math.round(x * 1e6) / 1e6;
+  const line = pushInField(r.frame, r.pitch.view, 1);
   const cells: number[][] = [];
   for (let i = 0; i < g.count; i++) {
-    cells.push([round(g.points[3 * i]), round(g.points[3 * i + 1]), round(g.points[3 * i + 2]), round(r.scores[i]), round(r.map.alongAxis[i]), round(r.map.seamInBand[i])]);
+    const a = r.map.alongAxis[i];
+    cells.push([
+      round(g.points[3 * i]), round(g.points[3 * i + 1]), round(g.points[3 * i + 2]), round(r.scores[i]), round(a), round(r.map.seamInBand[i]),
+      round(a * line.armSide), round(a * line.up),
+    ]);
   }
   return {
     projection: "equal-area ring grid (ball frame)",
     spacingDeg: r.settings.gridSpacingRad / DEG,
     count: g.count,
     ringCounts: Array.from(g.ringCount),
-    columns: ["x", "y", "z", "score", "alongAxis", "seamInBand"],
+    pushClock: { positive: clockText(line.clockRad), negative: clockText(pushInField(r.frame, r.pitch.view, -1).clockRad), view: r.pitch.view },
+    columns: ["x", "y", "z", "score", "alongAxis", "seamInBand", "pushArmSide", "pushUp"],
     cells,
   };
 }

@@ -38,7 +38,15 @@ describe("seam-atlas flight", () => {
     expect(JSON.parse(b.stdout).axis.latLon).toBe("0.0N,45.0E");
   });
 
+  it("selects the drag model: a larger constant C_D slows the pitch (longer time to plate), and spin decay is accepted", () => {
+    const t = (args: string[]) => JSON.parse(runCli(["flight", ...SINKER, "--axis", "lobe-B1", "--vertical-angle", "-1", "--horizontal-angle", "2", ...args, "--json"]).stdout).timeToPlateS;
+    expect(t(["--drag", "constant", "--drag-coefficient", "0.5"])).toBeGreaterThan(t(["--drag", "constant", "--drag-coefficient", "0.2"]));
+    const j = JSON.parse(runCli(["flight", ...SINKER, "--axis", "lobe-B1", "--spin-decay-s", "1.5", "--json"]).stdout);
+    expect(j.input.spinDecayS).toBe(1.5);
+  });
+
   const bad: [string, string[], RegExp][] = [
+    ["a drag coefficient without the constant model", [...SINKER, "--axis", "waist-A", "--drag-coefficient", "0.4"], /--drag-coefficient goes with --drag constant/],
     ["no axis", SINKER, /exactly one of --axis, --candidate N or --reference/],
     ["two elevations", [...SINKER, "--axis", "waist-A", "--elevation-ft", "10", "--elevation-m", "3"], /--elevation-ft or --elevation-m, not both/],
     ["humidity above 100", [...SINKER, "--axis", "waist-A", "--humidity", "140"], /--humidity 140 is out of range/],

@@ -48,6 +48,12 @@ describe("seam-atlas screen", () => {
     const m = JSON.parse(readFileSync(join(dir, "iris-talvela-sinker.json"), "utf8"));
     expect(m.cells.length).toBe(m.count);
     expect(m.columns).toContain("score");
+    // every position's push lies on the push line: arm side and up are alongAxis times the line's components
+    const ia = m.columns.indexOf("alongAxis");
+    const iarm = m.columns.indexOf("pushArmSide");
+    const big = m.cells.reduce((best: number[], c: number[]) => (Math.abs(c[ia]) > Math.abs(best[ia]) ? c : best), m.cells[0]);
+    expect(Math.sign(big[iarm])).not.toBe(0);
+    expect(m.pushClock.positive).toMatch(/^\d{1,2}:\d{2}$/);
   });
 
   it("selects one pitch of a staff by name", () => {
