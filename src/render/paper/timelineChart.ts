@@ -25,7 +25,7 @@ export interface TimelineChartOptions {
 export function renderTimelineSvg(series: readonly TimelineSeries[], o: TimelineChartOptions): string {
   const W = o.widthPx ?? 420;
   const H = o.heightPx ?? 300;
-  const left = 46, right = 12, top = 34, bottom = 58;
+  const left = 46, right = 12, top = 34, bottom = 44 + 14 * series.length;
   const draw = createSvgCanvas(W, H);
   draw.rect(W, H).attr({ fill: "#ffffff" });
   let max = 0;
@@ -36,8 +36,9 @@ export function renderTimelineSvg(series: readonly TimelineSeries[], o: Timeline
   const g = draw.group();
   addText(draw, W / 2, 18, o.title, { sizePx: 13, weight: "bold", anchor: "middle", fill: "#1b1b1b" });
   // axes and grid
-  for (let k = 0; k <= 4; k++) {
-    const v = (yMax * k) / 4;
+  const step = yMax > 0.4 ? 0.1 : 0.05;
+  for (let k = 0; k * step <= yMax + 1e-9; k++) {
+    const v = k * step;
     g.path().attr({ d: `M${left} ${y(v)}L${W - right} ${y(v)}`, stroke: "#e2ded5", "stroke-width": 1, fill: "none" });
     addText(draw, left - 6, y(v) + 4, `${Math.round(100 * v)} %`, { sizePx: 10, anchor: "end", fill: "#555555" });
   }
@@ -57,7 +58,7 @@ export function renderTimelineSvg(series: readonly TimelineSeries[], o: Timeline
     g.path().attr({ d: polylinePath(xy, false, 1), stroke: s.color, "stroke-width": 1.6, fill: "none" });
     const mean = sum / n;
     g.path().attr({ d: `M${x(0)} ${y(mean)}L${x(360)} ${y(mean)}`, stroke: s.color, "stroke-width": 1.2, "stroke-dasharray": "5 3", fill: "none" });
-    addText(draw, left + 8 + k * ((W - left - right) / 2), H - 8, `${s.label} (dashed: turn average ${(100 * mean).toFixed(1)} %)`, { sizePx: 10, fill: s.color });
+    addText(draw, left, H - bottom + 46 + 14 * k, `${s.label}; dashed: its turn average, ${(100 * mean).toFixed(1)} %`, { sizePx: 10, fill: s.color });
   });
   return serializeSvg(draw, 1, o.idPrefix ?? "tl");
 }
