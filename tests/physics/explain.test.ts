@@ -1,24 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { clockToAngle, parseClock } from "../../geometry/frames.js";
 import { latLonToVector } from "../../geometry/ballCoords.js";
 import { Explainer, EXPLAIN_MODEL } from "../../src/physics/explain.js";
 import { releasePosition } from "../../src/physics/launch.js";
 import { flyPitch, toArmSide } from "../../src/physics/pitchFlight.js";
-import type { Pitch } from "../../src/screening/pitch.js";
 import { symmetricAngle } from "../../src/screening/screen.js";
+import { sinkerPitch } from "../helpers.js";
 
 const DEG = Math.PI / 180;
-const sinker: Pitch = {
-  name: "sinker",
-  pitcher: "",
-  hand: "right",
-  speedMPerS: 92 * 0.44704,
-  spinRadPerS: (2150 * 2 * Math.PI) / 60,
-  tiltRad: clockToAngle(parseClock("1:45")),
-  view: "pitcher",
-  gyroRad: 10 * DEG,
-  want: "arm",
-};
+const sinker = sinkerPitch();
 
 describe("explain", () => {
   it("recovers a planted seam orientation from a flight the tool simulated (the planted axis, up to the ball's symmetry, is among the matches that fit within 0.1 in, within 2.5 grid spacings)", () => {

@@ -2,19 +2,10 @@ import { describe, expect, it } from "vitest";
 import { clockToAngle, parseClock } from "../../geometry/frames.js";
 import { flyPitch, spinVector, ZONE_CENTRE_M } from "../../src/physics/pitchFlight.js";
 import type { Pitch } from "../../src/screening/pitch.js";
+import { sinkerPitch } from "../helpers.js";
 
 const DEG = Math.PI / 180;
-const fastball: Pitch = {
-  name: "four-seam",
-  pitcher: "",
-  hand: "right",
-  speedMPerS: 94 * 0.44704,
-  spinRadPerS: (2350 * 2 * Math.PI) / 60,
-  tiltRad: clockToAngle(parseClock("12:45")),
-  view: "pitcher",
-  gyroRad: 0,
-  want: "any",
-};
+const fastball: Pitch = sinkerPitch({ name: "four-seam", speedMPerS: 94 * 0.44704, spinRadPerS: (2350 * 2 * Math.PI) / 60, tiltRad: clockToAngle(parseClock("12:45")), gyroRad: 0, want: "any" });
 
 describe("a screened pitch in flight", () => {
   it("aims the full flight at the middle of the zone to 1e-5 m", () => {

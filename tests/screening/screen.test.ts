@@ -10,20 +10,10 @@ import { pitchFrame, pushInField, scoreFactor, type Pitch } from "../../src/scre
 import { robustness } from "../../src/screening/robustness.js";
 import { screenPitch, symmetricAngle } from "../../src/screening/screen.js";
 import { DEFAULT_BAND } from "../../src/sampling/band.js";
+import { sinkerPitch } from "../helpers.js";
 
 const DEG = Math.PI / 180;
-const pitch = (over: Partial<Pitch> = {}): Pitch => ({
-  name: "test",
-  pitcher: "",
-  hand: "right",
-  speedMPerS: 92 * 0.44704,
-  spinRadPerS: (2150 * 2 * Math.PI) / 60,
-  tiltRad: clockToAngle(parseClock("1:45")),
-  view: "pitcher",
-  gyroRad: 10 * DEG,
-  want: "arm",
-  ...over,
-});
+const pitch = (over: Partial<Pitch> = {}): Pitch => sinkerPitch({ name: "test", ...over });
 
 describe("screen", () => {
   const p = pitch();
