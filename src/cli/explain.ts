@@ -11,7 +11,7 @@
  * Output: CSV (one row per pitch; columns in EXPLAIN_COLUMNS) or JSON (a list),
  * chosen by --format or the output file's extension.
  */
-import { createReadStream, createWriteStream, existsSync, mkdirSync, readFileSync, renameSync, rmSync, statSync } from "node:fs";
+import { createReadStream, createWriteStream, existsSync, readFileSync, renameSync, rmSync, statSync } from "node:fs";
 import { basename, dirname, join } from "node:path";
 import { createInterface } from "node:readline";
 import type { Argv } from "yargs";
@@ -30,7 +30,7 @@ import { parseAir, withAirOptions } from "./flight.js";
 import { parseInteger, parseNumber, assertOneOf } from "./parse.js";
 import { buildPitch, type RawPitch } from "./pitchInput.js";
 import { pitchesFromArgs, withPitchOptions } from "./screen.js";
-import { writeAtomic } from "./writeAtomic.js";
+import { ensureFolder, writeAtomic } from "./writeAtomic.js";
 
 const IN = (m: number) => m / M_PER_IN;
 const COLUMN_FIELDS: Record<string, string> = {
@@ -193,7 +193,7 @@ function countLines(file: string): number {
 async function batch(file: string, out: string, format: "csv" | "json", onBad: "skip" | "stop", explainer: Explainer, top: number): Promise<void> {
   if (!existsSync(file)) throw new InputError(`--csv-in ${file}: no such file`);
   const total = Math.max(0, countLines(file) - 1);
-  mkdirSync(dirname(out), { recursive: true });
+  ensureFolder(dirname(out));
   const tmp = join(dirname(out), `.${basename(out)}.${process.pid}.tmp`);
   const sink = createWriteStream(tmp);
   const write = (s: string) => new Promise<void>((resolve) => (sink.write(s) ? resolve() : sink.once("drain", () => resolve())));

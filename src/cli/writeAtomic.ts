@@ -1,21 +1,47 @@
 /** Writes a file whole or not at all: to a temporary name beside it, then rename. */
-import { mkdirSync, renameSync, rmSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, renameSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { basename, dirname, join } from "node:path";
 import { InputError } from "./errors.js";
 
-export function writeAtomic(path: string, data: string | Uint8Array): void {
-  const dir = dirname(path);
-  try {
-    mkdirSync(dir, { recursive: true });
-  } catch (err) {
-    throw new InputError(`cannot create folder ${dir} for ${path}: ${(err as Error).message}`);
+/** Deepest folder chain we create for an output file. */
+const MAX_NEW_FOLDERS = 32;
+
+/**
+ * Creates `dir` and any missing parents one level at a time. (Node's recursive
+ * mkdir loops forever under /proc, which refuses new entries with ENOENT; a
+ * non-recursive mkdir reports that at once.)
+ */
+export function ensureFolder(dir: string): void {
+  const missing: string[] = [];
+  let d = dir;
+  while (!existsSync(d) && missing.length < MAX_NEW_FOLDERS) {
+    missing.push(d);
+    const up = dirname(d);
+    if (up === d) break;
+    d = up;
   }
-  const tmp = join(dir, `.${basename(path)}.${process.pid}.tmp`);
+  if (existsSync(d) && !statSync(d).isDirectory()) throw new InputError(`cannot write into ${d}: it is a file, not a folder`);
+  for (const m of missing.reverse()) {
+    try {
+      mkdirSync(m);
+    } catch (err) {
+      throw new InputError(`cannot create folder ${m}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}`);
+    }
+  }
+}
+
+export function writeAtomic(path: string, data: string | Uint8Array): void {
+  ensureFolder(dirname(path));
+  const tmp = join(dirname(path), `.${basename(path)}.${process.pid}.tmp`);
   try {
     writeFileSync(tmp, data);
     renameSync(tmp, path);
   } catch (err) {
-    rmSync(tmp, { force: true });
+    try {
+      rmSync(tmp, { force: true });
+    } catch {
+      // nothing was written there
+    }
     throw new InputError(`cannot write ${path}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}`);
   }
 }

@@ -87,6 +87,13 @@ describe("seam-atlas measure", () => {
     expect(r.stderr.trim().split("\n")).toHaveLength(1);
   });
 
+  it("fails at once with exit 2 and one line when the output folder cannot be created (a path under /proc)", () => {
+    const r = runCli(["measure", "--axis", "lobe-B1", "--out", "/proc/seam-atlas-no/x.json"]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/cannot create folder \/proc\/seam-atlas-no/);
+    expect(r.stderr.trim().split("\n")).toHaveLength(1);
+  });
+
   it("answers --help and --version with exit 0", () => {
     const h = runCli(["measure", "--help"]);
     expect(h.code).toBe(0);
