@@ -1,14 +1,30 @@
 /**
- * Small vector helpers and the one place gl-matrix is configured.
+ * Small vector helpers, and Float64 storage for gl-matrix.
  *
- * gl-matrix allocates Float32Array by default; every geometry module imports
- * from here so that all of its vectors and quaternions are Float64.
+ * gl-matrix's own constructors (create, fromValues, clone) allocate Float32Array
+ * unless its global array type is switched, which would be a side effect on import
+ * felt by every other user of the package. We never call them: storage comes from
+ * newVec3 / newQuat / newMat3 below (Float64Array), and gl-matrix's functions, which
+ * write into whatever array they are given, work on it at full precision.
  */
-import { glMatrix, vec3, quat, mat3 } from "gl-matrix";
-
-glMatrix.setMatrixArrayType(Float64Array as unknown as Float32ArrayConstructor);
+import { vec3, quat, mat3 } from "gl-matrix";
 
 export { vec3, quat, mat3 };
+
+/** A Float64 3-vector for gl-matrix's functions. */
+export function newVec3(x = 0, y = 0, z = 0): vec3 {
+  return Float64Array.of(x, y, z) as unknown as vec3;
+}
+
+/** A Float64 identity quaternion [0, 0, 0, 1] for gl-matrix's functions. */
+export function newQuat(): quat {
+  return Float64Array.of(0, 0, 0, 1) as unknown as quat;
+}
+
+/** A Float64 identity 3x3 matrix (column-major) for gl-matrix's functions. */
+export function newMat3(): mat3 {
+  return Float64Array.of(1, 0, 0, 0, 1, 0, 0, 0, 1) as unknown as mat3;
+}
 
 /** A 3-vector as a plain tuple (for public results and JSON). */
 export type Vec3 = [number, number, number];
@@ -70,8 +86,8 @@ export function perpendicularUnit(n: Readonly<Vec3>, hint: Readonly<Vec3> = [0, 
 
 /** Rotates `v` about unit axis `axis` by `angleRad` (right-hand rule), via a gl-matrix quaternion. */
 export function rotateAbout(v: Readonly<Vec3>, axis: Readonly<Vec3>, angleRad: number): Vec3 {
-  const q = quat.setAxisAngle(quat.create(), axis as unknown as vec3, angleRad);
-  const out = vec3.transformQuat(vec3.create(), v as unknown as vec3, q);
+  const q = quat.setAxisAngle(newQuat(), axis as unknown as vec3, angleRad);
+  const out = vec3.transformQuat(newVec3(), v as unknown as vec3, q);
   return [out[0], out[1], out[2]];
 }
 

@@ -86,7 +86,7 @@ async function main(): Promise<void> {
       return 512;
     },
     () => {
-      for (let i = 0; i < 4; i++) sink += bandAveragesBrute(seam, axes[3 * i], axes[3 * i + 1], axes[3 * i + 2], gyro, DEFAULT_BAND, { steps: BRUTE_STEPS }, r).seamInBand;
+      for (let i = 0; i < 4; i++) sink += bandAveragesBrute(seam, axes[3 * i], axes[3 * i + 1], axes[3 * i + 2], gyro, DEFAULT_BAND, BRUTE_STEPS, r).seamInBand;
       return 4;
     },
     6,

@@ -1,7 +1,7 @@
 /**
  * A quasi-steady seam-shifted-wake (SSW) side-force model.
  *
- * Picture at one instant (flow frame of src/sampling/brute.ts: unit ball, v = +z,
+ * Picture at one instant (flow frame of geometry/flow.ts: unit ball, v = +z,
  * polar angle theta from the front stagnation point, azimuth psi about v). For each
  * of n equally spaced azimuths psi_j = 2 pi j / n the separation line sits
  *   - at the seam's polar angle where the seam crosses the meridian psi_j inside the
@@ -23,7 +23,7 @@
  * cos(theta) along each segment.
  *
  * Quasi-steady turn average: the ball turns by +phi about the spin axis w (the phase
- * convention of brute.ts: ball-to-flow rotation R_w(phi) ballToFlowAtPhaseZero), the
+ * convention of geometry/flow.ts), the
  * instantaneous coefficient is averaged over equally spaced phases, and its parts
  * along a = unit(w - (w.v) v) and m = unit(w x v) are reported. F = 1/2 rho A C v^2,
  * A = pi R^2, times a calibration `scale` (default 1).
@@ -51,10 +51,10 @@
  * Its part along a agrees in sign with the band sampler's alongAxis where that is
  * large (the 20 largest of 1500 random axes and gyros), less often where it is small.
  */
-import { mat3, quat, vec3, unit3, type Vec3 } from "../../geometry/vec.js";
+import { ballToFlowAtPhase } from "../../geometry/flow.js";
+import { unit3, type Vec3 } from "../../geometry/vec.js";
 import type { SeamSamples } from "../../geometry/seamSamples.js";
 import { assertGyro, DEFAULT_BAND, type Band } from "../sampling/band.js";
-import { ballToFlowAtPhaseZero } from "../sampling/brute.js";
 import { seamFor } from "../sampling/measure.js";
 import type { SeamForceHook } from "./forces.js";
 import { meridianSideIntegralFromCos, potentialPressureCoefficient, type SideCoefficient } from "./wakePressure.js";
@@ -119,7 +119,7 @@ export interface SeamForceModel {
   /** Scratch: cos(theta) of the first in-band seam crossing per azimuth (-2 when none). */
   readonly firstCrossingCos: Float64Array;
   /** Scratch rotation state for the turn average. */
-  readonly scratch: { readonly turn: quat; readonly q: quat; readonly m: mat3; readonly side: SideCoefficient };
+  readonly scratch: { readonly m: Float64Array; readonly side: SideCoefficient };
 }
 
 /** Builds and validates a model. Throws RangeError (one line, naming the value and range) for any bad parameter. */
@@ -184,7 +184,7 @@ export function seamForceModel(params: SeamForceParams = {}): SeamForceModel {
     cosPsi,
     sinPsi,
     firstCrossingCos: new Float64Array(nb),
-    scratch: { turn: quat.create(), q: quat.create(), m: mat3.create(), side: { x: 0, y: 0 } },
+    scratch: { m: new Float64Array(9), side: { x: 0, y: 0 } },
   };
 }
 
@@ -293,7 +293,7 @@ export interface SeamForceCoefficient {
 
 /**
  * Runs `visit(phaseIndex, coefficient)` at each phase phi_j = 2 pi j / phases of one
- * turn (the ball turns by +phi about w, brute.ts's convention). Coefficients are in
+ * turn (the ball turns by +phi about w, geometry/flow.ts's convention). Coefficients are in
  * the flow frame (x = a, -y = m).
  */
 function forEachPhase(
@@ -304,14 +304,10 @@ function forEachPhase(
 ): void {
   const w = unit3(axis);
   assertGyro(gyroRad);
-  const q0 = ballToFlowAtPhaseZero(w[0], w[1], w[2], gyroRad);
-  const wf = vec3.fromValues(Math.cos(gyroRad), 0, Math.sin(gyroRad));
-  const { turn, q, m, side } = model.scratch;
+  const { m, side } = model.scratch;
   const steps = model.phases;
   for (let j = 0; j < steps; j++) {
-    quat.setAxisAngle(turn, wf, (2 * Math.PI * j) / steps);
-    quat.multiply(q, turn, q0);
-    mat3.fromQuat(m, q);
+    ballToFlowAtPhase(w[0], w[1], w[2], gyroRad, (2 * Math.PI * j) / steps, m);
     instantaneousSeamForceCoefficient(model, m, side);
     visit(j, side);
   }

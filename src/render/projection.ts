@@ -9,7 +9,7 @@
  * at (cx + R x, cy - R y), with depth R z px; it faces the viewer when depth > 0
  * (orthographic: the limb is the great circle z = 0).
  */
-import { cross3, dot3, mat3, quat, unit3, type Vec3 } from "../../geometry/vec.js";
+import { cross3, dot3, mat3, newMat3, quat, unit3, type Vec3 } from "../../geometry/vec.js";
 
 /** Length of `up`'s part across the line of sight below which it names no direction (unit vectors). */
 const PARALLEL_TOLERANCE = 1e-9;
@@ -61,7 +61,7 @@ export function viewLookingAlong(direction: Readonly<Vec3>, up: Readonly<Vec3>):
 
 /** The view for a ball-to-view rotation given as a unit gl-matrix quaternion ([x, y, z, w]). */
 export function viewFromRotation(ballToView: Readonly<quat>): View {
-  const m = mat3.fromQuat(mat3.create(), ballToView as quat);
+  const m = mat3.fromQuat(newMat3(), ballToView as quat);
   // gl-matrix is column-major: row i is (m[i], m[i + 3], m[i + 6])
   const row = (i: number): Vec3 => [m[i], m[i + 3], m[i + 6]];
   return { right: row(0), up: row(1), toViewer: row(2) };

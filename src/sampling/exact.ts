@@ -296,6 +296,7 @@ export function bandAveragesExact(
   band: Band,
   out: BandAverages = emptyAverages(),
 ): BandAverages {
+  if (!warmedUp) warmUp();
   const n = seam.count;
   const s = Math.sin(gyroRad);
   const k = Math.cos(gyroRad);
@@ -328,9 +329,13 @@ export function bandAveragesExact(
  * the loop and for rare branches, give up its optimised code at the next call, and
  * from then on enter the loop through on-stack replacement, whose code keeps the
  * loop's doubles boxed (2 to 3 times slower). 26 calls on at most 16 points take
- * about a millisecond and leave complete feedback.
+ * about a millisecond and leave complete feedback. Done on the first call, not at
+ * import, so loading the module has no side effect.
  */
+let warmedUp = false;
+
 function warmUp(): void {
+  warmedUp = true;
   // points in the x-z plane at heights z (the axis is z): poles, the equator, both hemispheres
   const heights = [1, -1, 0, 0.999, -0.999, 0.9, -0.9, 0.6, -0.6, 0.3, -0.3, 0.1, -0.1, 0.02, -0.02, 0.5];
   const pts = new Float64Array(3 * heights.length);
@@ -365,4 +370,3 @@ function warmUp(): void {
     }
   }
 }
-warmUp();

@@ -6,8 +6,9 @@ import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEFAULT_SEAM_POINTS, sampleSeam, type SeamSamples } from "../../geometry/seamSamples.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
 import { assertGyro, DEFAULT_BAND, type Band } from "./band.js";
-import { bandAveragesBrute } from "./brute.js";
+import { ballToFlowAtPhase } from "../../geometry/flow.js";
 import { crossingsPerRevolution } from "./crossings.js";
+import { emptyShares, instantBandShares } from "./instant.js";
 import { bandAveragesExact, type BandAverages } from "./exact.js";
 
 /** Phases per turn in a timeline (one per degree). */
@@ -68,11 +69,14 @@ export function measureOrientation(orientation: Orientation, options: MeasureOpt
   if (options.timeline !== false) {
     const plus = new Float64Array(TIMELINE_STEPS);
     const minus = new Float64Array(TIMELINE_STEPS);
-    bandAveragesBrute(seam, axis[0], axis[1], axis[2], orientation.gyroRad, band, {
-      steps: TIMELINE_STEPS,
-      plusTimeline: plus,
-      minusTimeline: minus,
-    });
+    const rotation = new Float64Array(9);
+    const shares = emptyShares();
+    for (let j = 0; j < TIMELINE_STEPS; j++) {
+      ballToFlowAtPhase(axis[0], axis[1], axis[2], orientation.gyroRad, (2 * Math.PI * j) / TIMELINE_STEPS, rotation);
+      instantBandShares(seam, rotation, band, shares);
+      plus[j] = shares.axisPlus;
+      minus[j] = shares.axisMinus;
+    }
     timeline = { axisPlus: plus, axisMinus: minus };
   }
   return { ...averages, axis, crossingsPerRevolution: crossings, timeline };

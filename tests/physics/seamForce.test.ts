@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { DEFAULT_SEAM_SHAPE, seamPoint } from "../../geometry/seamCurve.js";
-import { mat3, quat, vec3 } from "../../geometry/vec.js";
+import { mat3, newMat3, newQuat, newVec3, quat } from "../../geometry/vec.js";
+import { ballToFlowQuaternionAtPhaseZero } from "../../geometry/flow.js";
 import { DEFAULT_BAND } from "../../src/sampling/band.js";
-import { ballToFlowAtPhaseZero } from "../../src/sampling/brute.js";
 import { bandAveragesExact } from "../../src/sampling/exact.js";
 import { seamFor } from "../../src/sampling/measure.js";
 import { airState } from "../../src/physics/air.js";
@@ -250,8 +250,8 @@ describe("turn-averaged SSW coefficient: symmetries", () => {
 describe("instantaneous and turn-averaged coefficient: two routes", () => {
   it("the polyline model equals the direct exact-curve route within 1e-5 at 6 random orientations, at least one with several in-band crossings on one meridian", () => {
     const rnd = lcg(4242);
-    const q = quat.create();
-    const r = mat3.create();
+    const q = newQuat();
+    const r = newMat3();
     let multiple = 0;
     for (let k = 0; k < 6; k++) {
       randomRotation(rnd, q, r);
@@ -264,16 +264,16 @@ describe("instantaneous and turn-averaged coefficient: two routes", () => {
     expect(multiple).toBeGreaterThan(0); // the nearest-the-front rule is exercised
   });
 
-  it("the turn average is the mean over phases of the instantaneous coefficient along brute.ts's a = (1,0,0) and m = (0,-1,0), to 1e-12", () => {
+  it("the turn average is the mean over phases of the instantaneous coefficient along geometry/flow.ts's a = (1,0,0) and m = (0,-1,0), to 1e-12", () => {
     const fast = seamForceModel({ phases: 36 });
     const axis: V3 = [0.6, -0.2, 0.5];
     const gyro = 25 * DEG;
     const n = Math.hypot(...axis);
-    const q0 = ballToFlowAtPhaseZero(axis[0] / n, axis[1] / n, axis[2] / n, gyro);
-    const wf = vec3.fromValues(Math.cos(gyro), 0, Math.sin(gyro));
-    const turn = quat.create();
-    const q = quat.create();
-    const r = mat3.create();
+    const q0 = ballToFlowQuaternionAtPhaseZero([axis[0] / n, axis[1] / n, axis[2] / n], gyro) as unknown as quat;
+    const wf = newVec3(Math.cos(gyro), 0, Math.sin(gyro));
+    const turn = newQuat();
+    const q = newQuat();
+    const r = newMat3();
     let sa = 0;
     let sm = 0;
     for (let j = 0; j < 36; j++) {
@@ -321,8 +321,8 @@ describe("knuckleball: no spin, 65 mph, sea level (Watts & Sawyer, Am. J. Phys. 
     seamForceTimeline(model, [0, 0, 1], 0, a, m); // ball z vertical, flow horizontal: m is the horizontal lateral
     let largest = Math.max(...m.map(Math.abs));
     const rnd = lcg(1975);
-    const q = quat.create();
-    const r = mat3.create();
+    const q = newQuat();
+    const r = newMat3();
     const side = { x: 0, y: 0 };
     for (let k = 0; k < 5000; k++) {
       instantaneousSeamForceCoefficient(model, randomRotation(rnd, q, r), side);

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { findLandmarks, landmarkByName } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { sampleSeam } from "../../geometry/seamSamples.js";
-import { cross3, dot3, mat3, quat, type Vec3 } from "../../geometry/vec.js";
+import { cross3, dot3, mat3, newQuat, quat, type Vec3 } from "../../geometry/vec.js";
 import {
   depthRuns, projectPoint, projectPoints, viewFromDirections, viewFromRotation, viewLookingAlong, type DiscPlacement,
 } from "../../src/render/projection.js";
@@ -64,12 +64,12 @@ describe("orthographic projection of the ball", () => {
     for (let k = 0; k < 20; k++) {
       const v = viewFromDirections(randomUnit(rnd), randomUnit(rnd));
       // gl-matrix mat3 is column-major: the rows of the rotation are the view axes
-      const m = mat3.fromValues(
+      const m = Float64Array.of(
         v.right[0], v.up[0], v.toViewer[0],
         v.right[1], v.up[1], v.toViewer[1],
         v.right[2], v.up[2], v.toViewer[2],
       );
-      const back = viewFromRotation(quat.normalize(quat.create(), quat.fromMat3(quat.create(), m)));
+      const back = viewFromRotation(quat.normalize(newQuat(), quat.fromMat3(newQuat(), m as unknown as mat3)));
       const keys = ["right", "up", "toViewer"] as const;
       for (const key of keys) for (let j = 0; j < 3; j++) expect(Math.abs(back[key][j] - v[key][j])).toBeLessThan(1e-12);
     }

@@ -24,7 +24,7 @@ describe("exact time-averaged sampler", () => {
       const centre = width / 2 + 1 + (178 - width) * rnd();
       const band = bandFromDegrees(centre, width);
       const e = bandAveragesExact(seam, x, y, z, gyro, band);
-      const b = bandAveragesBrute(seam, x, y, z, gyro, band, { steps: 720 });
+      const b = bandAveragesBrute(seam, x, y, z, gyro, band, 720);
       for (const key of KEYS) worst = Math.max(worst, Math.abs(e[key] - b[key]));
     }
     expect(worst).toBeLessThan(1e-3);
@@ -37,7 +37,7 @@ describe("exact time-averaged sampler", () => {
     const [x, y, z] = [0.3 / n, -0.5 / n, 0.81 / n];
     const e = bandAveragesExact(seam, x, y, z, 0.2, band);
     const err = (steps: number) => {
-      const b = bandAveragesBrute(seam, x, y, z, 0.2, band, { steps });
+      const b = bandAveragesBrute(seam, x, y, z, 0.2, band, steps);
       return Math.max(...KEYS.map((k) => Math.abs(e[k] - b[k])));
     };
     expect(err(2880)).toBeLessThan(err(180) / 3);
@@ -118,7 +118,7 @@ describe("exact time-averaged sampler", () => {
     const r = bandAveragesExact(seam, 0.6 / n, 0.1 / n, 0.79 / n, 0.4, DEFAULT_BAND);
     expect(r.magnusPlus).toBe(r.seamInBand / 2);
     expect(r.alongMagnus).toBe(0);
-    const b = bandAveragesBrute(seam, 0.6 / n, 0.1 / n, 0.79 / n, 0.4, DEFAULT_BAND, { steps: 720 });
+    const b = bandAveragesBrute(seam, 0.6 / n, 0.1 / n, 0.79 / n, 0.4, DEFAULT_BAND, 720);
     expect(Math.abs(b.magnusPlus - b.magnusMinus)).toBeLessThan(1e-3);
     expect(Math.abs(b.alongMagnus)).toBeLessThan(1e-3);
   });
@@ -127,7 +127,7 @@ describe("exact time-averaged sampler", () => {
     // band around 90 deg with zero gyro: every point on the axis sits at theta = 90 deg
     const onAxis = sampleSeam(DEFAULT_SEAM_SHAPE, 512);
     const r = bandAveragesExact(onAxis, 1, 0, 0, 0, bandFromDegrees(90, 2));
-    const b = bandAveragesBrute(onAxis, 1, 0, 0, 0, bandFromDegrees(90, 2), { steps: 720 });
+    const b = bandAveragesBrute(onAxis, 1, 0, 0, 0, bandFromDegrees(90, 2), 720);
     expect(Math.abs(r.seamInBand - b.seamInBand)).toBeLessThan(2e-3);
   });
 });

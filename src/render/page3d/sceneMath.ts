@@ -3,18 +3,18 @@
  *
  * Three frames, from the inside out:
  *   ball frame   the seam curve's axes (geometry/seamCurve.ts);
- *   flow frame   src/sampling/brute.ts: v = +z the flight direction, a = +x the push
- *                line, w = (k, 0, s) the spin axis, m = -y; the ball turns by +phi
+ *   flow frame   geometry/flow.ts: v = +z the flight direction, a = +x the across
+ *                direction, w = (k, 0, s) the spin axis, m = -y; the ball turns by +phi
  *                about w, and at phi = 0 the stagnation point sits on its path at the
- *                point nearest the ball's +z pole (`ballToFlowAtPhaseZero`);
+ *                point nearest the ball's +z pole;
  *   field frame  geometry/frames.ts: x toward the catcher's right, y toward the
  *                pitcher, z up.
  * three.js draws with +y up, so the scene's root turns the field frame by -90 deg
  * about x: field (x, y, z) is drawn at (x, z, -y).
  */
 import { Matrix4, Quaternion, Vector3 } from "three";
-import { unit3, type Vec3 } from "../../../geometry/vec.js";
-import { ballToFlowAtPhaseZero } from "../../sampling/brute.js";
+import { ballToFlowQuaternionAtPhaseZero } from "../../../geometry/flow.js";
+import { type Vec3 } from "../../../geometry/vec.js";
 import type { FieldFrameVectors } from "./data.js";
 
 /** The rotation that draws the field frame in three.js's y-up world. */
@@ -49,8 +49,7 @@ export class BallPose {
 
   /** Sets the ball-frame spin axis (any non-zero length) and the gyro angle, radians. */
   setOrientation(axis: Readonly<Vec3>, gyroRad: number): void {
-    const w = unit3(axis);
-    const q = ballToFlowAtPhaseZero(w[0], w[1], w[2], gyroRad);
+    const q = ballToFlowQuaternionAtPhaseZero(axis, gyroRad);
     // gl-matrix and three.js both order quaternions [x, y, z, w]
     this.q0.set(q[0], q[1], q[2], q[3]);
     this.spin.copy(flowSpinAxis(gyroRad));
