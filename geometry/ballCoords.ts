@@ -4,7 +4,8 @@
  * longitude from +x (node-1) toward +y (node-2), in (-180, 180] deg.
  * Written "12.5N,45E" (north = toward +z, east = toward +y).
  */
-import { DEG, unit3, type Vec3 } from "./vec.js";
+import { unit3, type Vec3 } from "./vec.js";
+import { DEG } from "./units.js";
 
 export interface LatLon {
   /** Latitude, degrees in [-90, 90]. */

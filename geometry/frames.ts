@@ -21,6 +21,7 @@
  * behind the pitcher the viewer's right is -x; from behind the catcher it is +x,
  * so the two views read mirror-image clocks: 1:30 from one is 10:30 from the other.
  */
+import { angleToClock, clockToAngle } from "./clock.js";
 import { cross3, dot3, norm3, unit3, type Vec3 } from "./vec.js";
 
 export type ClockView = "pitcher" | "catcher";
@@ -29,9 +30,6 @@ export type Hand = "right" | "left";
 /** Nominal flight direction in the field frame: from the rubber toward home plate. */
 export const TOWARD_PLATE: Vec3 = [0, -1, 0];
 export const FIELD_UP: Vec3 = [0, 0, 1];
-
-/** Minutes on a 12-hour clock face. */
-const CLOCK_MINUTES = 720;
 
 /**
  * The viewer's right and up for a clock view, given the flight direction v (up is
@@ -44,36 +42,6 @@ export function clockBasis(view: ClockView, v: Readonly<Vec3> = TOWARD_PLATE): {
   const up = unit3([FIELD_UP[0] - d * vu[0], FIELD_UP[1] - d * vu[1], FIELD_UP[2] - d * vu[2]]);
   const lookRight = cross3(vu, up); // right of a viewer looking along v
   return view === "pitcher" ? { right: lookRight, up } : { right: [-lookRight[0], -lookRight[1], -lookRight[2]], up };
-}
-
-/** Parses "H:MM" (1 <= H <= 12, 0 <= MM < 60; "12:00" and "0:00" both mean straight up) to minutes past 12:00. */
-export function parseClock(text: string): number {
-  const m = /^\s*(\d{1,2}):(\d{2})\s*$/.exec(text);
-  if (!m) throw new RangeError(`tilt "${text}" is not a clock reading H:MM (for example 1:30)`);
-  const h = Number(m[1]);
-  const min = Number(m[2]);
-  if (h > 12 || min >= 60) throw new RangeError(`tilt "${text}" must have hours 0-12 and minutes 00-59`);
-  return ((h % 12) * 60 + min) % CLOCK_MINUTES;
-}
-
-/** Formats minutes past 12:00 as "H:MM" (rounded to the nearest minute; 12:00 for straight up). */
-export function formatClock(minutes: number): string {
-  let m = Math.round(minutes) % CLOCK_MINUTES;
-  if (m < 0) m += CLOCK_MINUTES;
-  const h = Math.floor(m / 60);
-  const mm = m % 60;
-  return `${h === 0 ? 12 : h}:${mm.toString().padStart(2, "0")}`;
-}
-
-/** Clock minutes to the clockwise angle from 12:00, radians. */
-export function clockToAngle(minutes: number): number {
-  return (minutes / CLOCK_MINUTES) * 2 * Math.PI;
-}
-
-/** Clockwise angle from 12:00 (radians) to clock minutes in [0, 720). */
-export function angleToClock(angleRad: number): number {
-  const m = (angleRad / (2 * Math.PI)) * CLOCK_MINUTES;
-  return ((m % CLOCK_MINUTES) + CLOCK_MINUTES) % CLOCK_MINUTES;
 }
 
 /** The direction in the field frame that a clock hand at `angleRad` points to, across v. */
@@ -136,5 +104,18 @@ export function gyroFromEfficiency(efficiency: number): number {
  * right-hander, the pitcher's left (+x) for a left-hander. Glove side is the opposite.
  */
 export function armSideDirection(hand: Hand): Vec3 {
-  return hand === "right" ? [-1, 0, 0] : [1, 0, 0];
+  return [armSideSign(hand), 0, 0];
 }
+
+/** The sign of field x on the arm side: -1 for a right-hander, +1 for a left-hander (the one home of that rule). */
+export function armSideSign(hand: Hand): -1 | 1 {
+  return hand === "right" ? -1 : 1;
+}
+
+/** A plate-plane offset (x toward the catcher's right, z up) as arm-side and up components for a hand. */
+export function toArmSide(xM: number, zM: number, hand: Hand): { armSideM: number; upM: number } {
+  return { armSideM: armSideSign(hand) * xM, upM: zM };
+}
+
+export const HANDS: readonly Hand[] = ["right", "left"];
+export const VIEWS: readonly ClockView[] = ["pitcher", "catcher"];

@@ -19,23 +19,7 @@
  * meet at the waist (the tip-to-tip angle 2 arccos(2 sqrt(ab)) reaches 0), and
  * b = 0 is a plain great circle.
  */
-/** Nominal circumference used for cover design, inches (Thompson 1998; inside rule 3.01's 9 to 9 1/4 in). */
-export const BALL_CIRCUMFERENCE_IN = 9.125;
-/** Rulebook circumference limits, inches (Official Baseball Rules, rule 3.01). */
-export const RULEBOOK_CIRCUMFERENCE_IN: readonly [number, number] = [9.0, 9.25];
-/** Ball radius in inches from the nominal circumference. */
-export const BALL_RADIUS_IN = BALL_CIRCUMFERENCE_IN / (2 * Math.PI);
-export const METERS_PER_INCH = 0.0254;
-/** Ball radius in metres. */
-export const BALL_RADIUS_M = BALL_RADIUS_IN * METERS_PER_INCH;
-/** Double stitches on a baseball (common practice). */
-export const DOUBLE_STITCH_COUNT = 108;
-
-/**
- * Seam-to-seam arc across a cover's narrow waist, inches, on the 9 1/8 in ball
- * (R. B. Thompson, "Designing a Baseball Cover", College Math. J. 29(1), 1998).
- */
-export const COVER_WAIST_ARC_IN = 1.1875;
+import { BALL_CIRCUMFERENCE_IN, COVER_WAIST_ARC_IN } from "./ball.js";
 
 /** Smallest and largest b for which the seam is a simple closed curve (exclusive). */
 export const SEAM_SHAPE_RANGE: readonly [number, number] = [0, 0.5];

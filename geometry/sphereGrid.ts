@@ -11,7 +11,7 @@
  * eight seam symmetries maps grid points to grid points; `symmetryImage` gives the
  * index map by integer arithmetic, with no floating-point search.
  */
-import { DEG } from "./vec.js";
+import { DEG } from "./units.js";
 import { SEAM_SYMMETRIES } from "./symmetry.js";
 
 export interface SphereGrid {

@@ -6,7 +6,7 @@
  * unit tangent there and the unit vector across the seam in the sphere's tangent
  * plane (across = position x tangent), toward which its two legs splay.
  */
-import { DOUBLE_STITCH_COUNT } from "./seamCurve.js";
+import { DOUBLE_STITCH_COUNT } from "./ball.js";
 import { sampleSeam } from "./seamSamples.js";
 
 export interface Stitches {

@@ -95,4 +95,3 @@ export function clamp(x: number, lo: number, hi: number): number {
   return x < lo ? lo : x > hi ? hi : x;
 }
 
-export const DEG = Math.PI / 180;

@@ -16,7 +16,7 @@ export function randomUnit(rnd: () => number): [number, number, number] {
   return [r * Math.cos(phi), r * Math.sin(phi), z];
 }
 
-import { clockToAngle, parseClock } from "../geometry/frames.js";
+import { clockToAngle, parseClock } from "../geometry/clock.js";
 import type { Pitch } from "../src/screening/pitch.js";
 
 /** A right-hander's sinker (92 mph, 2150 rpm, tilt 1:45, gyro 10 deg, wanted push arm side): invented test data. */

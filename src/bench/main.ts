@@ -7,7 +7,7 @@ import { join } from "node:path";
 import { performance } from "node:perf_hooks";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEFAULT_SEAM_POINTS } from "../../geometry/seamSamples.js";
-import { DEG } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import { DEFAULT_BAND } from "../sampling/band.js";
 import { bandAveragesBrute } from "../sampling/brute.js";
 import { bandAveragesExact, emptyAverages } from "../sampling/exact.js";

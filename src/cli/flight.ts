@@ -1,13 +1,16 @@
 /** `seam-atlas flight`: a pitch with a seam orientation flown to the plate, its movement split into Magnus and seam parts. */
 import type { Argv } from "yargs";
-import { angleToClock, directionToClockAngle, formatClock } from "../../geometry/frames.js";
+import { directionToClockAngle } from "../../geometry/frames.js";
+import { angleToClock, formatClock } from "../../geometry/clock.js";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
-import { DEG, unit3, type Vec3 } from "../../geometry/vec.js";
+import { unit3, type Vec3 } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import type { AirConditions } from "../physics/air.js";
 import type { DragModel } from "../physics/drag.js";
-import { flyPitch, toArmSide, type PitchFlight } from "../physics/pitchFlight.js";
-import { M_PER_FT, M_PER_IN } from "../physics/units.js";
-import { formatMovementIn, fixed } from "../screening/numbers.js";
+import { flyPitch, type PitchFlight } from "../physics/pitchFlight.js";
+import { toArmSide } from "../../geometry/frames.js";
+import { M_PER_FT, M_PER_IN } from "../../geometry/units.js";
+import { formatMovementIn, fixed } from "../render/numbers.js";
 import { screenPitch } from "../screening/screen.js";
 import { TOOL_NAME, TOOL_VERSION } from "../version.js";
 import { InputError } from "./errors.js";

@@ -27,4 +27,4 @@ export function table(rows: readonly (readonly [string, string])[], indent = "  
 
 
 
-export { fixed, percent, signed } from "../screening/numbers.js";
+export { fixed, percent, signed } from "../render/numbers.js";

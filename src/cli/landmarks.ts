@@ -2,8 +2,9 @@
 import type { Argv } from "yargs";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
 import { findLandmarks } from "../../geometry/landmarks.js";
-import { BALL_RADIUS_IN, DEFAULT_SEAM_SHAPE, assertSeamShape } from "../../geometry/seamCurve.js";
-import { DEG } from "../../geometry/vec.js";
+import { DEFAULT_SEAM_SHAPE, assertSeamShape } from "../../geometry/seamCurve.js";
+import { BALL_RADIUS_IN } from "../../geometry/ball.js";
+import { DEG } from "../../geometry/units.js";
 import { TOOL_NAME, TOOL_VERSION } from "../version.js";
 import { InputError } from "./errors.js";
 import { fixed } from "./format.js";

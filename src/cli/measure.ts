@@ -6,7 +6,7 @@ import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
 import { findLandmarks, nearestLandmark } from "../../geometry/landmarks.js";
 import { assertSeamShape, DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { assertSeamPointCount, DEFAULT_SEAM_POINTS } from "../../geometry/seamSamples.js";
-import { DEG } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import { bandFromDegrees, DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, type Band } from "../sampling/band.js";
 import { measureOrientation, type Measurement } from "../sampling/measure.js";
 import { projectRoot, TOOL_NAME, TOOL_VERSION } from "../version.js";

@@ -4,7 +4,8 @@
  */
 import { parseLatLon, latLonToVector } from "../../geometry/ballCoords.js";
 import { findLandmarks, landmarkByName, type Landmark } from "../../geometry/landmarks.js";
-import { DEG, norm3, type Vec3 } from "../../geometry/vec.js";
+import { norm3, type Vec3 } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import { InputError } from "./errors.js";
 
 /** A finite number from an option's text. */

@@ -13,13 +13,12 @@
  * to "any", `gyroDeg` to 0.
  */
 import { readFileSync } from "node:fs";
-import { parseClock, clockToAngle, gyroFromEfficiency } from "../../geometry/frames.js";
-import { DEG } from "../../geometry/vec.js";
+import { gyroFromEfficiency } from "../../geometry/frames.js";
+import { parseClock, clockToAngle } from "../../geometry/clock.js";
+import { DEG } from "../../geometry/units.js";
 import {
   assertPitch,
   HANDS,
-  MPH_TO_M_PER_S,
-  RPM_TO_RAD_PER_S,
   SPEED_RANGE_MPH,
   SPIN_RANGE_RPM,
   VIEWS,
@@ -28,6 +27,7 @@ import {
 } from "../screening/pitch.js";
 import type { PitchEcho } from "../screening/report.js";
 import { InputError } from "./errors.js";
+import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 import { parseJsonWithLines, type LocatedJson } from "./jsonLines.js";
 import { parseNumber } from "./parse.js";
 
@@ -133,8 +133,8 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string): Pit
     name: echo.name,
     pitcher: echo.pitcher,
     hand: echo.hand as Pitch["hand"],
-    speedMPerS: speedMph * MPH_TO_M_PER_S,
-    spinRadPerS: spinRpm * RPM_TO_RAD_PER_S,
+    speedMPerS: speedMph * M_PER_S_PER_MPH,
+    spinRadPerS: spinRpm * RAD_PER_S_PER_RPM,
     tiltRad,
     view: echo.view as Pitch["view"],
     gyroRad: gyroDeg * DEG,

@@ -1,14 +1,14 @@
 /** `seam-atlas screen`: every spin-axis position for a pitch, the best distinct grips and the classic holds. */
 import { join } from "node:path";
 import type { Argv } from "yargs";
-import { DEG } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import { DEFAULT_FINGER_SPACING_IN } from "../screening/hand.js";
 import { screenReport, sphereMapReport, type OrientationReport, type ScreenReport } from "../screening/report.js";
 import { DEFAULT_SPREAD_DEG } from "../screening/robustness.js";
 import { DEFAULT_GRID_SPACING_DEG, DEFAULT_TOP, RANKS, screenPitch, type RankBy } from "../screening/screen.js";
 import { projectRoot, TOOL_NAME, TOOL_VERSION } from "../version.js";
 import { InputError } from "./errors.js";
-import { formatScore } from "../screening/numbers.js";
+import { formatScore } from "../render/numbers.js";
 import { fixed } from "./format.js";
 import { parseSamplerSettings, withSamplerOptions } from "./measure.js";
 import { parseInteger, parseNumber, assertOneOf } from "./parse.js";

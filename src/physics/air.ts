@@ -5,11 +5,11 @@
  * Re-exports the atmosphere, humidity and viscosity pieces so callers can
  * import everything air-related from here.
  */
-import { assertInRange, assertNonNegative, assertPositive } from "./check.js";
+import { assertInRange, assertNonNegative, assertPositive } from "../../geometry/check.js";
 import { standardAtmosphere } from "./atmosphere.js";
 import { humidAirDensity, PRESSURE_MAX_PA, PRESSURE_MIN_PA, TEMPERATURE_MAX_C, TEMPERATURE_MIN_C } from "./humidity.js";
 import { sutherlandViscosity } from "./viscosity.js";
-import { KELVIN_AT_0_C } from "./units.js";
+import { KELVIN_AT_0_C } from "../../geometry/units.js";
 
 export {
   standardAtmosphere,

@@ -14,7 +14,7 @@
  * The constants are the 1976 ones, including R* = 8.31432 J/(mol K) (the
  * standard's value, not the later CODATA 8.3144598).
  */
-import { assertInRange } from "./check.js";
+import { assertInRange } from "../../geometry/check.js";
 
 /** Sea-level standard temperature T0, K (1976). */
 export const SEA_LEVEL_TEMPERATURE_K = 288.15;

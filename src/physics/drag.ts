@@ -18,9 +18,9 @@
  *   stands in for the drag crisis; it is a function of speed, not of Reynolds
  *   number, so it does not move with viscosity.
  */
-import { assertInRange, assertNonNegative } from "./check.js";
+import { assertInRange, assertNonNegative } from "../../geometry/check.js";
 import { SEA_LEVEL_DENSITY_KG_M3 } from "./atmosphere.js";
-import { BALL_MASS_KG, BALL_RADIUS_M, crossSectionM2 } from "./ball.js";
+import { crossSectionM2 } from "../../geometry/ball.js";
 
 export const DRAG_MODEL_NAMES = ["constant", "giordano"] as const;
 export type DragModelName = (typeof DRAG_MODEL_NAMES)[number];
@@ -40,8 +40,16 @@ export function giordanoB2PerMass(speedMPerS: number): number {
   return 0.0039 + 0.0058 / (1 + Math.exp((speedMPerS - 35) / 5));
 }
 
+/**
+ * The reference ball of the conversion below (Nathan 2008: 0.145 kg, 0.0364 m): the
+ * ball the fit's B2/m is read for, not the tool's ball (geometry/ball.ts), which
+ * then feels C_D through its own area and mass.
+ */
+export const GIORDANO_REFERENCE_MASS_KG = 0.145;
+export const GIORDANO_REFERENCE_RADIUS_M = 0.0364;
+
 /** 2 m_ref / (rho_ref A_ref), m: converts B2/m (1/m) into C_D at the reference state. */
-export const GIORDANO_CD_PER_B2M = (2 * BALL_MASS_KG) / (SEA_LEVEL_DENSITY_KG_M3 * crossSectionM2(BALL_RADIUS_M));
+export const GIORDANO_CD_PER_B2M = (2 * GIORDANO_REFERENCE_MASS_KG) / (SEA_LEVEL_DENSITY_KG_M3 * crossSectionM2(GIORDANO_REFERENCE_RADIUS_M));
 
 /**
  * Parses a drag model name (as typed on a command line).

@@ -24,13 +24,15 @@
  */
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
 import { equalAreaGrid, orbitRepresentatives, type SphereGrid } from "../../geometry/sphereGrid.js";
-import { DEG, type Vec3 } from "../../geometry/vec.js";
+import { type Vec3 } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import type { Pitch } from "../screening/pitch.js";
 import { airState, type AirConditions, type AirState } from "./air.js";
 import { simulateFlight, type FlightOptions, type Launch } from "./flight.js";
 import { releasePosition, releaseVelocity } from "./launch.js";
 import { seamForceHook, turnAveragedSeamForceCoefficient, type SeamForceParams } from "./seamForce.js";
-import { seamModelFor, spinVector, toArmSide } from "./pitchFlight.js";
+import { seamModelFor, spinVector } from "./pitchFlight.js";
+import { toArmSide } from "../../geometry/frames.js";
 
 /** The seam-force model's resolution for explaining (coarser than flight's default; see DEVELOPERS.md). */
 export const EXPLAIN_MODEL: SeamForceParams = { seamPoints: 512, azimuthBins: 72, phases: 72 };

@@ -11,7 +11,7 @@
  * rule's own edge lengths give 8.5 + sqrt(12^2 - 8.5^2) = 16.97 in), so the front
  * edge is 59 ft 1 in from the pitcher's plate.
  */
-import { M_PER_FT, M_PER_IN } from "./units.js";
+import { M_PER_FT, M_PER_IN } from "../../geometry/units.js";
 
 /** Pitcher's plate (front edge of the rubber) to the rear point of home plate, m (60 ft 6 in). */
 export const RUBBER_Y_M = 60.5 * M_PER_FT;

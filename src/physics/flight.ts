@@ -13,8 +13,8 @@
  * modelled: a pitch that would bounce just crosses the plate plane below z = 0.
  */
 import { airState, type AirState } from "./air.js";
-import { assertBall, BALL_MASS_KG, BALL_RADIUS_M } from "./ball.js";
-import { assertFiniteVec3, assertInRange } from "./check.js";
+import { assertBall, BALL_MASS_KG, BALL_RADIUS_M } from "../../geometry/ball.js";
+import { assertFiniteVec3, assertInRange } from "../../geometry/check.js";
 import { DEFAULT_DRAG_MODEL, dragCoefficientFunction, type DragModel } from "./drag.js";
 import { PLATE_FRONT_Y_M } from "./field.js";
 import { flightDerivative, type SeamForceHook } from "./forces.js";
@@ -23,7 +23,7 @@ import { RELEASE_SPEED_MAX_M_PER_S } from "./launch.js";
 import { Rk4Stepper } from "./rk4.js";
 import { assertSpinDecayTimeConstant, spinDecayFactor } from "./spinDecay.js";
 import { STANDARD_GRAVITY_M_PER_S2 } from "./atmosphere.js";
-import type { Vec3 } from "./vec3.js";
+import type { Vec3 } from "../../geometry/vec.js";
 
 /** The ball at release, SI, field frame. */
 export interface Launch {

@@ -12,8 +12,8 @@
  *
  *   e_s = 6.1121 exp((18.678 - T/234.5) T / (257.14 + T)) hPa,   T in deg C.
  */
-import { assertInRange } from "./check.js";
-import { KELVIN_AT_0_C, PA_PER_HPA } from "./units.js";
+import { assertInRange } from "../../geometry/check.js";
+import { KELVIN_AT_0_C, PA_PER_HPA } from "../../geometry/units.js";
 
 /** Specific gas constant of dry air R_d, J/(kg K). */
 export const DRY_AIR_GAS_CONSTANT_J_PER_KG_K = 287.05;

@@ -6,10 +6,11 @@
  * Arm side: the pitcher faces -y, so a right-hander's throwing arm is on the
  * catcher's left (x < 0) and a left-hander's on the catcher's right (x > 0).
  */
-import { assertInRange } from "./check.js";
+import { armSideSign, type Hand } from "../../geometry/frames.js";
+import { assertInRange } from "../../geometry/check.js";
 import { RUBBER_Y_M } from "./field.js";
-import { M_PER_FT } from "./units.js";
-import type { Vec3 } from "./vec3.js";
+import { M_PER_FT } from "../../geometry/units.js";
+import type { Vec3 } from "../../geometry/vec.js";
 
 /** Default release extension in front of the rubber, m (6.0 ft). */
 export const DEFAULT_RELEASE_EXTENSION_M = 6.0 * M_PER_FT;
@@ -18,7 +19,6 @@ export const DEFAULT_RELEASE_HEIGHT_M = 6.0 * M_PER_FT;
 /** Default release side, m toward the arm side (1.5 ft). */
 export const DEFAULT_RELEASE_SIDE_M = 1.5 * M_PER_FT;
 
-export type ThrowingHand = "right" | "left";
 
 export interface ReleasePoint {
   /** Distance in front of the rubber toward home, m, 0 to 3; default 1.8288 (6 ft). */
@@ -28,7 +28,7 @@ export interface ReleasePoint {
   /** Lateral offset toward the arm side, m, -2 to 2 (negative: glove side); default 0.4572 (1.5 ft). */
   readonly armSideM?: number;
   /** Throwing hand; default "right". */
-  readonly hand?: ThrowingHand;
+  readonly hand?: Hand;
 }
 
 /**
@@ -45,7 +45,7 @@ export function releasePosition(point: ReleasePoint = {}): Vec3 {
   assertInRange("release height", heightM, 0, 3, "m");
   assertInRange("release side", armSideM, -2, 2, "m");
   if (hand !== "right" && hand !== "left") throw new RangeError(`throwing hand "${hand}" must be "right" or "left"`);
-  return [hand === "right" ? -armSideM : armSideM, RUBBER_Y_M - extensionM, heightM];
+  return [armSideSign(hand) * armSideM, RUBBER_Y_M - extensionM, heightM];
 }
 
 /** Largest speed accepted at release, m/s (about 224 mph: beyond any thrown ball). */

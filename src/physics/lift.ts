@@ -11,7 +11,7 @@
  *   continuous at S = 0.1 (C_L = 0.15). Nathan 2008 measured C_L for S from
  *   about 0.09 to 0.6; the fit is an extrapolation outside that.
  */
-import { assertNonNegative } from "./check.js";
+import { assertNonNegative } from "../../geometry/check.js";
 
 export const LIFT_MODEL_NAMES = ["sawicki"] as const;
 export type LiftModelName = (typeof LIFT_MODEL_NAMES)[number];

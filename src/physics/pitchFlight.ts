@@ -9,11 +9,11 @@
  * flight crosses the front of the plate at the middle of a typical zone (x = 0,
  * z = 2.5 ft: common practice, no source) by a damped Newton iteration.
  */
-import { spinAxisFromTilt, TOWARD_PLATE } from "../../geometry/frames.js";
+import { spinAxisFromTilt, toArmSide, TOWARD_PLATE } from "../../geometry/frames.js";
 import type { Vec3 } from "../../geometry/vec.js";
 import type { Pitch } from "../screening/pitch.js";
 import { airState, reynoldsNumber, spinFactor, type AirConditions, type AirState } from "./air.js";
-import { BALL_RADIUS_M } from "./ball.js";
+import { BALL_RADIUS_M } from "../../geometry/ball.js";
 import type { DragModel } from "./drag.js";
 import { simulateFlight, type FlightOptions, type FlightResult, type Launch } from "./flight.js";
 import { releasePosition, releaseVelocity, type ReleasePoint } from "./launch.js";
@@ -26,7 +26,7 @@ import {
   type SeamForceModel,
   type SeamForceParams,
 } from "./seamForce.js";
-import { M_PER_FT, M_PER_IN } from "./units.js";
+import { M_PER_FT, M_PER_IN } from "../../geometry/units.js";
 
 /** Where an aimed pitch crosses the front of the plate: the middle of a typical zone, m. */
 export const ZONE_CENTRE_M: readonly [number, number] = [0, 2.5 * M_PER_FT];
@@ -152,11 +152,6 @@ export function flyPitch(input: PitchFlightInput): PitchFlight {
   };
 }
 
-/** A plate-plane offset (x toward the catcher's right, z up) as arm-side and up components for a hand. */
-export function toArmSide(xM: number, zM: number, hand: Pitch["hand"]): { armSideM: number; upM: number } {
-  // arm side is -x for a right-hander, +x for a left-hander (geometry/frames.ts)
-  return { armSideM: hand === "right" ? -xM : xM, upM: zM };
-}
 
 /** The seam part of the movement at the plate, inches toward the arm side and up (standard air unless given, aimed at the zone). */
 export function seamMovementIn(pitch: Pitch, axisBall: Readonly<Vec3>, seamForce: SeamForceParams = {}, air?: AirConditions): { armSideIn: number; upIn: number } {

@@ -12,7 +12,7 @@
  * value is claimed; choose one from the literature you trust). Over a 0.4 s pitch
  * any tau of tens of seconds changes the spin by only a few per cent.
  */
-import { assertPositive } from "./check.js";
+import { assertPositive } from "../../geometry/check.js";
 
 /**
  * The factor omega(t) / omega0 = exp(-t / tau).

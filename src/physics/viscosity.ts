@@ -7,7 +7,7 @@
  * This is dry air; water vapour changes the viscosity of air by well under 1 %
  * at the humidities a ballpark sees, so it is neglected.
  */
-import { assertInRange } from "./check.js";
+import { assertInRange } from "../../geometry/check.js";
 
 const SUTHERLAND_BETA = 1.458e-6;
 const SUTHERLAND_S_K = 110.4;

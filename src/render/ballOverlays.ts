@@ -3,7 +3,7 @@
  * and colours as in ballStyle.ts). Each function adds its marks to an svg.js group.
  */
 import type { G } from "@svgdotjs/svg.js";
-import { BALL_RADIUS_IN } from "../../geometry/seamCurve.js";
+import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import { findLandmarks } from "../../geometry/landmarks.js";
 import { cross3, dot3, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
 import type { Band } from "../sampling/band.js";

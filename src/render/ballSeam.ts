@@ -7,7 +7,7 @@
  * the limb as the real seam does. Each double stitch is a V: two legs from the band's
  * edges meeting on the seam's centre line, the point of the V toward increasing t.
  */
-import { BALL_RADIUS_IN } from "../../geometry/seamCurve.js";
+import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import { sampleSeam, seamLength } from "../../geometry/seamSamples.js";
 import { stitchLayout } from "../../geometry/stitches.js";
 import { depthRuns, projectPoints, type DiscPlacement, type View } from "./projection.js";

@@ -25,6 +25,7 @@ import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "
 import { createSvgCanvas, serializeSvg } from "./svgContext.js";
 import { pointsAttribute, polylinePath, relativePolygonPath } from "./svgPath.js";
 import { addText } from "./svgText.js";
+import { DEG } from "../../geometry/units.js";
 
 export interface MapMarker {
   /** Spin-axis direction (positive end), ball frame; normalised here. */
@@ -56,7 +57,6 @@ export interface SphereMapOptions {
   readonly idPrefix?: string;
 }
 
-const DEG = Math.PI / 180;
 /** Longest stretch of a parallel drawn as one straight segment, radians. */
 const MAX_EDGE_STEP_RAD = 3 * DEG;
 const NO_VALUE_COLOUR = "#b8b8b8";

@@ -14,7 +14,7 @@
  * regimes' separation lines can move the line from one regime toward the other.
  * The band spans that range, rounded outward to whole tens of degrees.
  */
-import { DEG } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 
 export interface Band {
   /** Band centre c, radians from the front stagnation point. */

@@ -42,6 +42,7 @@
  */
 import type { SeamSamples } from "../../geometry/seamSamples.js";
 import type { Band } from "./band.js";
+import { DEG } from "../../geometry/units.js";
 
 /** Below this k * rho a seam point is on the spin axis: it does not move (unit-sphere length). */
 const ON_AXIS = 1e-12;
@@ -343,7 +344,6 @@ function warmUp(): void {
     pts[3 * i] = Math.sqrt((1 - z) * (1 + z));
     pts[3 * i + 2] = z;
   });
-  const deg = Math.PI / 180;
   const run = (gyroRad: number, fromDeg: number, toDeg: number, points: number): void => {
     const s = Math.sin(gyroRad);
     const k = Math.cos(gyroRad);
@@ -352,8 +352,8 @@ function warmUp(): void {
     IO[2] = 1;
     IO[3] = s;
     IO[4] = k;
-    IO[5] = Math.cos(toDeg * deg);
-    IO[6] = Math.cos(fromDeg * deg);
+    IO[5] = Math.cos(toDeg * DEG);
+    IO[6] = Math.cos(fromDeg * DEG);
     IO[7] = s !== 0 ? (k * k) / s : 0;
     accumulate(pts, points);
   };

@@ -23,7 +23,7 @@
  */
 import { coverRegion, type CoverModel, type CoverRegion } from "../../geometry/coverRegions.js";
 import { angleToSeam } from "../../geometry/landmarks.js";
-import { BALL_RADIUS_IN } from "../../geometry/seamCurve.js";
+import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import type { SeamSamples } from "../../geometry/seamSamples.js";
 import { cross3, dot3, perpendicularUnit, rotateAbout, unit3, type Vec3 } from "../../geometry/vec.js";
 import type { PitchFrame } from "./pitch.js";

@@ -9,24 +9,15 @@
  * pitch's spin axis fixes the line of the push; the seam orientation sets its sign
  * and size. `pushInField` turns the sampler's `alongAxis` into field terms.
  */
-import {
-  armSideDirection,
-  clockToAngle,
-  directionToClockAngle,
-  spinAxisFromTilt,
-  TOWARD_PLATE,
-  type ClockView,
-  type Hand,
-} from "../../geometry/frames.js";
-import { DEG, dot3, unit3, type Vec3 } from "../../geometry/vec.js";
+import { armSideDirection, directionToClockAngle, spinAxisFromTilt, TOWARD_PLATE, type ClockView, type Hand, HANDS, VIEWS } from "../../geometry/frames.js";
+import { clockToAngle } from "../../geometry/clock.js";
+import { dot3, unit3, type Vec3 } from "../../geometry/vec.js";
+import { DEG, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 
 export type Want = "arm" | "glove" | "up" | "down" | "any";
 export const WANTS: readonly Want[] = ["arm", "glove", "up", "down", "any"];
-export const HANDS: readonly Hand[] = ["right", "left"];
-export const VIEWS: readonly ClockView[] = ["pitcher", "catcher"];
+export { HANDS, VIEWS };
 
-export const MPH_TO_M_PER_S = 0.44704;
-export const RPM_TO_RAD_PER_S = (2 * Math.PI) / 60;
 
 /** Accepted ranges (at the edges, in the user's units). */
 export const SPEED_RANGE_MPH: readonly [number, number] = [30, 110];
@@ -114,11 +105,11 @@ export function scoreFactor(frame: PitchFrame, want: Want): number | null {
 
 /** Checks a pitch's numbers, throwing RangeError with the field's name and the expected range. */
 export function assertPitch(p: Pitch): void {
-  const speedMph = p.speedMPerS / MPH_TO_M_PER_S;
+  const speedMph = p.speedMPerS / M_PER_S_PER_MPH;
   if (!(speedMph >= SPEED_RANGE_MPH[0] && speedMph <= SPEED_RANGE_MPH[1])) {
     throw new RangeError(`speed ${fmt(speedMph)} mph must be from ${SPEED_RANGE_MPH[0]} to ${SPEED_RANGE_MPH[1]} mph`);
   }
-  const spinRpm = p.spinRadPerS / RPM_TO_RAD_PER_S;
+  const spinRpm = p.spinRadPerS / RAD_PER_S_PER_RPM;
   if (!(spinRpm >= SPIN_RANGE_RPM[0] && spinRpm <= SPIN_RANGE_RPM[1])) {
     throw new RangeError(`spin ${fmt(spinRpm)} rpm must be from ${SPIN_RANGE_RPM[0]} to ${SPIN_RANGE_RPM[1]} rpm`);
   }

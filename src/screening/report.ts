@@ -4,8 +4,9 @@
  * numbers agree everywhere they appear.
  */
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
-import { angleToClock, formatClock } from "../../geometry/frames.js";
-import { DEG, type Vec3 } from "../../geometry/vec.js";
+import { angleToClock, formatClock } from "../../geometry/clock.js";
+import { type Vec3 } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import type { ScreenResult, ScreenedOrientation } from "./screen.js";
 import { pushInField } from "./pitch.js";
 

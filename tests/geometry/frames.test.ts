@@ -1,19 +1,10 @@
 import { describe, expect, it } from "vitest";
-import {
-  armSideDirection,
-  clockToAngle,
-  formatClock,
-  parseClock,
-  spinAxisFromTilt,
-  spinEfficiency,
-  tiltFromSpinAxis,
-  angleToClock,
-  gyroFromEfficiency,
-} from "../../geometry/frames.js";
+import { armSideDirection, spinAxisFromTilt, spinEfficiency, tiltFromSpinAxis, gyroFromEfficiency } from "../../geometry/frames.js";
+import { clockToAngle, formatClock, parseClock, angleToClock } from "../../geometry/clock.js";
 import { cross3 } from "../../geometry/vec.js";
 import { lcg } from "../helpers.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 const close3 = (a: readonly number[], b: readonly number[], tol: number) => a.forEach((v, i) => expect(Math.abs(v - b[i])).toBeLessThan(tol));
 
 describe("field frame, tilt clock and gyro", () => {

@@ -1,19 +1,9 @@
 import { describe, expect, it } from "vitest";
-import {
-  assertSeamShape,
-  BALL_CIRCUMFERENCE_IN,
-  COVER_WAIST_ARC_IN,
-  DEFAULT_SEAM_SHAPE,
-  isValidSeamShape,
-  seamPoint,
-  seamShapeFromWaist,
-  seamSpeed,
-  seamTangent,
-  waistTipAngleRad,
-} from "../../geometry/seamCurve.js";
+import { assertSeamShape, DEFAULT_SEAM_SHAPE, isValidSeamShape, seamPoint, seamShapeFromWaist, seamSpeed, seamTangent, waistTipAngleRad } from "../../geometry/seamCurve.js";
+import { BALL_CIRCUMFERENCE_IN, COVER_WAIST_ARC_IN } from "../../geometry/ball.js";
 import { sampleSeam, seamLength } from "../../geometry/seamSamples.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 
 describe("seam curve", () => {
   it("lies on the unit sphere for every b (published identity x^2 + y^2 + z^2 = (a + b)^2), to 1e-15", () => {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { equalAreaGrid, orbitRepresentatives, symmetryImage } from "../../geometry/sphereGrid.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 
 describe("equal-area ring grid", () => {
   const grid = equalAreaGrid(1 * DEG);

@@ -1,7 +1,8 @@
 import { Quaternion, Vector3 } from "three";
 import { describe, expect, it } from "vitest";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
-import { DEG, type Vec3 } from "../../geometry/vec.js";
+import { type Vec3 } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import { DEFAULT_BAND } from "../../src/sampling/band.js";
 import { SPLIT_TIE } from "../../src/sampling/exact.js";
 import { measureOrientation, seamFor, TIMELINE_STEPS } from "../../src/sampling/measure.js";

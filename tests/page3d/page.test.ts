@@ -8,7 +8,7 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEG } from "../../geometry/vec.js";
+import { DEG } from "../../geometry/units.js";
 import { percent } from "../../src/cli/format.js";
 import { fmtScore, runScreens } from "../../src/cli/screen.js";
 import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, bandFromDegrees } from "../../src/sampling/band.js";

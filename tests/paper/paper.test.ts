@@ -2,7 +2,7 @@ import { existsSync, mkdtempSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { formatScore } from "../../src/screening/numbers.js";
+import { formatScore } from "../../src/render/numbers.js";
 import { runCli, ROOT } from "../cli/run.js";
 import { inkSpread, itWithPoppler, pdfPages, pdfPageSizePt, pdfText, renderGray } from "./tools.js";
 import { loadLayout } from "../../src/render/paper/layouts.js";

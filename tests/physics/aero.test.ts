@@ -7,7 +7,7 @@ import {
   parseDragModelName,
   parseLiftModelName,
 } from "../../src/physics/aero.js";
-import { crossSectionM2 } from "../../src/physics/ball.js";
+import { crossSectionM2 } from "../../geometry/ball.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
 const sawicki = { name: "sawicki" } as const;

@@ -8,7 +8,7 @@ import {
   standardAtmosphere,
   sutherlandViscosity,
 } from "../../src/physics/air.js";
-import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../src/physics/units.js";
+import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
 describe("U.S. Standard Atmosphere 1976, troposphere", () => {

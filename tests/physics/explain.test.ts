@@ -2,11 +2,12 @@ import { describe, expect, it } from "vitest";
 import { latLonToVector } from "../../geometry/ballCoords.js";
 import { Explainer, EXPLAIN_MODEL } from "../../src/physics/explain.js";
 import { releasePosition } from "../../src/physics/launch.js";
-import { flyPitch, toArmSide } from "../../src/physics/pitchFlight.js";
+import { flyPitch } from "../../src/physics/pitchFlight.js";
+import { toArmSide } from "../../geometry/frames.js";
 import { symmetricAngle } from "../../src/screening/screen.js";
 import { sinkerPitch } from "../helpers.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 const sinker = sinkerPitch();
 
 describe("explain", () => {

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { airState } from "../../src/physics/air.js";
-import { crossSectionM2 } from "../../src/physics/ball.js";
+import { BALL_RADIUS_M, crossSectionM2 } from "../../geometry/ball.js";
 import { PLATE_FRONT_Y_M } from "../../src/physics/field.js";
 import { simulateFlight, type Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
-import { M_PER_S_PER_MPH, RAD_PER_DEG, RAD_PER_S_PER_RPM } from "../../src/physics/units.js";
+import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
 const G = 9.80665;
@@ -53,7 +53,7 @@ describe("drag only, gravity off, constant C_D: closed-form quadratic drag", () 
       { air: { ...seaLevel, densityKgM3: rho }, drag: { name: "constant", dragCoefficient: cd }, gravityMPerS2: 0, ballMassKg: massKg, stepS },
     );
   const exact = (massKg: number) => {
-    const k = (rho * crossSectionM2(0.0364) * cd) / (2 * massKg);
+    const k = (rho * crossSectionM2(BALL_RADIUS_M) * cd) / (2 * massKg);
     return { tS: (Math.exp(k * d) - 1) / (k * v0), vMPerS: v0 * Math.exp(-k * d) };
   };
 
@@ -81,7 +81,7 @@ describe("RK4 order on a full pitch (gravity, Giordano drag, Sawicki Magnus)", (
   it("halving the step from 20 ms to 10 ms divides the plate-height error by 12 to 20 (reference: 0.25 ms)", () => {
     const launch: Launch = {
       releasePositionM: releasePosition(),
-      releaseVelocityMPerS: releaseVelocity(95 * M_PER_S_PER_MPH, -1.5 * RAD_PER_DEG, 1 * RAD_PER_DEG),
+      releaseVelocityMPerS: releaseVelocity(95 * M_PER_S_PER_MPH, -1.5 * DEG, 1 * DEG),
       spinRadPerS: [-2200 * RAD_PER_S_PER_RPM, 0, 600 * RAD_PER_S_PER_RPM],
     };
     const z = (stepS: number) => simulateFlight(launch, { stepS }).plateCrossingM[2];

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { PLATE_FRONT_Y_M, RUBBER_Y_M } from "../../src/physics/field.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
-import { M_PER_FT, M_PER_IN, M_PER_S_PER_MPH, RAD_PER_DEG } from "../../src/physics/units.js";
+import { M_PER_FT, M_PER_IN, M_PER_S_PER_MPH, DEG } from "../../geometry/units.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
 describe("field geometry (Official Baseball Rules 2.01, 2.02, 2.04)", () => {
@@ -32,8 +32,8 @@ describe("release velocity from speed and angles", () => {
   it("has the given speed (95 mph = 42.4688 m/s exactly) and its direction returns the angles, within 1e-12", () => {
     const speed = 95 * M_PER_S_PER_MPH;
     expectAbsolute(speed, 42.4688, 1e-12);
-    const up = -2 * RAD_PER_DEG;
-    const side = 3 * RAD_PER_DEG;
+    const up = -2 * DEG;
+    const side = 3 * DEG;
     const [vx, vy, vz] = releaseVelocity(speed, up, side);
     expectRelative(Math.hypot(vx, vy, vz), speed, 1e-12);
     expectAbsolute(Math.atan2(vz, Math.hypot(vx, vy)), up, 1e-12);

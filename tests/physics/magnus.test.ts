@@ -1,18 +1,18 @@
 import { describe, expect, it } from "vitest";
 import { airState } from "../../src/physics/air.js";
 import { sawickiLiftCoefficient } from "../../src/physics/lift.js";
-import { crossSectionM2 } from "../../src/physics/ball.js";
+import { BALL_RADIUS_M, crossSectionM2 } from "../../geometry/ball.js";
 import { PLATE_FRONT_Y_M } from "../../src/physics/field.js";
 import { simulateFlight, type Launch } from "../../src/physics/flight.js";
 import { releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
-import { M_PER_S_PER_MPH, RAD_PER_DEG, RAD_PER_S_PER_RPM } from "../../src/physics/units.js";
-import type { Vec3 } from "../../src/physics/vec3.js";
+import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
+import type { Vec3 } from "../../geometry/vec.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
 const air = airState();
 const MASS_KG = 0.145;
-const AREA_M2 = crossSectionM2(0.0364);
+const AREA_M2 = crossSectionM2(BALL_RADIUS_M);
 const Y0_M = 16.6116;
 const RPM = RAD_PER_S_PER_RPM;
 
@@ -20,7 +20,7 @@ const RPM = RAD_PER_S_PER_RPM;
 function pitch(spinRadPerS: Vec3, mph = 95): Launch {
   return {
     releasePositionM: [0, Y0_M, 1.8288],
-    releaseVelocityMPerS: releaseVelocity(mph * M_PER_S_PER_MPH, -1.5 * RAD_PER_DEG, 0),
+    releaseVelocityMPerS: releaseVelocity(mph * M_PER_S_PER_MPH, -1.5 * DEG, 0),
     spinRadPerS,
   };
 }
@@ -36,7 +36,7 @@ describe("Magnus force alone: uniform circular motion (closed form)", () => {
     { releasePositionM: [0, Y0_M, 1.8], releaseVelocityMPerS: [0, -v0, 0], spinRadPerS: [0, 0, omega] },
     { drag: { name: "constant", dragCoefficient: 0 }, gravityMPerS2: 0 },
   );
-  const radiusM = (2 * MASS_KG) / (air.densityKgM3 * AREA_M2 * sawickiLiftCoefficient((0.0364 * omega) / v0));
+  const radiusM = (2 * MASS_KG) / (air.densityKgM3 * AREA_M2 * sawickiLiftCoefficient((BALL_RADIUS_M * omega) / v0));
   const d = Y0_M - PLATE_FRONT_Y_M;
 
   it("crosses the plate at x = r - sqrt(r^2 - d^2) within 1e-9 relative, z unchanged within 1e-12 m", () => {
@@ -76,7 +76,7 @@ describe("Magnus deflection in a full pitch (gravity, Giordano drag, Sawicki lif
     const omega = 2300 * RPM;
     const launch = pitch([-omega, 0, 0]);
     const m = movementVersusSpinless(launch);
-    const accel = (v: number) => (0.5 * air.densityKgM3 * AREA_M2 * sawickiLiftCoefficient((0.0364 * omega) / v) * v * v) / MASS_KG;
+    const accel = (v: number) => (0.5 * air.densityKgM3 * AREA_M2 * sawickiLiftCoefficient((BALL_RADIUS_M * omega) / v) * v * v) / MASS_KG;
     const v0 = Math.hypot(...launch.releaseVelocityMPerS);
     const t = m.flight.timeToPlateS;
     const estimate = 0.5 * ((accel(v0) + accel(m.flight.speedAtPlateMPerS)) / 2) * t * t;
@@ -85,7 +85,7 @@ describe("Magnus deflection in a full pitch (gravity, Giordano drag, Sawicki lif
 
   it("only transverse spin lifts (Sawicki et al. 2003): 2400 rpm at 60 deg gyro rises like 1200 rpm pure backspin within 1 %", () => {
     const w0 = 2400 * RPM;
-    const phi = 60 * RAD_PER_DEG;
+    const phi = 60 * DEG;
     const base = { releasePositionM: [0, Y0_M, 1.8] as Vec3, releaseVelocityMPerS: [0, -40, 0] as Vec3 };
     const gyro = movementVersusSpinless({ ...base, spinRadPerS: [-w0 * Math.cos(phi), -w0 * Math.sin(phi), 0] });
     const back = movementVersusSpinless({ ...base, spinRadPerS: [-w0 * Math.cos(phi), 0, 0] });

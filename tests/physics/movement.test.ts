@@ -4,13 +4,13 @@ import type { SeamForceHook } from "../../src/physics/forces.js";
 import { simulateFlight, type Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
-import { M_PER_S_PER_MPH, RAD_PER_DEG, RAD_PER_S_PER_RPM } from "../../src/physics/units.js";
+import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
 const MASS_KG = 0.145;
 const noSpin: Launch = {
   releasePositionM: releasePosition(),
-  releaseVelocityMPerS: releaseVelocity(90 * M_PER_S_PER_MPH, -1 * RAD_PER_DEG, 1 * RAD_PER_DEG),
+  releaseVelocityMPerS: releaseVelocity(90 * M_PER_S_PER_MPH, -1 * DEG, 1 * DEG),
   spinRadPerS: [0, 0, 0],
 };
 const constantForce =

@@ -6,7 +6,7 @@ import { DEFAULT_BAND } from "../../src/sampling/band.js";
 import { bandAveragesExact } from "../../src/sampling/exact.js";
 import { seamFor } from "../../src/sampling/measure.js";
 import { airState } from "../../src/physics/air.js";
-import { BALL_MASS_KG, BALL_RADIUS_M, crossSectionM2 } from "../../src/physics/ball.js";
+import { BALL_MASS_KG, BALL_RADIUS_M, crossSectionM2 } from "../../geometry/ball.js";
 import {
   instantaneousSeamForceCoefficient,
   seamForceHook,
@@ -14,7 +14,7 @@ import {
   seamForceTimeline,
   turnAveragedSeamForceCoefficient,
 } from "../../src/physics/seamForce.js";
-import { M_PER_S_PER_MPH, RAD_PER_DEG } from "../../src/physics/units.js";
+import { M_PER_S_PER_MPH, DEG } from "../../geometry/units.js";
 import {
   meridianSideIntegral,
   meridianSideIntegralFromCos,
@@ -24,7 +24,6 @@ import {
 import { lcg, randomUnit } from "../helpers.js";
 import { expectAbsolute, expectRelative } from "./tolerance.js";
 
-const DEG = RAD_PER_DEG;
 type V3 = [number, number, number];
 const model = seamForceModel();
 

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "../../src/render/hammer.js";
 import { shoelaceArea } from "./svgCheck.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 
 /** Area of the image of the lon/lat cell [lon0, lon1] x [lat0, lat1] under `f`, edges sampled finely (shoelace). */
 function imageArea(f: (lon: number, lat: number) => [number, number], lon0: number, lon1: number, lat0: number, lat1: number): number {

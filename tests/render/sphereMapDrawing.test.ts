@@ -4,8 +4,8 @@ import { rampColor } from "../../src/render/colorScale.js";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject } from "../../src/render/hammer.js";
 import { renderSphereMapSvg } from "../../src/render/sphereMapDrawing.js";
 import { elements, shoelaceArea, subpaths, texts, xmlProblems } from "./svgCheck.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 const grid = equalAreaGrid(4 * DEG);
 // value = height z of the cell centre: uniform over the sphere's area (Archimedes' hat-box theorem)
 const heights = new Float64Array(grid.count).map((_, i) => grid.points[3 * i + 2]);

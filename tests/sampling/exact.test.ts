@@ -7,8 +7,8 @@ import { bandAveragesBrute } from "../../src/sampling/brute.js";
 import { bandAveragesExact } from "../../src/sampling/exact.js";
 import { computeSphereMap } from "../../src/sampling/sphereMap.js";
 import { lcg, randomUnit } from "../helpers.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 const KEYS = ["seamInBand", "axisPlus", "axisMinus", "magnusPlus", "magnusMinus", "alongAxis", "alongMagnus", "magnitude"] as const;
 
 describe("exact time-averaged sampler", () => {

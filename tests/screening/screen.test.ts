@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { clockToAngle, parseClock, angleToClock, formatClock } from "../../geometry/frames.js";
+import { clockToAngle, parseClock, angleToClock, formatClock } from "../../geometry/clock.js";
 import { equalAreaGrid } from "../../geometry/sphereGrid.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
 import { angleBetween } from "../../geometry/vec.js";
@@ -11,8 +11,8 @@ import { robustness } from "../../src/screening/robustness.js";
 import { screenPitch, symmetricAngle } from "../../src/screening/screen.js";
 import { DEFAULT_BAND } from "../../src/sampling/band.js";
 import { sinkerPitch } from "../helpers.js";
+import { DEG } from "../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 const pitch = (over: Partial<Pitch> = {}): Pitch => sinkerPitch({ name: "test", ...over });
 
 describe("screen", () => {

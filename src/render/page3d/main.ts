@@ -8,12 +8,13 @@
  * timeline with `measureOrientation`, exactly as `seam-atlas measure` does.
  */
 import { stitchLayout } from "../../../geometry/stitches.js";
-import { DEG } from "../../../geometry/vec.js";
+import { DEG } from "../../../geometry/units.js";
 import { bandFromDegrees, type Band } from "../../sampling/band.js";
 import { measureOrientation, seamFor } from "../../sampling/measure.js";
 import { BallScene, NoWebGLError } from "./ballScene.js";
 import { listOrientations, pitchLabel, type ListedOrientation, type ViewData, type ViewPitch } from "./data.js";
-import { oppositeClock, percentText } from "./numbers.js";
+import { oppositeClock } from "../../../geometry/clock.js";
+import { percent as percentText } from "../numbers.js";
 import { OrbitControl, type OrbitView } from "./orbit.js";
 import { fieldToWorld } from "./sceneMath.js";
 import { PAGE_IDS } from "./pageIds.js";
@@ -142,7 +143,7 @@ function start(): void {
     orbit?.setHome(homeView(pitch()));
     const clock = report.pushLine.clock;
     element(PAGE_IDS.sidePlusLabel).textContent = `+ side (toward ${clock ?? "-"})`;
-    element(PAGE_IDS.sideMinusLabel).textContent = `\u2212 side (toward ${oppositeClock(clock)})`;
+    element(PAGE_IDS.sideMinusLabel).textContent = `\u2212 side (toward ${oppositeClock(clock) ?? "-"})`;
     listed = listOrientations(report);
     renderOrientationList(list, listed, 0, chooseOrientation);
     chooseOrientation(0);

@@ -7,8 +7,8 @@
  * from the horizontal plane.
  */
 import type { PerspectiveCamera } from "three";
+import { DEG } from "../../../geometry/units.js";
 
-const DEG = Math.PI / 180;
 /** Elevation stays short of straight up or down so "up" never flips. */
 const ELEVATION_LIMIT_RAD = 85 * DEG;
 const DISTANCE_RANGE: readonly [number, number] = [3, 14];

@@ -6,7 +6,7 @@
  */
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import type { ListedOrientation } from "./data.js";
-import { fixedDigits, percentText, thousandthsText } from "./numbers.js";
+import { fixed as fixedDigits, formatScore as thousandthsText, percent as percentText } from "../numbers.js";
 
 const WANT_WORDS: Record<string, string> = { arm: "toward the arm side", glove: "toward the glove side", up: "up", down: "down", any: "any direction" };
 

@@ -10,7 +10,7 @@
  * shared formats, so it equals what `screen --json` gives.
  */
 import type { Band } from "../../sampling/band.js";
-import { fixed, formatMovementIn, formatScore } from "../../screening/numbers.js";
+import { fixed, formatMovementIn, formatScore } from "../numbers.js";
 import type { ScreenReport } from "../../screening/report.js";
 import type { ScreenResult } from "../../screening/screen.js";
 import { TOOL_VERSION } from "../../version.js";

@@ -6,10 +6,10 @@
  */
 import { findLandmarks } from "../../../geometry/landmarks.js";
 import { latLonToVector } from "../../../geometry/ballCoords.js";
-import { DEG } from "../../../geometry/vec.js";
+import { DEG } from "../../../geometry/units.js";
 import type { Band } from "../../sampling/band.js";
 import { measureOrientation } from "../../sampling/measure.js";
-import { fixed } from "../../screening/numbers.js";
+import { fixed } from "../numbers.js";
 import type { Layout } from "./layouts.js";
 import { addPage, drawSvg, finish, newDocument, PT_PER_IN, textInBox } from "./pdfDoc.js";
 import { renderTimelineSvg } from "./timelineChart.js";

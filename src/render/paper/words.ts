@@ -3,7 +3,7 @@
  * screen report's numbers (src/screening/report.ts), with the shared number
  * formats (src/screening/numbers.ts), so the paper says what `screen --json` says.
  */
-import { fixed, formatInches, formatMovementIn, formatScore } from "../../screening/numbers.js";
+import { fixed, formatInches, formatMovementIn, formatScore } from "../numbers.js";
 import type { FingerReport, OrientationReport, ScreenReport } from "../../screening/report.js";
 
 /** The safety caution every card, atlas and handout carries (our wording). */

@@ -3,7 +3,7 @@
  * its arguments with these and throws a one-line RangeError naming the bad value
  * and the accepted range; the CLI turns RangeError into a one-line error, exit 2.
  */
-import type { Vec3 } from "./vec3.js";
+import type { Vec3 } from "./vec.js";
 
 /** Throws RangeError unless `value` is a finite number in [lo, hi]. */
 export function assertInRange(label: string, value: number, lo: number, hi: number, unit: string): void {
