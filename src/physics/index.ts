@@ -19,3 +19,5 @@ export { armSideBreakM, OLDER_TRADE_WINDOW_START_M, TRADE_WINDOW_START_M, tradeM
 export type { ConstantAccelerationFit, TradeBreak, TradeMovement, TradeMovementOptions } from "./tradeMovement.js";
 export { tradeMovementParts } from "./tradeMovementParts.js";
 export type { TradeMovementParts, TradeWindowOptions } from "./tradeMovementParts.js";
+export { compareMovementDirections, DIRECTION_ZERO_M, movementClockMinutes } from "./movementDirection.js";
+export type { ClockReading, DirectionComparison, PlateMovement } from "./movementDirection.js";
