@@ -11,6 +11,13 @@
  *
  * Gravity is standard gravity g0 = 9.80665 m/s^2 by default. The ground is not
  * modelled: a pitch that would bounce just crosses the plate plane below z = 0.
+ *
+ * An optional `trajectory` callback sees the path as the integrator makes it:
+ * release (t = 0), the state after every full step, and the cut point on the
+ * plate plane (the last full step, which passes the plate, is not reported).
+ * It gets four numbers, so recording allocates only what the caller chooses
+ * (trajectory.ts keeps them in growable typed arrays), and a flight without it
+ * pays one untaken branch per step.
  */
 import { airState, type AirState } from "./air.js";
 import { assertBall, BALL_MASS_KG, BALL_RADIUS_M } from "../../geometry/ball.js";
@@ -34,6 +41,12 @@ export interface Launch {
   /** Spin vector omega, rad/s (right-hand rule), |omega| at most 1000 rad/s (about 9550 rpm). */
   readonly spinRadPerS: Readonly<Vec3>;
 }
+
+/**
+ * Receives one trajectory point: time since release, s, and position, m, field
+ * frame. Called in time order; must not throw.
+ */
+export type TrajectoryCallback = (tS: number, xM: number, yM: number, zM: number) => void;
 
 export interface FlightOptions {
   /** Air; default airState() (1976 standard atmosphere at sea level, dry: 1.225 kg/m^3). */
@@ -62,6 +75,13 @@ export interface FlightOptions {
   readonly plateYM?: number;
   /** Give up (RangeError) if the ball has not reached the plate after this long, s, 0 to 60; default 10. */
   readonly maxFlightTimeS?: number;
+  /**
+   * Called at release, after every full RK4 step and at the plate crossing
+   * (see the file header); default none. Helpers that fly several flights from
+   * one set of options (movementVersusSpinless, aimLaunch) pass it to the main
+   * flight only, or to none.
+   */
+  readonly trajectory?: TrajectoryCallback;
 }
 
 export interface FlightResult {
@@ -168,6 +188,8 @@ export function simulateFlight(launch: Launch, options: FlightOptions = {}): Fli
   const state = Float64Array.of(p0[0], p0[1], p0[2], v0[0], v0[1], v0[2]);
   const previous = new Float64Array(6);
   const maxSteps = Math.ceil(maxFlightTimeS / h);
+  const trajectory = options.trajectory;
+  if (trajectory !== undefined) trajectory(0, p0[0], p0[1], p0[2]);
 
   for (let n = 0; n < maxSteps; n++) {
     previous.set(state);
@@ -180,6 +202,7 @@ export function simulateFlight(launch: Launch, options: FlightOptions = {}): Fli
     if (state[1] <= plateYM) {
       const dt = cutAtPlane(stepper, tPrevious, previous, h, plateYM, state);
       const t = tPrevious + dt;
+      if (trajectory !== undefined) trajectory(t, state[0], state[1], state[2]);
       const decay = spinDecayFactor(t, tau);
       const vx = state[3];
       const vy = state[4];
@@ -195,6 +218,7 @@ export function simulateFlight(launch: Launch, options: FlightOptions = {}): Fli
         steps: n,
       };
     }
+    if (trajectory !== undefined) trajectory((n + 1) * h, state[0], state[1], state[2]);
   }
   throw new RangeError(
     `ball did not reach the plate plane y = ${plateYM} m within ${maxFlightTimeS} s (release speed ${speed0.toPrecision(4)} m/s): throw it faster or more directly toward the plate`,

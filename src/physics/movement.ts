@@ -42,16 +42,19 @@ function offset(a: FlightResult, b: FlightResult): PlateOffset {
 
 /**
  * Break of a pitch versus the spinless flight, split into Magnus and seam parts.
- * Runs two flights without a seam hook, four with one.
+ * Runs two flights without a seam hook, four with one. A `trajectory` callback in
+ * the options sees the full flight only.
  *
  * @throws RangeError as simulateFlight does.
  */
 export function movementVersusSpinless(launch: Launch, options: FlightOptions = {}): Movement {
   const flight = simulateFlight(launch, options);
-  const spinless = simulateFlight(launch, { ...options, magnus: false, seamForce: undefined });
+  // only the flight as given reports its trajectory
+  const others: FlightOptions = { ...options, trajectory: undefined };
+  const spinless = simulateFlight(launch, { ...others, magnus: false, seamForce: undefined });
   const hasSeam = options.seamForce !== undefined;
-  const magnusOnly = hasSeam ? simulateFlight(launch, { ...options, seamForce: undefined }) : flight;
-  const seamOnly = hasSeam ? simulateFlight(launch, { ...options, magnus: false }) : spinless;
+  const magnusOnly = hasSeam ? simulateFlight(launch, { ...others, seamForce: undefined }) : flight;
+  const seamOnly = hasSeam ? simulateFlight(launch, { ...others, magnus: false }) : spinless;
   const breakM = offset(flight, spinless);
   const magnusBreakM = offset(magnusOnly, spinless);
   const seamBreakM = offset(seamOnly, spinless);

@@ -83,7 +83,7 @@ export function seamModelFor(params: SeamForceParams = {}): SeamForceModel {
   return m;
 }
 
-/** Launch angles that put `options`' flight through `target` (x, z) at the plate. */
+/** Launch angles that put `options`' flight through `target` (x, z) at the plate (a `trajectory` callback in `options` is not called). */
 export function aimLaunch(
   position: Readonly<Vec3>,
   speedMPerS: number,
@@ -95,8 +95,10 @@ export function aimLaunch(
   const dy = position[1];
   let v = Math.atan2(target[1] - position[2], dy) + (9.80665 * dy) / (2 * speedMPerS * speedMPerS);
   let h = Math.atan2(target[0] - position[0], dy);
+  // the trial flights report no trajectory
+  const trial: FlightOptions = { ...options, trajectory: undefined };
   const miss = (vr: number, hr: number): [number, number] => {
-    const f = simulateFlight({ releasePositionM: position, releaseVelocityMPerS: releaseVelocity(speedMPerS, vr, hr), spinRadPerS: spin }, options);
+    const f = simulateFlight({ releasePositionM: position, releaseVelocityMPerS: releaseVelocity(speedMPerS, vr, hr), spinRadPerS: spin }, trial);
     return [f.plateCrossingM[0] - target[0], f.plateCrossingM[2] - target[1]];
   };
   for (let it = 0; it < AIM_MAX_ITERATIONS; it++) {
