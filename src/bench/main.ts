@@ -14,18 +14,15 @@ import { bandAveragesExact, emptyAverages } from "../sampling/exact.js";
 import { seamFor } from "../sampling/measure.js";
 import { computeSphereMap } from "../sampling/sphereMap.js";
 import { projectRoot, TOOL_VERSION } from "../version.js";
-import { pitchesFromFile } from "../cli/pitchInput.js";
+import { demoStaffPath, pitchesFromFile } from "../jobs/request/pitch.js";
+import { parseAtlas, runAtlas } from "../jobs/paper.js";
 import { screenPitch } from "../screening/screen.js";
 import { Explainer } from "../physics/explain.js";
 import { simulateFlight } from "../physics/flight.js";
 import { releasePosition, releaseVelocity } from "../physics/launch.js";
 import { airState } from "../physics/air.js";
 import { seamForceHook } from "../physics/seamForce.js";
-import { seamMovementIn, spinVector } from "../physics/pitchFlight.js";
-import { renderAtlasPdf } from "../render/paper/atlas.js";
-import { loadLayout } from "../render/paper/layouts.js";
-import { screenReport } from "../screening/report.js";
-import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG } from "../sampling/band.js";
+import { spinVector } from "../physics/pitchFlight.js";
 
 const BRUTE_STEPS = 720;
 
@@ -101,7 +98,7 @@ async function main(): Promise<void> {
     mapSeconds = Math.min(mapSeconds, (performance.now() - t0) / 1000);
   }
   // screening: the default screen of one pitch, then the whole demo staff
-  const staff = pitchesFromFile(join(projectRoot(), "templates", "demo-staff.json")).pitches;
+  const staff = pitchesFromFile(demoStaffPath()).pitches;
   screenPitch(staff[1].pitch); // warm-up
   let screenSeconds = Infinity;
   for (let rep = 0; rep < 3; rep++) {
@@ -133,13 +130,7 @@ async function main(): Promise<void> {
   const explainRowsPerSecond = rows / ((performance.now() - t1) / 1000);
   // the demo staff's atlas, as `seam-atlas atlas --demo` makes it (default settings, top 4)
   const tAtlas = performance.now();
-  const atlasPitches = staff.map((p) => {
-    const result = screenPitch(p.pitch, { top: 4 });
-    const report = screenReport(result, p.echo, DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG);
-    const movements = [...result.candidates, ...result.references].map((o) => seamMovementIn(p.pitch, o.axis));
-    return { result, report, movements };
-  });
-  const atlas = await renderAtlasPdf({ layout: loadLayout(join(projectRoot(), "templates", "layouts"), "atlas-letter"), pitches: atlasPitches, band: DEFAULT_BAND, seamShape: DEFAULT_SEAM_SHAPE });
+  const atlas = await runAtlas(parseAtlas({ demo: true }));
   const atlasSeconds = (performance.now() - tAtlas) / 1000;
   const mem = process.memoryUsage();
   const result = {

@@ -1,12 +1,7 @@
 /** Input errors: one clear line on stderr, exit status 2, no stack trace. */
+import { InputError } from "../io/errors.js";
 
-/** An error in what the user gave: reported as one line, exit status 2. */
-export class InputError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = "InputError";
-  }
-}
+export { InputError };
 
 export const EXIT_BAD_INPUT = 2;
 export const EXIT_INTERNAL = 1;

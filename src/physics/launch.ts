@@ -20,6 +20,13 @@ export const DEFAULT_RELEASE_HEIGHT_M = 6.0 * M_PER_FT;
 export const DEFAULT_RELEASE_SIDE_M = 1.5 * M_PER_FT;
 
 
+/** Accepted release extension, m (0 to 3 m, about 0 to 9.8 ft). */
+export const RELEASE_EXTENSION_RANGE_M: readonly [number, number] = [0, 3];
+/** Accepted release height above the ground, m. */
+export const RELEASE_HEIGHT_RANGE_M: readonly [number, number] = [0, 3];
+/** Accepted release side toward the arm side, m (negative: glove side). */
+export const RELEASE_SIDE_RANGE_M: readonly [number, number] = [-2, 2];
+
 export interface ReleasePoint {
   /** Distance in front of the rubber toward home, m, 0 to 3; default 1.8288 (6 ft). */
   readonly extensionM?: number;
@@ -41,9 +48,9 @@ export function releasePosition(point: ReleasePoint = {}): Vec3 {
   const heightM = point.heightM ?? DEFAULT_RELEASE_HEIGHT_M;
   const armSideM = point.armSideM ?? DEFAULT_RELEASE_SIDE_M;
   const hand = point.hand ?? "right";
-  assertInRange("release extension", extensionM, 0, 3, "m");
-  assertInRange("release height", heightM, 0, 3, "m");
-  assertInRange("release side", armSideM, -2, 2, "m");
+  assertInRange("release extension", extensionM, RELEASE_EXTENSION_RANGE_M[0], RELEASE_EXTENSION_RANGE_M[1], "m");
+  assertInRange("release height", heightM, RELEASE_HEIGHT_RANGE_M[0], RELEASE_HEIGHT_RANGE_M[1], "m");
+  assertInRange("release side", armSideM, RELEASE_SIDE_RANGE_M[0], RELEASE_SIDE_RANGE_M[1], "m");
   if (hand !== "right" && hand !== "left") throw new RangeError(`throwing hand "${hand}" must be "right" or "left"`);
   return [armSideSign(hand) * armSideM, RUBBER_Y_M - extensionM, heightM];
 }

@@ -29,6 +29,8 @@ import { cross3, dot3, perpendicularUnit, rotateAbout, unit3, type Vec3 } from "
 import type { PitchFrame } from "./pitch.js";
 
 export const DEFAULT_FINGER_SPACING_IN = 0.8;
+/** Largest accepted finger spacing, inches (above 0 and at most this). */
+export const FINGER_SPACING_MAX_IN = 3;
 /** Half the stitched seam's width, inches (the seam band is about 3/16 in wide: common practice, no source). */
 export const SEAM_HALF_WIDTH_IN = 3 / 32;
 const SEARCH_STEPS = 720;
@@ -83,8 +85,8 @@ export function placeFingers(
   cover: CoverModel,
   fingerSpacingIn: number = DEFAULT_FINGER_SPACING_IN,
 ): Grip {
-  if (!(fingerSpacingIn > 0 && fingerSpacingIn <= 3)) {
-    throw new RangeError(`finger spacing ${fingerSpacingIn} in must be above 0 and at most 3 in`);
+  if (!(fingerSpacingIn > 0 && fingerSpacingIn <= FINGER_SPACING_MAX_IN)) {
+    throw new RangeError(`finger spacing ${fingerSpacingIn} in must be above 0 and at most ${FINGER_SPACING_MAX_IN} in`);
   }
   const w = unit3(axisBall);
   const halfRad = fingerSpacingIn / 2 / BALL_RADIUS_IN;

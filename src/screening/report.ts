@@ -73,7 +73,8 @@ export interface ScreenReport {
   references: OrientationReport[];
 }
 
-function clockText(rad: number | null): string | null {
+/** A clock angle (radians clockwise from 12:00) as "H:MM", or null. */
+export function clockText(rad: number | null): string | null {
   return rad === null ? null : formatClock(angleToClock(rad));
 }
 
@@ -129,34 +130,5 @@ export function screenReport(r: ScreenResult, echo: PitchEcho, bandCenterDeg: nu
     maximaFound: r.maximaFound,
     candidates: r.candidates.map((c, i) => orientationReport(c, i + 1)),
     references: r.references.map((c) => orientationReport(c)),
-  };
-}
-
-/**
- * One sphere map as plain JSON: cell centres (ball frame) and per-cell numbers,
- * rounded to 6 decimals. The push of every position lies on the pitch's push line,
- * so its clock reading is `pushClock.positive` where alongAxis > 0 and
- * `pushClock.negative` where it is < 0; `pushArmSide` and `pushUp` are its components.
- */
-export function sphereMapReport(r: ScreenResult) {
-  const g = r.map.grid;
-  const round = (x: number) => Math.round(x * 1e6) / 1e6;
-  const line = pushInField(r.frame, r.pitch.view, 1);
-  const cells: number[][] = [];
-  for (let i = 0; i < g.count; i++) {
-    const a = r.map.alongAxis[i];
-    cells.push([
-      round(g.points[3 * i]), round(g.points[3 * i + 1]), round(g.points[3 * i + 2]), round(r.scores[i]), round(a), round(r.map.seamInBand[i]),
-      round(a * line.armSide), round(a * line.up),
-    ]);
-  }
-  return {
-    projection: "equal-area ring grid (ball frame)",
-    spacingDeg: r.settings.gridSpacingRad / DEG,
-    count: g.count,
-    ringCounts: Array.from(g.ringCount),
-    pushClock: { positive: clockText(line.clockRad), negative: clockText(pushInField(r.frame, r.pitch.view, -1).clockRad), view: r.pitch.view },
-    columns: ["x", "y", "z", "score", "alongAxis", "seamInBand", "pushArmSide", "pushUp"],
-    cells,
   };
 }

@@ -37,6 +37,10 @@ export const RANKS: readonly RankBy[] = ["blend", "strength", "robust"];
 
 export const DEFAULT_GRID_SPACING_DEG = 2;
 export const DEFAULT_TOP = 5;
+/** Accepted screen settings (user units). */
+export const GRID_SPACING_RANGE_DEG: readonly [number, number] = [0.5, 10];
+export const TOP_RANGE: readonly [number, number] = [1, 50];
+export const SPREAD_RANGE_DEG: readonly [number, number] = [0, 30];
 /** Candidates closer than this after a symmetry are one candidate (maxima are broad: a few degrees across). */
 const MERGE_RAD = 2 * DEG;
 /** Pattern-search stopping step and evaluation cap. */
@@ -209,11 +213,11 @@ function coverFor(b: number): CoverModel {
 export function screenPitch(pitch: Pitch, settingsIn: Partial<ScreenSettings> = {}): ScreenResult {
   const settings: ScreenSettings = { ...DEFAULT_SCREEN_SETTINGS, ...settingsIn };
   assertPitch(pitch);
-  if (!(Number.isInteger(settings.top) && settings.top >= 1 && settings.top <= 50)) {
-    throw new RangeError(`top ${settings.top} must be a whole number from 1 to 50`);
+  if (!(Number.isInteger(settings.top) && settings.top >= TOP_RANGE[0] && settings.top <= TOP_RANGE[1])) {
+    throw new RangeError(`top ${settings.top} must be a whole number from ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
   }
-  if (!(settings.spreadRad >= 0 && settings.spreadRad <= 30 * DEG)) {
-    throw new RangeError(`scatter spread ${settings.spreadRad / DEG} deg must be from 0 to 30 deg`);
+  if (!(settings.spreadRad >= SPREAD_RANGE_DEG[0] * DEG && settings.spreadRad <= SPREAD_RANGE_DEG[1] * DEG)) {
+    throw new RangeError(`scatter spread ${settings.spreadRad / DEG} deg must be from ${SPREAD_RANGE_DEG[0]} to ${SPREAD_RANGE_DEG[1]} deg`);
   }
   const frame = pitchFrame(pitch);
   const seam = seamFor(settings.seamShape, settings.seamPoints);

@@ -49,7 +49,7 @@ describe("seam-atlas flight", () => {
     ["a drag coefficient without the constant model", [...SINKER, "--axis", "waist-A", "--drag-coefficient", "0.4"], /--drag-coefficient goes with --drag constant/],
     ["no axis", SINKER, /exactly one of --axis, --candidate N or --reference/],
     ["two elevations", [...SINKER, "--axis", "waist-A", "--elevation-ft", "10", "--elevation-m", "3"], /--elevation-ft or --elevation-m, not both/],
-    ["humidity above 100", [...SINKER, "--axis", "waist-A", "--humidity", "140"], /--humidity 140 is out of range/],
+    ["humidity above 100", [...SINKER, "--axis", "waist-A", "--humidity", "140"], /--humidity 140 percent is out of range/],
     ["one launch angle", [...SINKER, "--axis", "waist-A", "--vertical-angle", "-2"], /both --vertical-angle and --horizontal-angle/],
     ["an unknown air model", [...SINKER, "--axis", "waist-A", "--air", "thin"], /--air "thin" is not one of standard, none/],
     ["a candidate past the list", [...SINKER, "--candidate", "99"], /--candidate 99 is out of range/],

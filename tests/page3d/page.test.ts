@@ -9,8 +9,8 @@ import { pathToFileURL } from "node:url";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEG } from "../../geometry/units.js";
-import { percent } from "../../src/cli/format.js";
-import { fmtScore, runScreens } from "../../src/cli/screen.js";
+import { formatScore as fmtScore, percent } from "../../src/render/numbers.js";
+import { parseScreen, runScreen } from "../../src/jobs/screen.js";
 import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, bandFromDegrees } from "../../src/sampling/band.js";
 import { measureOrientation } from "../../src/sampling/measure.js";
 import { DEFAULT_FINGER_SPACING_IN } from "../../src/screening/hand.js";
@@ -56,15 +56,15 @@ let html: string;
 let pageUrl: string;
 
 beforeAll(async () => {
-  const { team, results } = runScreens(ARGV, TOP);
-  data = viewData(team, results);
+  const outcome = runScreen(parseScreen({ ...ARGV, top: String(TOP) }));
+  data = viewData(outcome.job.team, outcome.screened);
   html = await buildViewHtml(data);
   const file = join(tmp, "view.html");
   writeFileSync(file, html);
   pageUrl = pathToFileURL(file).href;
 }, BROWSER_TIMEOUT_MS);
 
-/** The figures the page must show for `o`, in the terminal's formatting (fmtScore is the CLI's own). */
+/** The figures the page must show for `o`, in the terminal's formatting (the shared formatting of src/render/numbers.ts). */
 function expectedFigures(o: OrientationReport): Record<string, string> {
   return {
     score: fmtScore(o.score),
@@ -103,7 +103,7 @@ describe("the 3-D page as a file", () => {
   it("embeds every pitch's screen report exactly as screen builds it, and the pitch's field frame", () => {
     const block = /<script type="application\/json" id="seam-atlas-view-data">([\s\S]*?)<\/script>/.exec(html)?.[1] ?? "";
     const embedded = JSON.parse(block) as ViewData;
-    const { results } = runScreens(ARGV, TOP);
+    const results = runScreen(parseScreen({ ...ARGV, top: String(TOP) })).screened;
     expect(embedded.pitches).toHaveLength(6);
     expect(embedded.pitches.map((p) => p.report)).toEqual(JSON.parse(JSON.stringify(results.map((r) => r.report))));
     expect(embedded.pitches[1].frame.pushLine).toEqual(results[1].result.frame.pushLine);

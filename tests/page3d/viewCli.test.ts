@@ -9,7 +9,7 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { fmtScore } from "../../src/cli/screen.js";
+import { formatScore as fmtScore } from "../../src/render/numbers.js";
 import type { ViewData } from "../../src/render/page3d/data.js";
 import { runCli } from "../cli/run.js";
 import { canvasPixels, launchChromium, openPage, pauseAt, RUN_BROWSER_TESTS, shownFigures, viewState } from "./browser.js";

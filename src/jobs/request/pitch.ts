@@ -13,9 +13,10 @@
  * to "any", `gyroDeg` to 0.
  */
 import { readFileSync } from "node:fs";
-import { gyroFromEfficiency } from "../../geometry/frames.js";
-import { parseClock, clockToAngle } from "../../geometry/clock.js";
-import { DEG } from "../../geometry/units.js";
+import { join } from "node:path";
+import { gyroFromEfficiency } from "../../../geometry/frames.js";
+import { parseClock, clockToAngle } from "../../../geometry/clock.js";
+import { DEG } from "../../../geometry/units.js";
 import {
   assertPitch,
   HANDS,
@@ -24,12 +25,13 @@ import {
   VIEWS,
   WANTS,
   type Pitch,
-} from "../screening/pitch.js";
-import type { PitchEcho } from "../screening/report.js";
-import { InputError } from "./errors.js";
-import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { parseJsonWithLines, type LocatedJson } from "./jsonLines.js";
-import { parseNumber } from "./parse.js";
+} from "../../screening/pitch.js";
+import type { PitchEcho } from "../../screening/report.js";
+import { InputError } from "../../io/errors.js";
+import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../../geometry/units.js";
+import { parseJsonWithLines, type LocatedJson } from "../../io/jsonLines.js";
+import { projectRoot } from "../../version.js";
+import { parseNumber, type Request } from "./values.js";
 
 /** A pitch with the numbers as the user gave them (for echoing). */
 export interface PitchInput {
@@ -232,4 +234,26 @@ export function selectPitches(file: PitchFile, selector: string | undefined, sou
     throw new InputError(`--pitch-name "${selector}" is not in ${source}; expected one of ${file.pitches.map(label).join(", ")}`);
   }
   return found;
+}
+
+/** The built-in demo staff (an invented club). */
+export function demoStaffPath(): string {
+  return join(projectRoot(), "templates", "demo-staff.json");
+}
+
+/** The pitch flags a request may carry. */
+export const PITCH_FLAGS = ["hand", "speed", "spin", "tilt", "view", "gyro", "efficiency", "want", "name"] as const;
+
+/** The pitches a request works on, from --demo, --pitch FILE or the pitch flags. */
+export function pitchesFromRequest(request: Request): { team?: string; source?: string; pitches: PitchInput[] } {
+  const given = PITCH_FLAGS.filter((k) => request[k] !== undefined);
+  if (request.demo && request.pitch !== undefined) throw new InputError(`give --demo or --pitch, not both`);
+  const file = request.demo ? demoStaffPath() : (request.pitch as string | undefined);
+  if (file !== undefined) {
+    if (given.length) throw new InputError(`--${given[0]} cannot be combined with ${request.demo ? "--demo" : "--pitch"}; the file describes the pitches`);
+    const pf = pitchesFromFile(file);
+    return { team: pf.team, source: file, pitches: selectPitches(pf, request["pitch-name"] as string | undefined, file) };
+  }
+  if (request["pitch-name"] !== undefined) throw new InputError(`--pitch-name needs --pitch FILE or --demo`);
+  return { pitches: [pitchFromFlags(request as PitchFlags)] };
 }

@@ -1,12 +1,23 @@
 /**
- * Parsing and checking of command-line values: every message names the option,
- * the value given and what is expected. Unit conversions happen here, once.
+ * Reading values people type (options and file cells) into numbers and names:
+ * every message names the option, the value given and what is expected. A request
+ * is the set of options as typed (strings, keyed by option name); the jobs turn it
+ * into SI here, once.
  */
-import { parseLatLon, latLonToVector } from "../../geometry/ballCoords.js";
-import { findLandmarks, landmarkByName, type Landmark } from "../../geometry/landmarks.js";
-import { norm3, type Vec3 } from "../../geometry/vec.js";
-import { DEG } from "../../geometry/units.js";
-import { InputError } from "./errors.js";
+import { parseLatLon, latLonToVector } from "../../../geometry/ballCoords.js";
+import { findLandmarks, landmarkByName, type Landmark } from "../../../geometry/landmarks.js";
+import { DEG } from "../../../geometry/units.js";
+import { norm3, type Vec3 } from "../../../geometry/vec.js";
+import { InputError } from "../../io/errors.js";
+
+/** The options of one run, as typed: option name (without dashes) to value. */
+export type Request = Readonly<Record<string, unknown>>;
+
+/** The one text value of an option (an option given twice is an error). */
+export function optionText(option: string, value: unknown): string {
+  if (Array.isArray(value)) throw new InputError(`--${option} was given ${value.length} times; give it once`);
+  return String(value ?? "").trim();
+}
 
 /** A finite number from an option's text. */
 export function parseNumber(option: string, value: unknown, expected: string): number {
@@ -24,11 +35,39 @@ export function parseInteger(option: string, value: unknown, expected: string): 
   return x;
 }
 
+/** A number in [lo, hi] (inclusive) in the option's own unit. */
+export function parseInRange(option: string, value: unknown, lo: number, hi: number, unit: string): number {
+  const u = unit ? ` ${unit}` : "";
+  const x = parseNumber(option, value, `${lo} to ${hi}${u}`);
+  if (!(x >= lo && x <= hi)) throw new InputError(`--${option} ${x}${u} is out of range; expected ${lo} to ${hi}${u}`);
+  return x;
+}
+
+/** A whole number in [lo, hi]. */
+export function parseIntegerInRange(option: string, value: unknown, lo: number, hi: number): number {
+  const x = parseInteger(option, value, `a whole number from ${lo} to ${hi}`);
+  if (!(x >= lo && x <= hi)) throw new InputError(`--${option} ${x} is out of range; expected ${lo} to ${hi}`);
+  return x;
+}
+
 /** Degrees from an option, converted to radians, with an open range check in degrees. */
 export function parseDegrees(option: string, value: unknown, loDeg: number, hiDeg: number): number {
   const x = parseNumber(option, value, `degrees strictly between ${loDeg} and ${hiDeg}`);
   if (!(x > loDeg && x < hiDeg)) throw new InputError(`--${option} ${x} deg is out of range; expected degrees strictly between ${loDeg} and ${hiDeg}`);
   return x * DEG;
+}
+
+/** One of a fixed set of words. */
+export function oneOf<T extends string>(option: string, value: unknown, allowed: readonly T[]): T {
+  const text = optionText(option, value);
+  if (!allowed.includes(text as T)) throw new InputError(`--${option} "${text}" is not one of ${allowed.join(", ")}`);
+  return text as T;
+}
+
+/** Throws unless at most one of the options is given. */
+export function atMostOne(request: Request, ...options: string[]): void {
+  const given = options.filter((o) => request[o] !== undefined);
+  if (given.length > 1) throw new InputError(`give --${given[0]} or --${given[1]}, not both`);
 }
 
 export interface ParsedAxis {
@@ -45,8 +84,7 @@ export interface ParsedAxis {
  * (see `seam-atlas landmarks`), or latitude/longitude "12.5N,45E".
  */
 export function parseAxis(option: string, value: unknown, seamShape: number): ParsedAxis {
-  if (Array.isArray(value)) throw new InputError(`--${option} was given ${value.length} times; give it once`);
-  const text = String(value ?? "").trim();
+  const text = optionText(option, value);
   const expected = `X,Y,Z (three numbers, not all zero), a landmark name such as waist-A, or latitude,longitude such as 12.5N,45E`;
   if (text === "") throw new InputError(`--${option} is empty; expected ${expected}`);
   const latLon = (() => {
@@ -72,11 +110,4 @@ export function parseAxis(option: string, value: unknown, seamShape: number): Pa
   const vector: Vec3 = [v[0], v[1], v[2]];
   if (norm3(vector) < 1e-12) throw new InputError(`--${option} "${text}" is a zero vector; expected a direction, not all zero`);
   return { vector, given: text };
-}
-
-/** Rejects unknown option names (yargs' strict mode does this too; kept for programmatic argv). */
-export function assertOneOf<T extends string>(option: string, value: unknown, allowed: readonly T[]): T {
-  const text = String(value ?? "");
-  if (!allowed.includes(text as T)) throw new InputError(`--${option} "${text}" is not one of ${allowed.join(", ")}`);
-  return text as T;
 }

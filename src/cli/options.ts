@@ -1,0 +1,62 @@
+/**
+ * Option declarations shared by several commands (yargs). Declarations only: every
+ * value is read, checked and converted by the jobs (src/jobs/request/).
+ */
+import type { Argv } from "yargs";
+import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
+import { DEFAULT_SEAM_POINTS, SEAM_POINTS_RANGE } from "../../geometry/seamSamples.js";
+import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG } from "../sampling/band.js";
+import { DEFAULT_FINGER_SPACING_IN } from "../screening/hand.js";
+import { DEFAULT_SPREAD_DEG } from "../screening/robustness.js";
+import { DEFAULT_GRID_SPACING_DEG, GRID_SPACING_RANGE_DEG, SPREAD_RANGE_DEG } from "../screening/screen.js";
+
+/** A string option that takes a value. */
+const text = (describe: string, defaultValue?: string) => ({ type: "string" as const, describe, requiresArg: true, ...(defaultValue !== undefined ? { default: defaultValue } : {}) });
+
+/** The pitch: flags, a pitch file or the demo staff. */
+export function withPitchOptions<T>(y: Argv<T>) {
+  return y
+    .option("hand", text("throwing hand: right or left"))
+    .option("speed", text("release speed, mph"))
+    .option("spin", text("spin rate, rpm"))
+    .option("tilt", text("tilt as a clock reading H:MM (12:00 = pure backspin)"))
+    .option("view", text("whose view the clock is read from: pitcher (behind the pitcher) or catcher"))
+    .option("gyro", text("gyro angle, deg (positive: the axis's positive end leans toward the plate) [default: 0]"))
+    .option("efficiency", text("spin efficiency, percent (instead of --gyro; gyro taken positive)"))
+    .option("want", text("wanted direction of the seam push: arm, glove, up, down or any [default: any]"))
+    .option("name", text("a label for the pitch"))
+    .option("pitch", text("a pitch file (one pitch or a staff; see README)"))
+    .option("pitch-name", text("only this pitch of the file: NAME or PITCHER/NAME"))
+    .option("demo", { type: "boolean", default: false, describe: "use the built-in demo staff (templates/demo-staff.json)" });
+}
+
+/** The seam and the separation band. */
+export function withSamplerOptions<T>(y: Argv<T>) {
+  return y
+    .option("seam-shape", text(`seam shape b of the curve, 0 < b < 0.5 [default: ${DEFAULT_SEAM_SHAPE.toFixed(6)}, fitted to a published cover's waist]`))
+    .option("band-center", text("separation band centre, deg from the front stagnation point", String(DEFAULT_BAND_CENTER_DEG)))
+    .option("band-width", text("separation band width, deg", String(DEFAULT_BAND_WIDTH_DEG)))
+    .option("seam-points", text(`seam samples, a multiple of 4 from ${SEAM_POINTS_RANGE[0]} to ${SEAM_POINTS_RANGE[1]}`, String(DEFAULT_SEAM_POINTS)));
+}
+
+/** The screen's grid, scatter, ranking and fingers. */
+export function withScreenOptions<T>(y: Argv<T>) {
+  return y
+    .option("grid", text(`spacing of the axis-position grid on the ball, deg (${GRID_SPACING_RANGE_DEG[0]} to ${GRID_SPACING_RANGE_DEG[1]})`, String(DEFAULT_GRID_SPACING_DEG)))
+    .option("spread", text(`release scatter of the axis on the ball, deg per direction (${SPREAD_RANGE_DEG[0]} to ${SPREAD_RANGE_DEG[1]})`, String(DEFAULT_SPREAD_DEG)))
+    .option("rank", text("rank by strength (score), robust (10th-percentile score) or blend (their mean)", "blend"))
+    .option("finger-spacing", text("centre-to-centre spacing of the index and middle pads, inches", String(DEFAULT_FINGER_SPACING_IN)));
+}
+
+/** The air. */
+export function withAirOptions<T>(y: Argv<T>) {
+  return y
+    .option("elevation-ft", text("field elevation, ft (standard atmosphere)"))
+    .option("elevation-m", text("field elevation, m"))
+    .option("temperature-f", text("air temperature, deg F [default: standard atmosphere]"))
+    .option("temperature-c", text("air temperature, deg C"))
+    .option("humidity", text("relative humidity, percent [default: 0]"))
+    .option("pressure-hpa", text("air pressure, hPa [default: standard atmosphere]"));
+}
+
+export { text as textOption };

@@ -1,0 +1,47 @@
+/** Every CSV table the tool writes, built from job results (one row per record, a header first). */
+import { vectorToLatLon } from "../../../geometry/ballCoords.js";
+import { csvRow } from "../../io/csvLine.js";
+import type { ScreenReport } from "../../screening/report.js";
+import type { ExplainedRow } from "../explain.js";
+
+const SCREEN_COLUMNS = [
+  "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "score", "pushClock", "pushArmSide", "pushUp",
+  "crossingsPerRevolution", "robustMean", "robustP10", "rankScore", "seamInBand", "alongAxis",
+];
+
+export function screenCsv(reports: readonly ScreenReport[]): string {
+  const rows = [csvRow(SCREEN_COLUMNS)];
+  for (const r of reports) {
+    const p = r.input.pitch;
+    for (const o of [...r.candidates, ...r.references]) {
+      rows.push(
+        csvRow([
+          p.pitcher, p.name, o.reference ?? "candidate", o.rank ?? "", o.latLon.latDeg, o.latLon.lonDeg, o.landmark.name, o.landmark.angleDeg, o.score,
+          o.push.clock, o.push.armSide, o.push.up, o.crossingsPerRevolution, o.robustness.mean, o.robustness.p10, o.rankScore, o.seamInBand, o.asymmetry.alongAxis,
+        ]),
+      );
+    }
+  }
+  return rows.join("\n") + "\n";
+}
+
+/** The batch's CSV header for `top` matches per row. */
+export function explainCsvHeader(top: number): string {
+  return csvRow([
+    "line", "pitcher", "pitch", "magnus_arm_in", "magnus_up_in", "residual_arm_in", "residual_up_in",
+    ...Array.from({ length: top }, (_, i) => [`match${i + 1}_lat_deg`, `match${i + 1}_lon_deg`, `match${i + 1}_landmark`, `match${i + 1}_seam_arm_in`, `match${i + 1}_seam_up_in`, `match${i + 1}_fit_error_in`]).flat(),
+  ]) + "\n";
+}
+
+export function explainCsvRow(r: ExplainedRow): string {
+  const j = r.numbers;
+  return (
+    csvRow([
+      r.line, r.pitcher, r.pitch, j.magnus.armSideIn, j.magnus.upIn, j.residual.armSideIn, j.residual.upIn,
+      ...j.matches.flatMap((m) => {
+        const ll = vectorToLatLon(m.axis);
+        return [ll.latDeg, ll.lonDeg, m.landmark.name, m.seam.armSideIn, m.seam.upIn, m.fitErrorIn];
+      }),
+    ]) + "\n"
+  );
+}

@@ -1,0 +1,146 @@
+/**
+ * Every JSON document the tool writes, built from job results. One place per
+ * format: adding an output format means adding a sibling of this file.
+ * JSON keeps full precision; people's rounding is the other formats' business.
+ */
+import { formatLatLon, vectorToLatLon } from "../../../geometry/ballCoords.js";
+import { DEG, M_PER_FT, PA_PER_HPA } from "../../../geometry/units.js";
+import { TOOL_NAME, TOOL_VERSION } from "../../version.js";
+import type { Measurement } from "../../sampling/measure.js";
+import { pushInField } from "../../screening/pitch.js";
+import type { ScreenResult } from "../../screening/screen.js";
+import { clockText } from "../../screening/report.js";
+import type { ExplainOneJob, ExplainedRow, ExplanationNumbers } from "../explain.js";
+import { flightNumbers, type FlightOutcome } from "../flight.js";
+import type { LandmarksResult } from "../landmarks.js";
+import type { MeasureResult } from "../measure.js";
+import type { ScreenOutcome } from "../screen.js";
+
+/** Pretty-printed JSON with a trailing newline. */
+export function jsonText(doc: unknown): string {
+  return JSON.stringify(doc, null, 2) + "\n";
+}
+
+function head(command: string) {
+  return { tool: TOOL_NAME, version: TOOL_VERSION, command };
+}
+
+/** The JSON form of one measurement (the keys scripts rely on; see README). */
+export function measurementJson(m: Measurement, landmark: string, landmarkAngleDeg: number) {
+  const ll = vectorToLatLon(m.axis);
+  return {
+    axis: m.axis,
+    latLon: { latDeg: ll.latDeg, lonDeg: ll.lonDeg, text: formatLatLon(ll) },
+    landmark: { name: landmark, angleDeg: landmarkAngleDeg },
+    seamInBand: m.seamInBand,
+    sides: { axisPlus: m.axisPlus, axisMinus: m.axisMinus, magnusPlus: m.magnusPlus, magnusMinus: m.magnusMinus },
+    asymmetry: { alongAxis: m.alongAxis, alongMagnus: m.alongMagnus, magnitude: m.magnitude },
+    crossingsPerRevolution: m.crossingsPerRevolution,
+    timeline: m.timeline
+      ? { phaseStepDeg: 1, phaseZero: "stagnation point nearest the +z pole (waist-A)", axisPlus: Array.from(m.timeline.axisPlus), axisMinus: Array.from(m.timeline.axisMinus) }
+      : undefined,
+  };
+}
+
+export function measureDocument(r: MeasureResult) {
+  const s = r.job.settings;
+  const records = r.measured.map(({ item, measurement, landmark }) => ({
+    ...(item.label ? { name: item.label } : {}),
+    input: {
+      axis: item.axis.given,
+      gyroDeg: item.gyroDeg,
+      seamShape: s.seamShape,
+      bandCenterDeg: s.bandCenterDeg,
+      bandWidthDeg: s.bandWidthDeg,
+      seamPoints: s.seamPoints,
+    },
+    ...measurementJson(measurement, landmark.name, landmark.angleDeg),
+  }));
+  return r.job.scenario !== undefined
+    ? { ...head("measure"), scenario: r.job.scenario, orientations: records }
+    : { ...head("measure"), ...records[0] };
+}
+
+export function landmarksDocument(r: LandmarksResult) {
+  return { ...head("landmarks"), seamShape: r.seamShape, landmarks: r.landmarks };
+}
+
+export function screenDocument(o: ScreenOutcome) {
+  const reports = o.screened.map((s) => s.report);
+  return reports.length === 1 && !o.job.fromFile
+    ? { ...head("screen"), ...reports[0] }
+    : { ...head("screen"), ...(o.job.team ? { team: o.job.team } : {}), pitches: reports };
+}
+
+/**
+ * One sphere map as plain JSON: cell centres (ball frame) and per-cell numbers,
+ * rounded to 6 decimals. The push of every position lies on the pitch's push line,
+ * so its clock reading is `pushClock.positive` where alongAxis > 0 and
+ * `pushClock.negative` where it is < 0; `pushArmSide` and `pushUp` are its components.
+ */
+export function sphereMapDocument(r: ScreenResult) {
+  const g = r.map.grid;
+  const round = (x: number) => Math.round(x * 1e6) / 1e6;
+  const line = pushInField(r.frame, r.pitch.view, 1);
+  const cells: number[][] = [];
+  for (let i = 0; i < g.count; i++) {
+    const a = r.map.alongAxis[i];
+    cells.push([
+      round(g.points[3 * i]), round(g.points[3 * i + 1]), round(g.points[3 * i + 2]), round(r.scores[i]), round(a), round(r.map.seamInBand[i]),
+      round(a * line.armSide), round(a * line.up),
+    ]);
+  }
+  return {
+    projection: "equal-area ring grid (ball frame)",
+    spacingDeg: r.settings.gridSpacingRad / DEG,
+    count: g.count,
+    ringCounts: Array.from(g.ringCount),
+    pushClock: { positive: clockText(line.clockRad), negative: clockText(pushInField(r.frame, r.pitch.view, -1).clockRad), view: r.pitch.view },
+    columns: ["x", "y", "z", "score", "alongAxis", "seamInBand", "pushArmSide", "pushUp"],
+    cells,
+  };
+}
+
+export function flightDocument(o: FlightOutcome) {
+  const j = o.job;
+  return {
+    ...head("flight"),
+    input: {
+      pitch: j.echo,
+      axis: j.axisGiven,
+      airModel: j.airMode,
+      elevationM: j.air.elevationM ?? 0,
+      temperatureC: j.air.temperatureC ?? null,
+      humidityPct: j.air.relativeHumidityPct ?? 0,
+      pressureHpa: j.air.pressurePa !== undefined ? j.air.pressurePa / PA_PER_HPA : null,
+      releaseHeightFt: j.release.heightM / M_PER_FT,
+      releaseSideFt: j.release.armSideM / M_PER_FT,
+      extensionFt: j.release.extensionM / M_PER_FT,
+      seamScale: j.seamScale,
+      drag: j.drag.name,
+      dragCoefficient: j.drag.name === "constant" ? j.drag.dragCoefficient : null,
+      spinDecayS: j.spinDecayS ?? null,
+      bandCenterDeg: j.sampler.bandCenterDeg,
+      bandWidthDeg: j.sampler.bandWidthDeg,
+      seamShape: j.sampler.seamShape,
+    },
+    ...flightNumbers(o),
+  };
+}
+
+export function explainDocument(job: ExplainOneJob, n: ExplanationNumbers) {
+  return { ...head("explain"), input: { pitch: job.echo, moveArmIn: job.moveArmIn, moveUpIn: job.moveUpIn }, ...n };
+}
+
+/** The opening of a streamed batch document; rows follow, comma-separated, then `batchJsonClose`. */
+export function batchJsonOpen(): string {
+  return `{"tool":${JSON.stringify(TOOL_NAME)},"version":${JSON.stringify(TOOL_VERSION)},"command":"explain","rows":[\n`;
+}
+
+export function batchJsonRow(r: ExplainedRow, first: boolean): string {
+  return `${first ? "" : ",\n"}${JSON.stringify({ line: r.line, pitcher: r.pitcher, pitch: r.pitch, moveArmIn: r.moveArmIn, moveUpIn: r.moveUpIn, ...r.numbers })}`;
+}
+
+export function batchJsonClose(): string {
+  return `\n]}\n`;
+}

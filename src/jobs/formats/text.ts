@@ -1,0 +1,150 @@
+/**
+ * What the terminal shows: tables and compact plots built from job results, with
+ * numbers written by the shared rules of src/render/numbers.ts (as on paper).
+ */
+import { formatLatLon, vectorToLatLon } from "../../../geometry/ballCoords.js";
+import { DEG } from "../../../geometry/units.js";
+import { fixed, formatMovementIn, formatScore, percent, signed } from "../../render/numbers.js";
+import type { OrientationReport, ScreenReport } from "../../screening/report.js";
+import type { ExplainOneJob, ExplanationNumbers } from "../explain.js";
+import { flightNumbers, type FlightOutcome } from "../flight.js";
+import type { LandmarksResult } from "../landmarks.js";
+import type { MeasureResult } from "../measure.js";
+
+const BARS = " ▁▂▃▄▅▆▇█";
+
+/** One row of bar characters for values in [0, max], averaged over `columns` equal bins. */
+export function sparkline(values: ArrayLike<number>, max: number, columns: number): string {
+  const n = values.length;
+  let out = "";
+  for (let c = 0; c < columns; c++) {
+    const i0 = Math.floor((c * n) / columns);
+    const i1 = Math.max(i0 + 1, Math.floor(((c + 1) * n) / columns));
+    let sum = 0;
+    for (let i = i0; i < i1; i++) sum += values[i];
+    const mean = sum / (i1 - i0);
+    const level = max > 0 ? Math.round((mean / max) * (BARS.length - 1)) : 0;
+    out += BARS[Math.max(0, Math.min(BARS.length - 1, level))];
+  }
+  return out;
+}
+
+/** Left-aligned two-column table with a fixed label width. */
+export function table(rows: readonly (readonly [string, string])[], indent = "  "): string {
+  const width = Math.max(...rows.map((r) => r[0].length));
+  return rows.map(([k, v]) => `${indent}${k.padEnd(width)}  ${v}`).join("\n");
+}
+
+export function measureText(r: MeasureResult): string {
+  const s = r.job.settings;
+  const blocks = r.measured.map(({ item, measurement: m, landmark }) => {
+    const ll = formatLatLon(vectorToLatLon(m.axis));
+    const head = item.label ? `${item.label}\n${item.note ? `  ${item.note}\n` : ""}` : "";
+    const rows: [string, string][] = [
+      ["spin axis (ball frame)", `${m.axis.map((v) => fixed(v, 4)).join(", ")}   ${ll}   given as ${item.axis.given}`],
+      ["nearest landmark", `${landmark.name}, ${landmark.angleDeg.toFixed(1)} deg away`],
+      ["gyro", `${item.gyroDeg.toFixed(1)} deg   (spin efficiency ${(100 * Math.cos(item.gyroDeg * DEG)).toFixed(1)} %)`],
+      ["separation band", `${(s.bandCenterDeg - s.bandWidthDeg / 2).toFixed(1)} to ${(s.bandCenterDeg + s.bandWidthDeg / 2).toFixed(1)} deg from the stagnation point`],
+      ["seam", `shape b = ${s.seamShape.toFixed(4)}, ${s.seamPoints} points`],
+      ["seam in band, turn average", percent(m.seamInBand)],
+      ["  axis side +  /  -", `${percent(m.axisPlus)}  /  ${percent(m.axisMinus)}`],
+      ["  Magnus side +  /  -", `${percent(m.magnusPlus)}  /  ${percent(m.magnusMinus)}`],
+      ["asymmetry along axis", `${signed(m.alongAxis)}   (+ pushes toward the axis's positive end)`],
+      ["asymmetry along Magnus", signed(m.alongMagnus)],
+      ["asymmetry magnitude", fixed(m.magnitude, 5)],
+      ["crossings per revolution", String(m.crossingsPerRevolution)],
+    ];
+    let plot = "";
+    if (m.timeline) {
+      const max = Math.max(...m.timeline.axisPlus, ...m.timeline.axisMinus, 1e-9);
+      plot =
+        `\n\n  in-band seam share through one turn (0 to 360 deg, 5 deg a column; full bar = ${percent(max, 1)}):\n` +
+        `    axis side +  |${sparkline(m.timeline.axisPlus, max, 72)}|\n` +
+        `    axis side -  |${sparkline(m.timeline.axisMinus, max, 72)}|`;
+    }
+    return head + table(rows) + plot;
+  });
+  return (r.job.scenario ? `${r.job.scenario}\n\n` : "") + blocks.join("\n\n") + "\n";
+}
+
+const KIND_WORDS = { tip: "horseshoe tip", waist: "waist middle", lobe: "lobe centre", node: "seam on the equator" } as const;
+
+export function landmarksText(r: LandmarksResult): string {
+  const lines = [`landmarks of the seam with shape b = ${r.seamShape.toFixed(6)} (ball frame; seam distance along the surface)`];
+  for (const l of r.landmarks) {
+    const dir = l.direction.map((v) => fixed(v, 4).padStart(7)).join(" ");
+    lines.push(`  ${l.name.padEnd(8)} ${KIND_WORDS[l.kind].padEnd(19)} ${dir}   ${l.latLon.padEnd(14)} ${l.seamDistanceDeg.toFixed(1).padStart(5)} deg  ${l.seamDistanceIn.toFixed(2)} in`);
+  }
+  return lines.join("\n") + "\n";
+}
+
+const WANT_WORDS: Record<string, string> = { arm: "toward the arm side", glove: "toward the glove side", up: "up", down: "down", any: "any direction" };
+
+function fingerWords(o: OrientationReport): string {
+  return o.fingers
+    .map((f) => `${f.finger} ${fixed(f.seamDistanceIn, 2)} in from seam (${f.region.part === "seam" ? "on the seam" : f.region.near})`)
+    .join("; ");
+}
+
+export function screenTable(r: ScreenReport): string {
+  const p = r.input.pitch;
+  const s = r.input.settings;
+  const head =
+    `${p.pitcher ? `${p.pitcher}, ` : ""}${p.name} (${p.hand === "right" ? "RHP" : "LHP"}): ${fixed(p.speedMph, 1)} mph, ${fixed(p.spinRpm, 0)} rpm, ` +
+    `tilt ${p.tilt} from behind the ${p.view}, gyro ${fixed(p.gyroDeg, 1)} deg (spin efficiency ${fixed(p.efficiencyPct, 1)} %); wanted push: ${WANT_WORDS[p.want]}\n` +
+    `  the seam push acts along ${r.pushLine.clock ?? "-"} / its opposite (same view)` +
+    (p.want === "any" ? "" : `; at most ${fixed(100 * r.wantReach, 0)} % of it can point ${WANT_WORDS[p.want]}`) +
+    `\n  ${r.grid.count.toLocaleString("en-US")} axis positions at ${s.gridSpacingDeg} deg, ${r.maximaFound} distinct maxima; scatter ${s.spreadDeg} deg; ranked by ${s.rank}` +
+    `\n  score and push in thousandths of the seam-asymmetry unit (see README)\n`;
+  const rows: string[][] = [["", "axis on ball", "nearest landmark", "score", "mean", "p10", "push", "arm side", "up", "crossings"]];
+  const add = (label: string, o: OrientationReport) =>
+    rows.push([
+      label, o.latLon.text, `${o.landmark.name} ${fixed(o.landmark.angleDeg, 0)} deg`, formatScore(o.score), formatScore(o.robustness.mean), formatScore(o.robustness.p10),
+      o.push.clock ?? "-", formatScore(o.push.armSide), formatScore(o.push.up), String(o.crossingsPerRevolution),
+    ]);
+  r.candidates.forEach((o) => add(`#${o.rank}`, o));
+  r.references.forEach((o) => add(o.reference!, o));
+  const widths = rows[0].map((_, c) => Math.max(...rows.map((row) => row[c].length)));
+  const lines = rows.map((row) => "  " + row.map((cell, c) => (c >= 3 && c !== 6 ? cell.padStart(widths[c]) : cell.padEnd(widths[c]))).join("  "));
+  const fingers = [...r.candidates.map((o) => [`#${o.rank}`, o] as const), ...r.references.map((o) => [o.reference!, o] as const)].map(
+    ([label, o]) => `  ${label} fingers: ${fingerWords(o)}`,
+  );
+  return head + lines.join("\n") + "\n" + fingers.join("\n");
+}
+
+export function screenText(team: string | undefined, reports: readonly ScreenReport[]): string {
+  return (team ? `${team}\n\n` : "") + reports.map(screenTable).join("\n\n") + "\n";
+}
+
+export function flightText(o: FlightOutcome): string {
+  const echo = o.job.echo;
+  const d = flightNumbers(o);
+  const m = d.movement;
+  const lines: [string, string][] = [
+    ["pitch", `${echo.pitcher ? `${echo.pitcher}, ` : ""}${echo.name}: ${fixed(echo.speedMph, 1)} mph, ${fixed(echo.spinRpm, 0)} rpm, tilt ${echo.tilt} (${echo.view}), gyro ${fixed(echo.gyroDeg, 1)} deg`],
+    ["seam orientation", `${d.axis.latLon} (${o.job.axisGiven})`],
+    ["air", o.job.airMode === "none" ? "none (vacuum)" : `${fixed(d.air.densityKgM3, 4)} kg/m^3, Re ${fixed(d.air.reynolds / 1e5, 2)}e5, spin factor ${fixed(d.air.spinFactor, 3)}`],
+    ["launch", `${fixed(d.launch.verticalDeg, 2)} deg up, ${fixed(d.launch.horizontalDeg, 2)} deg right${d.launch.aimed ? " (aimed at the middle of the zone)" : ""}`],
+    ["time to plate", `${fixed(d.timeToPlateS, 3)} s`],
+    ["at the plate", `${fixed(d.plate.xIn, 1)} in right of centre, ${fixed(d.plate.zIn, 1)} in high`],
+    ["approach", `${fixed(d.approach.verticalDeg, 2)} deg vertical, ${fixed(d.approach.horizontalDeg, 2)} deg horizontal`],
+    ["movement vs spinless", `${formatMovementIn(m.armSideIn)} in arm side, ${formatMovementIn(m.verticalIn)} in up`],
+    ["  Magnus part", `${formatMovementIn(m.magnus.armSideIn)} in arm side, ${formatMovementIn(m.magnus.verticalIn)} in up`],
+    ["  seam part", `${formatMovementIn(m.seam.armSideIn)} in arm side, ${formatMovementIn(m.seam.verticalIn)} in up, toward ${m.seam.clock ?? "-"} (${echo.view}'s view)`],
+  ];
+  return table(lines) + "\n";
+}
+
+export function explainText(job: ExplainOneJob, n: ExplanationNumbers): string {
+  const lines = [
+    `  observed       ${formatMovementIn(job.moveArmIn)} in arm side, ${formatMovementIn(job.moveUpIn)} in up (gravity removed)`,
+    `  spin predicts  ${formatMovementIn(n.magnus.armSideIn)} in arm side, ${formatMovementIn(n.magnus.upIn)} in up (Magnus)`,
+    `  left over      ${formatMovementIn(n.residual.armSideIn)} in arm side, ${formatMovementIn(n.residual.upIn)} in up`,
+    `  seam orientations that would give it (best first):`,
+    ...n.matches.map(
+      (m) =>
+        `    #${m.rank}  ${m.latLon.padEnd(14)} near ${m.landmark.name} (${fixed(m.landmark.angleDeg, 0)} deg): seam ${formatMovementIn(m.seam.armSideIn)} in arm side, ${formatMovementIn(m.seam.upIn)} in up; misses by ${fixed(m.fitErrorIn, 2)} in`,
+    ),
+  ];
+  return lines.join("\n") + "\n";
+}

@@ -1,0 +1,26 @@
+/** The view job: the screen drawn as one self-contained 3-D page (one HTML file) that opens offline. */
+import { InputError } from "../io/errors.js";
+import { buildViewHtml, viewData } from "../render/page3d/build.js";
+import type { Request } from "./request/values.js";
+import { parseScreen, runScreen, type ScreenJob } from "./screen.js";
+
+/** Where the page goes unless --out says otherwise. */
+export const DEFAULT_VIEW_OUT = "out/view.html";
+
+export interface ViewJob {
+  readonly screen: ScreenJob;
+}
+
+export function parseView(request: Request): ViewJob {
+  const out = request.out;
+  if (typeof out === "string" && out !== "-" && !/\.html?$/i.test(out)) {
+    throw new InputError(`--out "${out}" does not end in .html; expected an .html file name such as ${DEFAULT_VIEW_OUT} (browsers open it by that ending)`);
+  }
+  return { screen: parseScreen(request) };
+}
+
+export async function runView(job: ViewJob): Promise<{ html: string; pitches: number }> {
+  const outcome = runScreen(job.screen);
+  const html = await buildViewHtml(viewData(job.screen.team, outcome.screened));
+  return { html, pitches: outcome.screened.length };
+}
