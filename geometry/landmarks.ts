@@ -17,6 +17,7 @@
  * A1 around 135 deg, A2 around 315 deg (the order in which the seam's U-turns come
  * for increasing t).
  */
+import { BoundedCache } from "./cache.js";
 import { seamPoint, seamTangent } from "./seamCurve.js";
 import { sampleSeam } from "./seamSamples.js";
 import { angleBetween, dot3, unit3, type Vec3 } from "./vec.js";
@@ -133,17 +134,11 @@ function angleToArc(p: Readonly<Vec3>, a: Vec3, b: Vec3): number {
   return Math.min(angleBetween(p, a), angleBetween(p, b));
 }
 
-const landmarkCache = new Map<number, readonly Landmark[]>();
+const landmarkCache = new BoundedCache<number, readonly Landmark[]>("landmarks per seam shape", 16);
 
 /** Every landmark of the seam with shape `b` (computed once per shape, then shared: do not modify). */
 export function findLandmarks(b: number): readonly Landmark[] {
-  let found = landmarkCache.get(b);
-  if (!found) {
-    found = Object.freeze(computeLandmarks(b));
-    if (landmarkCache.size > 16) landmarkCache.clear();
-    landmarkCache.set(b, found);
-  }
-  return found;
+  return landmarkCache.get(b, () => Object.freeze(computeLandmarks(b)));
 }
 
 function computeLandmarks(b: number): Landmark[] {

@@ -9,6 +9,7 @@
  * flight crosses the front of the plate at the middle of a typical zone (x = 0,
  * z = 2.5 ft: common practice, no source) by a damped Newton iteration.
  */
+import { BoundedCache } from "../../geometry/cache.js";
 import { spinAxisFromTilt, toArmSide, TOWARD_PLATE } from "../../geometry/frames.js";
 import type { Vec3 } from "../../geometry/vec.js";
 import type { Pitch } from "../screening/pitch.js";
@@ -70,17 +71,10 @@ export function spinVector(pitch: Pitch): Vec3 {
   return [w[0] * pitch.spinRadPerS, w[1] * pitch.spinRadPerS, w[2] * pitch.spinRadPerS];
 }
 
-const modelCache = new Map<string, SeamForceModel>();
+const modelCache = new BoundedCache<string, SeamForceModel>("seam-force models per parameter set", 8);
 /** The seam-force model for a parameter set (memoised: building it samples the seam). */
 export function seamModelFor(params: SeamForceParams = {}): SeamForceModel {
-  const key = JSON.stringify(params);
-  let m = modelCache.get(key);
-  if (!m) {
-    m = seamForceModel(params);
-    if (modelCache.size > 8) modelCache.clear();
-    modelCache.set(key, m);
-  }
-  return m;
+  return modelCache.get(JSON.stringify(params), () => seamForceModel(params));
 }
 
 /** Launch angles that put `options`' flight through `target` (x, z) at the plate (a `trajectory` callback in `options` is not called). */

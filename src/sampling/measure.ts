@@ -2,6 +2,7 @@
  * One orientation, measured: the turn-averaged band numbers (exact sampler),
  * the seam crossings per revolution and the instantaneous timeline through one turn.
  */
+import { BoundedCache } from "../../geometry/cache.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEFAULT_SEAM_POINTS, sampleSeam, type SeamSamples } from "../../geometry/seamSamples.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
@@ -43,18 +44,11 @@ export interface Measurement extends BandAverages {
   readonly timeline?: Timeline;
 }
 
-const seamCache = new Map<string, SeamSamples>();
+const seamCache = new BoundedCache<string, SeamSamples>("seam samples per shape and count", 16);
 
 /** Arc-length samples of the seam, memoised per (shape, count). */
 export function seamFor(seamShape: number = DEFAULT_SEAM_SHAPE, seamPoints: number = DEFAULT_SEAM_POINTS): SeamSamples {
-  const key = `${seamShape}/${seamPoints}`;
-  let seam = seamCache.get(key);
-  if (!seam) {
-    seam = sampleSeam(seamShape, seamPoints);
-    if (seamCache.size > 16) seamCache.clear();
-    seamCache.set(key, seam);
-  }
-  return seam;
+  return seamCache.get(`${seamShape}/${seamPoints}`, () => sampleSeam(seamShape, seamPoints));
 }
 
 /** Measures one orientation. Throws RangeError for a zero axis, |gyro| >= 90 deg or a bad seam shape. */

@@ -14,6 +14,7 @@
  * 4. Robustness under release scatter (src/screening/robustness.ts), and a rank:
  *    "strength" = score, "robust" = 10th-percentile score, "blend" (default) = their mean.
  */
+import { BoundedCache } from "../../geometry/cache.js";
 import { coverModel, type CoverModel } from "../../geometry/coverRegions.js";
 import { findLandmarks, nearestLandmark, type Landmark } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
@@ -199,14 +200,9 @@ function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceNam
   };
 }
 
-const coverCache = new Map<number, CoverModel>();
+const coverCache = new BoundedCache<number, CoverModel>("cover models per seam shape", 4);
 function coverFor(b: number): CoverModel {
-  let c = coverCache.get(b);
-  if (!c) {
-    c = coverModel(b);
-    coverCache.set(b, c);
-  }
-  return c;
+  return coverCache.get(b, () => coverModel(b));
 }
 
 /** Screens one pitch. Throws RangeError for an invalid pitch or settings. */

@@ -5,7 +5,7 @@ import { fileURLToPath } from "node:url";
 import { dirname, join } from "node:path";
 
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");
-export const BIN = join(ROOT, "out", "build", "src", "cli", "main.js");
+export const BIN = join(ROOT, "out", "build", "cli", "main.js");
 
 export function runCli(args: string[], options: { cwd?: string } = {}): { code: number; stdout: string; stderr: string } {
   if (!existsSync(BIN)) throw new Error(`${BIN} is missing: run npm run build (npm test does it)`);

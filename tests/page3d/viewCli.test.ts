@@ -1,5 +1,5 @@
 /**
- * `seam-atlas view` through the compiled CLI (out/build/src/cli/main.js; npm test builds it).
+ * `seam-atlas view` through the compiled CLI (out/build/cli/main.js; npm test builds it).
  * Needs `registerView` (src/cli/view.ts) registered in src/cli/main.ts: until it is,
  * the first test says so and the rest fail with the command missing.
  */

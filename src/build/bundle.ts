@@ -1,0 +1,85 @@
+/**
+ * The build's second step (after tsc): bundles, with esbuild, what must load fast
+ * or run in a browser.
+ *
+ * 1. The command line (src/cli/main.ts) into out/build/cli/: one ES module plus a
+ *    chunk per command family, so `--help` reads one small file and each command
+ *    loads only its own stack. Packages whose code reads files next to itself at run
+ *    time (pdfkit's fonts, svgdom's), the browser-only three.js and the worker-pool
+ *    package stay outside the bundle and load from node_modules when a command needs them.
+ * 2. The 3-D page's script (src/render/page3d/main.ts with three.js, gl-matrix and
+ *    the tool's geometry) into out/build/page/page.js: a minified IIFE with the
+ *    bundled packages' licences appended, which `view` inlines into its HTML. The
+ *    installed package ships it, so nothing is bundled at run time.
+ */
+import { existsSync, mkdirSync, rmSync, writeFileSync } from "node:fs";
+import { dirname, join } from "node:path";
+import { fileURLToPath } from "node:url";
+import * as esbuild from "esbuild";
+import { licenceNotices } from "./licences.js";
+
+/** Packages the CLI bundle leaves in node_modules. */
+export const CLI_EXTERNAL = ["pdfkit", "svg-to-pdfkit", "svgdom", "@svgdotjs/svg.js", "three", "esbuild", "piscina", "@resvg/resvg-js", "fontkit"];
+
+function projectRootFrom(file: string): string {
+  let dir = dirname(file);
+  for (let i = 0; i < 8; i++) {
+    if (existsSync(join(dir, "package.json")) && existsSync(join(dir, "templates"))) return dir;
+    dir = dirname(dir);
+  }
+  throw new Error(`cannot find the project root above ${file}`);
+}
+
+async function bundleCli(root: string): Promise<void> {
+  const outdir = join(root, "out", "build", "cli");
+  rmSync(outdir, { recursive: true, force: true });
+  await esbuild.build({
+    entryPoints: [join(root, "src", "cli", "main.ts")],
+    absWorkingDir: root,
+    bundle: true,
+    splitting: true,
+    format: "esm",
+    platform: "node",
+    target: "node20",
+    outdir,
+    chunkNames: "chunks/[name]-[hash]",
+    external: CLI_EXTERNAL,
+    // yargs and friends are CommonJS-free ESM; a few dependencies still call require()
+    banner: { js: "import { createRequire as __seamAtlasRequire } from 'node:module'; const require = __seamAtlasRequire(import.meta.url);" },
+    legalComments: "linked",
+    logLevel: "warning",
+  });
+}
+
+async function bundlePage(root: string): Promise<void> {
+  const outdir = join(root, "out", "build", "page");
+  mkdirSync(outdir, { recursive: true });
+  const result = await esbuild.build({
+    entryPoints: [join(root, "src", "render", "page3d", "main.ts")],
+    absWorkingDir: root,
+    bundle: true,
+    write: false,
+    format: "iife",
+    minify: true,
+    platform: "browser",
+    // fixed, so the bytes do not change with esbuild's default target
+    target: "es2022",
+    legalComments: "eof",
+    charset: "ascii",
+    logLevel: "warning",
+    metafile: true,
+  });
+  const script = result.outputFiles[0].text + licenceNotices(root, Object.keys(result.metafile.inputs));
+  writeFileSync(join(outdir, "page.js"), script);
+}
+
+async function main(): Promise<void> {
+  const root = projectRootFrom(fileURLToPath(import.meta.url));
+  await bundleCli(root);
+  await bundlePage(root);
+}
+
+main().catch((err) => {
+  process.stderr.write(`bundling failed: ${(err as Error).message}\n`);
+  process.exit(1);
+});
