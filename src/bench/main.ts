@@ -2,6 +2,7 @@
  * `npm run bench`: speed figures for people, and one JSON object (printed with
  * --json, and always written to out/bench.json). Run on the compiled JavaScript.
  */
+import { spawnSync } from "node:child_process";
 import { mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
@@ -70,8 +71,38 @@ function bestRates(a: () => number, b: () => number, rounds: number, secondsEach
   return [bestA, bestB];
 }
 
+/** Best wall time of `runs` whole processes `node ARGS`, s (cold starts: each is a new process). */
+function processSeconds(args: string[], runs: number): number {
+  let best = Infinity;
+  for (let i = 0; i < runs; i++) {
+    const t0 = performance.now();
+    const r = spawnSync(process.execPath, args, { stdio: "ignore" });
+    const t = (performance.now() - t0) / 1000;
+    if (r.status !== 0) throw new Error(`node ${args.join(" ")} exited ${r.status}`);
+    best = Math.min(best, t);
+  }
+  return best;
+}
+
+/** Start-up of the command line against Node itself (issue target: --help <= 3x, measure <= 5x). */
+function startup() {
+  const cli = join(projectRoot(), "out", "build", "cli", "main.js");
+  const nodeSeconds = processSeconds(["-e", "0"], 7);
+  const helpSeconds = processSeconds([cli, "--help"], 7);
+  const measureSeconds = processSeconds([cli, "measure", "--axis", "waist-A"], 7);
+  const r = (x: number) => Math.round(x * 1000) / 1000;
+  return {
+    nodeSeconds: r(nodeSeconds),
+    helpSeconds: r(helpSeconds),
+    measureSeconds: r(measureSeconds),
+    helpOverNode: Math.round((helpSeconds / nodeSeconds) * 10) / 10,
+    measureOverNode: Math.round((measureSeconds / nodeSeconds) * 10) / 10,
+  };
+}
+
 async function main(): Promise<void> {
   const json = process.argv.includes("--json");
+  const start = startup();
   const seam = seamFor(DEFAULT_SEAM_SHAPE, DEFAULT_SEAM_POINTS);
   const gyro = 10 * DEG;
   const axes = randomAxes(512, 1);
@@ -158,6 +189,7 @@ async function main(): Promise<void> {
     flight: { pitchesPerSecond: Math.round(flightsPerSecond) },
     atlas: { seconds: Math.round(atlasSeconds * 100) / 100, pages: atlas.pages, bytes: atlas.bytes.length },
     explain: { rowsPerSecond: Math.round(explainRowsPerSecond), rows },
+    startup: start,
     memory: { rssMB: Math.round(mem.rss / 1e5) / 10, heapUsedMB: Math.round(mem.heapUsed / 1e5) / 10 },
   };
   if (!Number.isFinite(sink)) throw new Error("benchmark produced a non-finite sum");
@@ -181,6 +213,8 @@ async function main(): Promise<void> {
       `  flight               ${result.flight.pitchesPerSecond.toLocaleString("en-US")} pitches/s (RK4, 1 ms steps, drag, Magnus, seam force; target >= 2,000)`,
       `  explain              ${result.explain.rowsPerSecond} rows/s over ${rows} rows with varied gyro (target >= 200)`,
       `  atlas, demo staff    ${result.atlas.seconds} s, ${result.atlas.pages} pages (target <= 15 s)`,
+      `  start, --help        ${start.helpSeconds} s, ${start.helpOverNode}x node -e 0 (${start.nodeSeconds} s; target <= 3x; best of 7 processes)`,
+      `  start, measure       ${start.measureSeconds} s for measure --axis waist-A, ${start.measureOverNode}x node -e 0 (target <= 5x)`,
       `  memory               ${result.memory.rssMB} MB resident`,
       `  written to out/bench.json`,
     ].join("\n") + "\n",
