@@ -397,6 +397,18 @@ const cases: Case[] = [
     }),
   ),
   {
+    name: "SIGTERM that arrives during a synchronous write is still handled: the file is renamed whole, no temporary file stays, the run ends by the signal",
+    run(dir) {
+      const f = join(dir, "out.json");
+      writeFileSync(f, "old");
+      const r = runChild(["selfterm", f, "new"]);
+      expect(r.stdout).toBe("");
+      expect(r.signal === "SIGTERM" || r.status === 143).toBe(true);
+      expect(temps(dir)).toEqual([]);
+      expect(readFileSync(f, "utf8")).toBe("new");
+    },
+  },
+  {
     name: "two interleaved streams on one file each leave a whole file; the last rename wins",
     async run(dir) {
       const f = join(dir, "same.json");
@@ -457,8 +469,10 @@ const cases: Case[] = [
 ];
 
 describe("output writer", () => {
-  it.each(cases)("$name", async (c) => {
-    const dir = mkdtempSync(join(tmpdir(), "seam-atlas-io-"));
-    await c.run(dir);
-  });
+  for (const c of cases) {
+    it(c.name, async () => {
+      const dir = mkdtempSync(join(tmpdir(), "seam-atlas-io-"));
+      await c.run(dir);
+    });
+  }
 });
