@@ -91,7 +91,7 @@ export function readCsv(path: string, options: CsvReadOptions = {}): CsvReader {
 
 class FileCsvReader implements CsvReader {
   private bytesRead = 0;
-  private names: readonly string[] | undefined;
+  private names: Promise<readonly string[]> | undefined;
   private readonly raw: AsyncGenerator<RawCsvItem>;
   private started = false;
 
@@ -113,8 +113,13 @@ class FileCsvReader implements CsvReader {
     void this.raw.return(undefined);
   }
 
-  async header(): Promise<readonly string[]> {
-    if (this.names) return this.names;
+  header(): Promise<readonly string[]> {
+    // read once: a second call (after an error too) gives the same answer
+    this.names ??= this.readHeader();
+    return this.names;
+  }
+
+  private async readHeader(): Promise<readonly string[]> {
     const first = await this.raw.next();
     if (first.done) throw new InputError(`${this.label}: the file is empty; expected a header line with column names`);
     const item = first.value;
@@ -127,7 +132,6 @@ class FileCsvReader implements CsvReader {
       if (j !== undefined) throw new InputError(`${this.label} line ${item.line}: the column name ${quote(n)} appears twice in the header (columns ${j + 1} and ${i + 1}); expected each name once`);
       seen.set(n, i);
     });
-    this.names = names;
     return names;
   }
 

@@ -8,8 +8,9 @@
  * on any existing entry, a symbolic link included (POSIX open(2), O_EXCL), and a
  * new random name is tried.
  *
- * While at least one temporary file exists, SIGINT and SIGTERM handlers are
- * installed. On such a signal they remove every temporary file and then, unless
+ * While at least one temporary file exists, an exit handler removes what is left
+ * when the process ends (process.exit after an error, say), and SIGINT and SIGTERM
+ * handlers are installed. On such a signal they remove every temporary file and then, unless
  * the program has handlers of its own for that signal, re-raise it with the
  * default action (the shell sees 130 or 143); should the process survive that,
  * it exits with 128 + the signal number. The handlers are taken away two event
@@ -94,16 +95,18 @@ function trackTemp(path: string): void {
   live.add(path);
   if (!installed) {
     for (const s of SIGNALS) process.on(s, onSignal);
+    process.on("exit", removeAll);
     installed = true;
   }
 }
 
 function uninstall(): void {
   for (const s of SIGNALS) process.removeListener(s, onSignal);
+  process.removeListener("exit", removeAll);
   installed = false;
 }
 
-function onSignal(signal: NodeJS.Signals): void {
+function removeAll(): void {
   for (const p of live) {
     try {
       unlinkSync(p);
@@ -112,6 +115,10 @@ function onSignal(signal: NodeJS.Signals): void {
     }
   }
   live.clear();
+}
+
+function onSignal(signal: NodeJS.Signals): void {
+  removeAll();
   uninstall();
   if (process.listenerCount(signal) > 0) return; // the program handles it itself
   const n = SIGNAL_NUMBERS[signal as (typeof SIGNALS)[number]] ?? 0;

@@ -195,6 +195,13 @@ describe("readCsv refuses a whole file with one line", () => {
     expect(await refusal(file(content))).toMatch(pattern);
   });
 
+  it("a bad header stays the answer: asking again does not take the next line as the header", async () => {
+    const r = readCsv(file("a,a\nb,c\n1,2\n"));
+    await expect(r.header()).rejects.toThrow(/appears twice/);
+    await expect(r.header()).rejects.toThrow(/appears twice/);
+    r.close();
+  });
+
   it("a folder, a missing file and an empty path, naming the path", async () => {
     const folder = join(dir, "folder.csv");
     mkdirSync(folder);

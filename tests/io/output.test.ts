@@ -409,6 +409,17 @@ const cases: Case[] = [
     },
   },
   {
+    name: "a run that exits (process.exit) while a stream is open leaves no temporary file and the old file",
+    run(dir) {
+      const f = join(dir, "out.csv");
+      writeFileSync(f, "old");
+      const r = runChild(["exit", f]);
+      expect(r.status).toBe(2);
+      expect(temps(dir)).toEqual([]);
+      expect(readFileSync(f, "utf8")).toBe("old");
+    },
+  },
+  {
     name: "two interleaved streams on one file each leave a whole file; the last rename wins",
     async run(dir) {
       const f = join(dir, "same.json");
