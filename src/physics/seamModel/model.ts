@@ -89,9 +89,21 @@ export interface ModelScratch {
  */
 export function seamModel(profile: SeamModelProfile = defaultProfile(), resolution: SeamModelResolution = {}): SeamModel {
   const res = resolveResolution(resolution);
+  return seamModelOnSamples(profile, res, seamFor(res.seamShape, res.seamPoints));
+}
+
+/**
+ * A model on given seam samples (constructed seams in tests, other balls). The polyline
+ * is closed: the last sample joins the first. `res.seamPoints` and `res.seamShape` are
+ * reported as given; the samples decide the geometry.
+ * @throws RangeError for fewer than 4 samples.
+ */
+export function seamModelOnSamples(profile: SeamModelProfile, res: ResolvedResolution, seam: SeamSamples): SeamModel {
+  if (!(seam.count >= 4 && seam.points.length >= 3 * seam.count)) {
+    throw new RangeError(`seam samples ${seam.count} must be at least 4 with 3 coordinates each`);
+  }
   const v = profile.values;
   const band = bandOf(v);
-  const seam = seamFor(res.seamShape, res.seamPoints);
   const bins = azimuthBins(res.azimuthBins);
   const bandNearRad = band.centerRad - band.widthRad / 2;
   const bandFarRad = band.centerRad + band.widthRad / 2;

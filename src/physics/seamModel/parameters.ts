@@ -222,7 +222,7 @@ export function resolveProfile(input: unknown, source: string): SeamModelProfile
     }
     if (typeof value !== "number" || !Number.isFinite(value) || value < p.min || value > p.max) {
       throw new RangeError(
-        `${source}: seam model parameter ${key} = ${JSON.stringify(value)} must be a number from ${p.min} to ${p.max}${p.unit === "deg" ? " deg" : ""}`,
+        `${source}: seam model parameter ${key} = ${typeof value === "number" ? String(value) : JSON.stringify(value)} must be a number from ${p.min} to ${p.max}${p.unit === "deg" ? " deg" : ""}`,
       );
     }
     values[key] = value;
