@@ -28,7 +28,7 @@
 import { unit3, type Vec3 } from "../../../geometry/vec.js";
 import { assertGyro } from "../../sampling/band.js";
 import { fillUnitCircle } from "./azimuth.js";
-import { evaluateFlowPoints } from "./instant.js";
+import { emptyInstant, evaluateFlowPoints, readInstant, type InstantCoefficient } from "./instant.js";
 import type { SeamModel } from "./model.js";
 import { assertMultipleOfFour, PHASES_RANGE } from "./resolution.js";
 
@@ -162,4 +162,25 @@ export function forceTimeline(model: SeamModel, axisBall: Readonly<Vec3>, gyroRa
     out.separationPlusMagnusRad[j] = Math.acos(r[5]);
   }
   return out;
+}
+
+/**
+ * The instantaneous coefficients at one phase of the turn (geometry/flow.ts's convention),
+ * by the timeline's own arithmetic: equal to forceTimeline's entry j at phaseRad = 2 pi j / n
+ * when cos and sin of the phase round alike. For single lab rows with a measured phase.
+ * @param phaseRad any finite number, rad.
+ * @param out overwritten and returned.
+ * @throws RangeError for a zero axis, |gyro| >= pi/2 or a non-finite phase.
+ */
+export function instantAtPhase(
+  model: SeamModel,
+  axisBall: Readonly<Vec3>,
+  gyroRad: number,
+  phaseRad: number,
+  out: InstantCoefficient = emptyInstant(),
+): InstantCoefficient {
+  if (!Number.isFinite(phaseRad)) throw new RangeError(`phase ${phaseRad} rad must be a finite number`);
+  prepareOrientation(model, axisBall, gyroRad);
+  evaluateFlowPoints(model, Math.cos(phaseRad), Math.sin(phaseRad));
+  return readInstant(model, out);
 }

@@ -3,6 +3,7 @@ import { ballToFlowAtPhase } from "../../../geometry/flow.js";
 import {
   defaultProfile,
   forceTimeline,
+  instantAtPhase,
   instantaneousCoefficient,
   resolveProfile,
   seamModel,
@@ -17,7 +18,7 @@ describe("through the turn (phase convention of geometry/flow.ts)", () => {
   const rnd = lcg(77);
   const cases = Array.from({ length: 5 }, () => ({ axis: randomUnit(rnd), gyro: (2 * rnd() - 1) * 60 * DEG }));
 
-  it("timeline entry j is the instantaneous coefficient at ballToFlowAtPhase(axis, gyro, 2 pi j / phases), coefficients and the four separation angles, to 1e-12", () => {
+  it("timeline entry j and instantAtPhase(2 pi j / phases) are the instantaneous coefficient at ballToFlowAtPhase(axis, gyro, 2 pi j / phases), coefficients to 1e-12 and the four separation angles to 1e-9 rad", () => {
     for (const c of cases) {
       const t = forceTimeline(model, c.axis, c.gyro, 36);
       const m = new Float64Array(9);
@@ -30,6 +31,9 @@ describe("through the turn (phase convention of geometry/flow.ts)", () => {
         expectAbsolute(t.separationMinusAcrossRad[j], i.separationMinusAcrossRad, 1e-9);
         expectAbsolute(t.separationPlusMagnusRad[j], i.separationPlusMagnusRad, 1e-9);
         expectAbsolute(t.separationMinusMagnusRad[j], i.separationMinusMagnusRad, 1e-9);
+        const a = instantAtPhase(model, c.axis, c.gyro, (2 * Math.PI * j) / 36);
+        expectAbsolute(a.across, i.across, 1e-12);
+        expectAbsolute(a.alongMagnus, i.alongMagnus, 1e-12);
       }
     }
   });
@@ -70,6 +74,7 @@ describe("through the turn (phase convention of geometry/flow.ts)", () => {
     expect(() => turnAverage(model, [0, 0, 0], 0)).toThrow(/cannot normalise vector \(0, 0, 0\)/);
     expect(() => turnAverage(model, [0, 0, 1], 95 * DEG)).toThrow(/gyro angle 95/);
     expect(() => forceTimeline(model, [0, 0, 1], 0, 90)).toThrow(/timeline phases 90/);
+    expect(() => instantAtPhase(model, [0, 0, 1], 0, Number.POSITIVE_INFINITY)).toThrow(/phase Infinity rad/);
   });
 
   it("models built from different profiles share one set of seam samples and azimuth bins (the same objects), so building one per parameter vector redoes no sampling", () => {
