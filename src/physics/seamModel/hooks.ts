@@ -8,8 +8,9 @@
  * and adds F = 1/2 rho pi R^2 |v|^2 (C_a a + C_m m), newtons, with rho and R from the
  * hook input. The coefficients come from the release orientation (spin axis in the ball
  * frame and gyro): the seams stay fixed relative to the spin axis, and the few degrees
- * the velocity turns in flight change the gyro only slightly (not re-evaluated). No
- * spin, or spin along the velocity, leaves a and m undefined: the hooks then add nothing.
+ * the velocity turns in flight change the gyro, and the time-resolved hook's phase, only
+ * slightly (neither is re-evaluated). No spin, or spin along the velocity, leaves a and
+ * m undefined: the hooks then add nothing.
  *
  * Two hooks:
  *   - seamHookTurnAverage: the quasi-steady turn average, the fast path when the ball

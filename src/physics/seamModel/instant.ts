@@ -31,12 +31,17 @@
  * early fixation away from the fixed side.
  *
  * Crossings: the seam is the closed polyline of its arc-length samples. A segment that
- * reaches the polar range where crossings matter ([tripStart, min(far, theta_T)]) is
- * checked for meridians between its ends' pseudo-angles (azimuth.ts); each crossing is
- * the exact intersection of the chord with the meridian's half-plane, pushed out to the
- * sphere (cos theta = z / |r|). Between samples the chord cuts inside the curve by at
- * most (spacing)^2 / 8 (2e-4 at 256 samples); the azimuth grid's staircase (steps of
- * order 1/B in C) is the larger error, see the convergence study.
+ * reaches the trip zone or the band up to min(far, theta_T) (tested on its ends' heights,
+ * widened by the model's chordMargin) is checked for meridians between its ends'
+ * pseudo-angles (azimuth.ts); each crossing is the exact intersection of the chord with
+ * the meridian's half-plane, pushed out to the sphere (cos theta = z / |r|). A chord
+ * wholly inside the trip zone trips every meridian it crosses without interpolating.
+ * Between samples the chord cuts inside the curve by at most (spacing)^2 / 8 (9e-4 at
+ * the default 128 samples); the staircase of the meridian grid (steps of order 1/B in C)
+ * is the larger error, see MODEL.md's convergence study. Sharp zone edges: a crossing
+ * exactly on an edge counts by rounding, so symmetric attitudes that put a sample on an
+ * edge (e.g. whole-degree phases about the ball's z axis) can break a symmetry by one
+ * meridian's step.
  */
 import type { SeamModel } from "./model.js";
 import { pressureIntegralFromTable } from "./pressure.js";
