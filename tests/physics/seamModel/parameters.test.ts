@@ -61,12 +61,15 @@ describe("profiles", () => {
     expect(hashes.size).toBe(1 + SEAM_MODEL_PARAMETERS.filter((q) => q.calibratable).length);
   });
 
-  it("a known hash pins the canonical form: the default profile's values hash to the same 8 digits run after run", () => {
-    // Recomputed here from the documented recipe (SHA-256 of the canonical JSON), not a stored constant.
-    return import("node:crypto").then(({ createHash }) => {
-      const d = defaultProfile();
-      expect(createHash("sha256").update(canonicalValuesJson(d.values)).digest("hex").slice(0, 8)).toBe(d.hash);
-    });
+  it("the default profile's canonical JSON and hash are pinned (outputs echo the hash: a change of defaults must show here); the hash is the first 8 hex digits of SHA-256 of that JSON", async () => {
+    const d = defaultProfile();
+    const json =
+      '[["laminarSeparationDeg",80],["turbulentSeparationDeg",120],["tripStartDeg",10],["tripEndDeg",50],' +
+      '["bandCenterDeg",100],["bandWidthDeg",40],["wakePressureCoefficient",-0.3],["suctionFactor",1],["scale",1]]';
+    expect(canonicalValuesJson(d.values)).toBe(json);
+    const { createHash } = await import("node:crypto");
+    expect(createHash("sha256").update(json).digest("hex").slice(0, 8)).toBe(d.hash);
+    expect(d.hash).toBe("6c7f8250");
   });
 
   it("rejects an unknown name, a non-number, an out-of-range value and malformed profiles with a one-line RangeError naming the source, the name, the value and the range", () => {
