@@ -27,15 +27,16 @@ export interface AzimuthBins {
   readonly cellCount: Int32Array;
 }
 
-/** Pseudo-angle of (x, y) in [0, 4); (0, 0) gives 0. */
+/** Pseudo-angle of (x, y) in [0, 4); (0, 0) gives 0. (instant.ts inlines the same arithmetic.) */
 export function pseudoAngle(x: number, y: number): number {
   const ax = x < 0 ? -x : x;
   const ay = y < 0 ? -y : y;
   const d = ax + ay;
   const r = d > 0 ? ay / d : 0;
-  let p: number;
-  if (y >= 0) p = x >= 0 ? r : 2 - r;
-  else p = x < 0 ? 2 + r : 4 - r;
+  // quadrants: r, 2 - r, 2 + r, 4 - r
+  const base = y >= 0 ? (x >= 0 ? 0 : 2) : x < 0 ? 2 : 4;
+  const sign = (x >= 0) === (y >= 0) ? 1 : -1;
+  const p = base + sign * r;
   return p >= 4 ? 0 : p;
 }
 
