@@ -42,6 +42,6 @@ describe("meridians and the pseudo-angle (src/physics/seamModel/azimuth.ts)", ()
       expect(bins.cos[96 - j]).toBe(bins.cos[j]);
       expect(bins.sin[96 - j] + bins.sin[j]).toBe(0);
     }
-    expect([bins.cos[24], bins.sin[24], bins.cos[48], bins.sin[48]]).toEqual([0, 1, -1, 0]);
+    expect([bins.cos[24], bins.sin[24], bins.cos[48], bins.sin[48]].map((x) => x + 0)).toEqual([0, 1, -1, 0]); // + 0 folds -0
   });
 });
