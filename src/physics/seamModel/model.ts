@@ -18,7 +18,7 @@ import { bandOf, defaultProfile, type SeamModelProfile } from "./parameters.js";
 import { meridianPressureIntegral, pressureTable, type PressureTable } from "./pressure.js";
 import { resolveResolution, type ResolvedResolution, type SeamModelResolution } from "./resolution.js";
 
-const DEG = Math.PI / 180;
+import { DEG } from "../../../geometry/units.js";
 /** Intervals of the G(cos theta_s) table over the fixation band. */
 const PRESSURE_TABLE_INTERVALS = 256;
 

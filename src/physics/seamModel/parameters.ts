@@ -24,7 +24,7 @@ import { createHash } from "node:crypto";
 import { bandFromDegrees, DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, type Band } from "../../sampling/band.js";
 import { attachedPressureCoefficient } from "./pressure.js";
 
-const DEG = Math.PI / 180;
+import { DEG } from "../../../geometry/units.js";
 
 export interface SeamModelParameter {
   /** Key in a profile's "parameters". */

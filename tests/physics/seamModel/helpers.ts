@@ -1,7 +1,9 @@
 /** Helpers shared by the seam-model tests: constructed seams, rotations, turning points. */
 import type { SeamSamples } from "../../../geometry/seamSamples.js";
 
-export const DEG = Math.PI / 180;
+import { DEG } from "../../../geometry/units.js";
+
+export { DEG };
 
 /** A unit point at polar angle theta (from flow +z) and azimuth psi (from flow +x toward +y). */
 export function polarPoint(thetaRad: number, psiRad: number): [number, number, number] {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { spinAxisFromTilt, TOWARD_PLATE } from "../../../geometry/frames.js";
-import { BALL_MASS_KG } from "../../../src/physics/ball.js";
+import { BALL_MASS_KG } from "../../../geometry/ball.js";
 import { simulateFlight, type FlightOptions, type Launch } from "../../../src/physics/flight.js";
 import type { SeamForceHook, SeamForceInput } from "../../../src/physics/forces.js";
 import { releasePosition, releaseVelocity } from "../../../src/physics/launch.js";
@@ -11,7 +11,7 @@ import {
   seamModel,
   turnAverage,
 } from "../../../src/physics/seamModel/index.js";
-import { M_PER_IN, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../../src/physics/units.js";
+import { M_PER_IN, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../../geometry/units.js";
 import { expectAbsolute, expectRelative } from "../tolerance.js";
 import { DEG } from "./helpers.js";
 

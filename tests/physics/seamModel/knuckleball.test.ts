@@ -14,9 +14,9 @@
  */
 import { describe, expect, it } from "vitest";
 import { airState } from "../../../src/physics/air.js";
-import { BALL_MASS_KG, BALL_RADIUS_M } from "../../../src/physics/ball.js";
+import { BALL_MASS_KG, BALL_RADIUS_M } from "../../../geometry/ball.js";
 import { forceTimeline, seamForceNewtons, seamModel } from "../../../src/physics/seamModel/index.js";
-import { M_PER_S_PER_MPH } from "../../../src/physics/units.js";
+import { M_PER_S_PER_MPH } from "../../../geometry/units.js";
 import { expectAbsolute } from "../tolerance.js";
 import { harmonic, turningPoints } from "./helpers.js";
 

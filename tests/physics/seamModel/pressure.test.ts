@@ -8,7 +8,7 @@ import {
 import { meridianSideIntegral } from "../../../src/physics/wakePressure.js";
 import { expectAbsolute, expectRelative } from "../tolerance.js";
 
-const DEG = Math.PI / 180;
+import { DEG } from "../../../geometry/units.js";
 
 /** Composite Simpson rule on [a, b] with `panels` (even) panels. */
 function simpson(f: (x: number) => number, a: number, b: number, panels: number): number {
