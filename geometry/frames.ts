@@ -21,7 +21,7 @@
  * behind the pitcher the viewer's right is -x; from behind the catcher it is +x,
  * so the two views read mirror-image clocks: 1:30 from one is 10:30 from the other.
  */
-import { angleToClock, clockToAngle } from "./clock.js";
+import { angleToClock, formatClock } from "./clock.js";
 import { cross3, dot3, norm3, unit3, type Vec3 } from "./vec.js";
 
 export type ClockView = "pitcher" | "catcher";
@@ -115,6 +115,16 @@ export function armSideSign(hand: Hand): -1 | 1 {
 /** A plate-plane offset (x toward the catcher's right, z up) as arm-side and up components for a hand. */
 export function toArmSide(xM: number, zM: number, hand: Hand): { armSideM: number; upM: number } {
   return { armSideM: armSideSign(hand) * xM, upM: zM };
+}
+
+/**
+ * The clock reading ("H:MM") of a movement in the plate plane (horizontal toward the
+ * catcher's right, vertical up, any unit) seen from `view`, or null when it is (near) zero.
+ */
+export function movementClock(horizontal: number, vertical: number, view: ClockView): string | null {
+  if (!(Math.hypot(horizontal, vertical) > 1e-9)) return null;
+  const a = directionToClockAngle([horizontal, 0, vertical], view);
+  return a === null ? null : formatClock(angleToClock(a));
 }
 
 export const HANDS: readonly Hand[] = ["right", "left"];

@@ -145,13 +145,15 @@ export function symmetryImage(grid: SphereGrid, index: number, g: number): numbe
 
 /**
  * For each cell, the smallest index in its orbit under the seam symmetries
- * (the representative whose value stands for the whole orbit).
+ * (the representative whose value stands for the whole orbit); with `properOnly`,
+ * under the four rotations alone (for numbers a mirror changes).
  */
-export function orbitRepresentatives(grid: SphereGrid): Int32Array {
+export function orbitRepresentatives(grid: SphereGrid, properOnly = false): Int32Array {
   const rep = new Int32Array(grid.count);
   for (let idx = 0; idx < grid.count; idx++) {
     let best = idx;
     for (let g = 1; g < SEAM_SYMMETRIES.length; g++) {
+      if (properOnly && !SEAM_SYMMETRIES[g].proper) continue;
       const image = symmetryImage(grid, idx, g);
       if (image < best) best = image;
     }

@@ -10,10 +10,9 @@
  */
 import { buildPitch, type RawPitch } from "./jobs/request/pitch.js";
 import { screenReport, type ScreenReport } from "./screening/report.js";
-import { screenPitch, type ScreenSettings } from "./screening/screen.js";
-import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG } from "./sampling/band.js";
+import { DEFAULT_SCREEN_OPTIONS, screenPitch, type ScreenSettings } from "./screening/screen.js";
+import { seamModel } from "./physics/seamModel/model.js";
 import type { Pitch } from "./screening/pitch.js";
-import { DEG } from "../geometry/units.js";
 
 /** A pitch in the pitch-file form (README): mph, rpm, a clock tilt, degrees. */
 export interface PitchSpec {
@@ -34,14 +33,12 @@ export function pitchFromSpec(spec: PitchSpec): Pitch {
   return buildPitch({ ...spec } as RawPitch, (field) => `pitch field ${field}`).pitch;
 }
 
-/** Screens a pitch given in people's units; returns the report `screen --json` prints for it. */
+/** Screens a pitch given in people's units with the default settings and model (or those given); returns the report `screen --json` prints for it. */
 export function screenPitchSpec(spec: PitchSpec, settings: Partial<ScreenSettings> = {}): ScreenReport {
   const input = buildPitch({ ...spec } as RawPitch, (field) => `pitch field ${field}`);
-  const result = screenPitch(input.pitch, settings);
-  const band = result.settings.band;
-  const centerDeg = settings.band ? band.centerRad / DEG : DEFAULT_BAND_CENTER_DEG;
-  const widthDeg = settings.band ? band.widthRad / DEG : DEFAULT_BAND_WIDTH_DEG;
-  return screenReport(result, input.echo, centerDeg, widthDeg);
+  const model = settings.model ?? seamModel();
+  const result = screenPitch(input.pitch, { ...DEFAULT_SCREEN_OPTIONS, band: model.band, ...settings, model });
+  return screenReport(result, input.echo);
 }
 
 // geometry: the ball, its seam, landmarks, frames, clock, units
@@ -69,4 +66,8 @@ export { airState, type AirConditions, type AirState } from "./physics/air.js";
 export { simulateFlight, type FlightOptions, type FlightResult, type Launch } from "./physics/flight.js";
 export { flyPitch, type PitchFlight } from "./physics/pitchFlight.js";
 export { tradeMovement } from "./physics/tradeMovement.js";
+export {
+  coefficientMap, defaultProfile, forceTimeline, resolveProfile, SEAM_MODEL_PARAMETERS, seamModel, turnAverage,
+  type SeamModel, type SeamModelProfile, type TurnAverage,
+} from "./physics/seamModel/index.js";
 export { InputError } from "./io/errors.js";

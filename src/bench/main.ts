@@ -17,13 +17,15 @@ import { computeSphereMap } from "../sampling/sphereMap.js";
 import { projectRoot, TOOL_VERSION } from "../version.js";
 import { demoStaffPath, pitchesFromFile } from "../jobs/request/pitch.js";
 import { parseAtlas, runAtlas } from "../jobs/paper.js";
-import { screenPitch } from "../screening/screen.js";
+import { parseScreen, screenOne } from "../jobs/screen.js";
 import { Explainer } from "../physics/explain.js";
 import { simulateFlight } from "../physics/flight.js";
 import { releasePosition, releaseVelocity } from "../physics/launch.js";
 import { airState } from "../physics/air.js";
-import { seamForceHook } from "../physics/seamForce.js";
 import { spinVector } from "../physics/pitchFlight.js";
+import { seamHookTimeResolved, seamHookTurnAverage } from "../physics/seamModel/hooks.js";
+import { seamModel } from "../physics/seamModel/model.js";
+import { turnAverage } from "../physics/seamModel/turn.js";
 
 const BRUTE_STEPS = 720;
 
@@ -130,24 +132,45 @@ async function main(): Promise<void> {
   }
   // screening: the default screen of one pitch, then the whole demo staff
   const staff = pitchesFromFile(demoStaffPath()).pitches;
-  screenPitch(staff[1].pitch); // warm-up
+  const screenJob = parseScreen({ demo: true });
+  screenOne(screenJob, screenJob.pitches[1]); // warm-up
   let screenSeconds = Infinity;
   for (let rep = 0; rep < 3; rep++) {
     const t0 = performance.now();
-    screenPitch(staff[1].pitch);
+    screenOne(screenJob, screenJob.pitches[1]);
     screenSeconds = Math.min(screenSeconds, (performance.now() - t0) / 1000);
   }
   const tStaff = performance.now();
-  for (const p of staff) screenPitch(p.pitch);
+  for (const p of screenJob.pitches) screenOne(screenJob, p);
   const staffSeconds = (performance.now() - tStaff) / 1000;
+  // the seam-force model: turn averages per second at the default resolution
+  const model = seamModel();
+  const [turnAveragesPerSecond] = bestRates(
+    () => {
+      for (let i = 0; i < 64; i++) sink += turnAverage(model, [axes[3 * i], axes[3 * i + 1], axes[3 * i + 2]], gyro).across;
+      return 64;
+    },
+    () => 1,
+    3,
+    0.5,
+  );
   // flight: one full pitch with drag, Magnus and the seam-force hook
   const sinker = staff[1].pitch;
   const air = airState();
   const launch = { releasePositionM: releasePosition({ hand: sinker.hand }), releaseVelocityMPerS: releaseVelocity(sinker.speedMPerS, -DEG, 0.02), spinRadPerS: spinVector(sinker) };
-  const hook = seamForceHook({ axis: [0, 0, 1], gyroRad: sinker.gyroRad, coefficient: { alongAxis: 0.01, alongMagnus: 0.005, magnitude: 0.0112 } });
+  const hook = seamHookTurnAverage(model, [0.6, 0.8, 0], sinker.gyroRad);
   const flightsPerSecond = rate(() => {
     for (let i = 0; i < 50; i++) sink += simulateFlight(launch, { air, seamForce: hook }).timeToPlateS;
     return 50;
+  }, 2);
+  // time-resolved flights: a new release phase (and so a new timeline) every flight, as a phase sweep does
+  let phaseIndex = 0;
+  const timeResolvedPerSecond = rate(() => {
+    for (let i = 0; i < 20; i++) {
+      const resolved = seamHookTimeResolved(model, [axes[3 * i], axes[3 * i + 1], axes[3 * i + 2]], sinker.gyroRad, { phaseRad: 0.1 * phaseIndex++, spinRadPerS: sinker.spinRadPerS });
+      sink += simulateFlight(launch, { air, seamForce: resolved }).timeToPlateS;
+    }
+    return 20;
   }, 2);
   // explain: 3,000 tracked pitches with gyro angles spread over -20 to 45 deg (maps included)
   const explainer = new Explainer();
@@ -186,7 +209,8 @@ async function main(): Promise<void> {
       staffSeconds: Math.round(staffSeconds * 1000) / 1000,
       staffPitches: staff.length,
     },
-    flight: { pitchesPerSecond: Math.round(flightsPerSecond) },
+    flight: { pitchesPerSecond: Math.round(flightsPerSecond), timeResolvedPerSecond: Math.round(timeResolvedPerSecond) },
+    seamModel: { turnAveragesPerSecond: Math.round(turnAveragesPerSecond), profileHash: model.profile.hash },
     atlas: { seconds: Math.round(atlasSeconds * 100) / 100, pages: atlas.pages, bytes: atlas.bytes.length },
     explain: { rowsPerSecond: Math.round(explainRowsPerSecond), rows },
     startup: start,
@@ -208,9 +232,11 @@ async function main(): Promise<void> {
       `  brute force          ${s.brutePolesPerSecond} spin axes/s (${BRUTE_STEPS} steps per revolution)`,
       `  exact / brute        ${s.exactOverBrute}x   (target >= 100x; best of 6 alternating half-second runs each)`,
       `  full-sphere map      ${result.sphereMap.seconds} s (best of 3) for ${result.sphereMap.cells.toLocaleString("en-US")} axes at 1 deg (${result.sphereMap.evaluated.toLocaleString("en-US")} evaluated, the rest by symmetry; target <= 2 s)`,
-      `  screen, one pitch    ${result.screen.seconds} s (default settings, best of 3; target <= 3 s)`,
+      `  seam-force model     ${result.seamModel.turnAveragesPerSecond.toLocaleString("en-US")} turn averages/s (default resolution)`,
+      `  screen, one pitch    ${result.screen.seconds} s computing (default settings, best of 3; target <= 1 s)`,
       `  screen, demo staff   ${result.screen.staffSeconds} s for ${result.screen.staffPitches} pitches`,
-      `  flight               ${result.flight.pitchesPerSecond.toLocaleString("en-US")} pitches/s (RK4, 1 ms steps, drag, Magnus, seam force; target >= 2,000)`,
+      `  flight               ${result.flight.pitchesPerSecond.toLocaleString("en-US")} pitches/s (RK4, 1 ms steps, drag, Magnus, turn-averaged seam force; target >= 2,000)`,
+      `  time-resolved flight ${result.flight.timeResolvedPerSecond.toLocaleString("en-US")} pitches/s (a new 360-phase timeline each; target >= 500)`,
       `  explain              ${result.explain.rowsPerSecond} rows/s over ${rows} rows with varied gyro (target >= 200)`,
       `  atlas, demo staff    ${result.atlas.seconds} s, ${result.atlas.pages} pages (target <= 15 s)`,
       `  start, --help        ${start.helpSeconds} s, ${start.helpOverNode}x node -e 0 (${start.nodeSeconds} s; target <= 3x; best of 7 processes)`,

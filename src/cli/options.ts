@@ -34,8 +34,9 @@ export function withPitchOptions<T>(y: Argv<T>) {
 export function withSamplerOptions<T>(y: Argv<T>) {
   return y
     .option("seam-shape", text(`seam shape b of the curve, 0 < b < 0.5 [default: ${DEFAULT_SEAM_SHAPE.toFixed(6)}, fitted to a published cover's waist]`))
-    .option("band-center", text("separation band centre, deg from the front stagnation point", String(DEFAULT_BAND_CENTER_DEG)))
-    .option("band-width", text("separation band width, deg", String(DEFAULT_BAND_WIDTH_DEG)))
+    .option("band-center", text(`separation band centre, deg from the front stagnation point [default: the model profile's, ${DEFAULT_BAND_CENTER_DEG}]`))
+    .option("band-width", text(`separation band width, deg [default: the model profile's, ${DEFAULT_BAND_WIDTH_DEG}]`))
+    .option("model", text("a seam-force model profile (JSON; see README) [default: the built-in defaults]"))
     .option("seam-points", text(`seam samples, a multiple of 4 from ${SEAM_POINTS_RANGE[0]} to ${SEAM_POINTS_RANGE[1]}`, String(DEFAULT_SEAM_POINTS)));
 }
 
@@ -45,7 +46,8 @@ export function withScreenOptions<T>(y: Argv<T>) {
     .option("grid", text(`spacing of the axis-position grid on the ball, deg (${GRID_SPACING_RANGE_DEG[0]} to ${GRID_SPACING_RANGE_DEG[1]})`, String(DEFAULT_GRID_SPACING_DEG)))
     .option("spread", text(`release scatter of the axis on the ball, deg per direction (${SPREAD_RANGE_DEG[0]} to ${SPREAD_RANGE_DEG[1]})`, String(DEFAULT_SPREAD_DEG)))
     .option("rank", text("rank by strength (score), robust (10th-percentile score) or blend (their mean)", "blend"))
-    .option("finger-spacing", text("centre-to-centre spacing of the index and middle pads, inches", String(DEFAULT_FINGER_SPACING_IN)));
+    .option("finger-spacing", text("centre-to-centre spacing of the index and middle pads, inches", String(DEFAULT_FINGER_SPACING_IN)))
+    .option("window-ft", text("where the trade's movement window starts, ft from home plate (10 to 55)", "50"));
 }
 
 /** The air. */

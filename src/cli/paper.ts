@@ -2,7 +2,7 @@
 import { join } from "node:path";
 import type { Argv } from "yargs";
 import { projectRoot } from "../version.js";
-import { textOption, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
+import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
 import { print, progress, writeAtomic } from "./output.js";
 
 function outputPath(argv: Record<string, unknown>, fallback: string): string {
@@ -15,7 +15,7 @@ export function registerPaper(y: Argv): Argv {
       "card",
       "print a grip card (PDF, or SVG with --svg): the pitch, two ball drawings, finger placement in words, score, robustness, push and seam movement",
       (c) =>
-        withScreenOptions(
+        withAirOptions(withScreenOptions(
           withSamplerOptions(
             withPitchOptions(c)
               .option("candidate", textOption("which of the screen's candidates (1 = best)", "1"))
@@ -26,7 +26,7 @@ export function registerPaper(y: Argv): Argv {
               .example("$0 card --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --want arm", "the best grip card for a sinker")
               .example("$0 card --demo --pitch-name 'Iris Talvela/sinker' --layout letter-sheet-6-cards", "a sheet of cards to cut out"),
           ),
-        ),
+        )),
       async (argv) => {
         const { parseCard, runCard } = await import("../jobs/paper.js");
         const made = await runCard(parseCard(argv));
@@ -39,7 +39,7 @@ export function registerPaper(y: Argv): Argv {
       "atlas",
       "print the ranked grip atlas (PDF) for a pitch or a staff: cover, sphere maps, candidate cards beside the reference holds, how to read it, cautions",
       (c) =>
-        withScreenOptions(
+        withAirOptions(withScreenOptions(
           withSamplerOptions(
             withPitchOptions(c)
               .option("top", textOption("candidates per pitch (1 to 12)", "4"))
@@ -47,7 +47,7 @@ export function registerPaper(y: Argv): Argv {
               .option("out", textOption("output PDF [default: out/atlas.pdf]"))
               .example("$0 atlas --demo", "the demo staff's atlas in out/atlas.pdf"),
           ),
-        ),
+        )),
       async (argv) => {
         const { parseAtlas, runAtlas } = await import("../jobs/paper.js");
         const made = await runAtlas(parseAtlas(argv), progress());

@@ -2,7 +2,7 @@
 import type { Argv } from "yargs";
 import { InputError } from "../io/errors.js";
 import { DEFAULT_TOP } from "../screening/screen.js";
-import { textOption, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
+import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
 import { print, writeAtomic } from "./output.js";
 
 export function registerScreen(y: Argv): Argv {
@@ -10,7 +10,7 @@ export function registerScreen(y: Argv): Argv {
     "screen",
     "screen every spin-axis position on the ball for a pitch: best distinct grips, robustness, the two- and four-seam holds, finger placement",
     (c) =>
-      withScreenOptions(
+      withAirOptions(withScreenOptions(
         withSamplerOptions(
           withPitchOptions(c)
             .option("top", textOption("how many candidates to list (1 to 50)", String(DEFAULT_TOP)))
@@ -21,7 +21,7 @@ export function registerScreen(y: Argv): Argv {
             .example("$0 screen --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --want arm", "a right-hander's sinker")
             .example("$0 screen --demo --csv", "the demo staff as CSV"),
         ),
-      ),
+      )),
     async (argv) => {
       if (argv.json && argv.csv) throw new InputError(`give --json or --csv, not both`);
       const { parseScreen, runScreen } = await import("../jobs/screen.js");

@@ -3,7 +3,7 @@ import { statSync } from "node:fs";
 import type { Argv } from "yargs";
 import { InputError } from "../io/errors.js";
 import { DEFAULT_TOP } from "../screening/screen.js";
-import { textOption, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
+import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
 import { print, writeAtomic } from "./output.js";
 
 const DEFAULT_VIEW_OUT = "out/view.html";
@@ -13,7 +13,7 @@ export function registerView(y: Argv): Argv {
     "view",
     "screen a pitch and write a self-contained 3-D page (one HTML file, no network needed): the ball turning in the separation band, the push, the candidates and the reference holds",
     (c) =>
-      withScreenOptions(
+      withAirOptions(withScreenOptions(
         withSamplerOptions(
           withPitchOptions(c)
             .option("top", textOption("how many candidates to show (1 to 50)", String(DEFAULT_TOP)))
@@ -21,7 +21,7 @@ export function registerView(y: Argv): Argv {
             .example("$0 view --demo", "the demo staff, to out/view.html")
             .example("$0 view --hand right --speed 92 --spin 2150 --tilt 1:45 --want arm", "one pitch, to out/view.html"),
         ),
-      ),
+      )),
     async (argv) => {
       const out = String(argv.out ?? "").trim();
       if (Array.isArray(argv.out)) throw new InputError(`--out was given ${argv.out.length} times; give it once (an .html file name)`);

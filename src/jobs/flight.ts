@@ -2,28 +2,31 @@
  * The flight job: a pitch with a seam orientation flown to the plate: plate
  * location, time, approach angles, and movement split into Magnus and seam parts.
  */
-import { toArmSide, directionToClockAngle } from "../../geometry/frames.js";
-import { angleToClock, formatClock } from "../../geometry/clock.js";
+import { movementClock, toArmSide } from "../../geometry/frames.js";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
-import { DEG, M_PER_IN, KELVIN_AT_0_C, PA_PER_HPA } from "../../geometry/units.js";
+import { DEG, M_PER_FT, M_PER_IN, KELVIN_AT_0_C, PA_PER_HPA } from "../../geometry/units.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
 import { InputError } from "../io/errors.js";
 import type { AirConditions } from "../physics/air.js";
 import type { DragModel } from "../physics/drag.js";
-import { flyPitch, type PitchFlight } from "../physics/pitchFlight.js";
-import { SEAM_FORCE_SCALE_RANGE } from "../physics/seamForce.js";
-import { DEFAULT_TOP, screenPitch, TOP_RANGE } from "../screening/screen.js";
+import { flyPitch, tradeArmSide, type PitchFlight } from "../physics/pitchFlight.js";
+import type { SeamModel } from "../physics/seamModel/model.js";
+import type { TradeBreak } from "../physics/tradeMovement.js";
+import { DEFAULT_SCREEN_OPTIONS, DEFAULT_TOP, screenPitch, TOP_RANGE } from "../screening/screen.js";
 import type { PitchEcho } from "../screening/report.js";
 import type { Pitch } from "../screening/pitch.js";
 import { pitchesFromRequest } from "./request/pitch.js";
-import { airConditions, dragModel, launchAngles, releasePoint, samplerSettings, spinDecay, type SamplerSettings } from "./request/settings.js";
-import { oneOf, parseAxis, parseInRange, parseInteger, type Request } from "./request/values.js";
+import { buildModel, modelChoice } from "./request/model.js";
+import { airConditions, dragModel, launchAngles, releasePoint, samplerSettings, spinDecay, windowStart, type SamplerSettings } from "./request/settings.js";
+import { oneOf, parseAxis, parseInteger, parseNumber, type Request } from "./request/values.js";
 
 export interface FlightJob {
   readonly pitch: Pitch;
   readonly echo: PitchEcho;
-  readonly source?: string;
+  /** The files read (pitch file, model profile). */
+  readonly inputs: readonly { option: string; path: string }[];
   readonly sampler: SamplerSettings;
+  readonly model: SeamModel;
   /** How the orientation was given: an --axis text, "candidate N" or "four-seam reference". */
   readonly axisGiven: string;
   readonly axisRequest: { readonly kind: "axis"; readonly vector: Vec3 } | { readonly kind: "candidate"; readonly n: number } | { readonly kind: "reference"; readonly name: string };
@@ -33,7 +36,10 @@ export interface FlightJob {
   readonly launch?: { verticalRad: number; horizontalRad: number };
   readonly drag: DragModel;
   readonly spinDecayS?: number;
-  readonly seamScale: number;
+  /** Release phase, rad, when given (the seam force then follows the ball's turning from it). */
+  readonly phaseRad?: number;
+  readonly windowStartM: number;
+  readonly trajectory: boolean;
 }
 
 export interface FlightOutcome {
@@ -43,7 +49,8 @@ export interface FlightOutcome {
 }
 
 export function parseFlight(request: Request): FlightJob {
-  const sampler = samplerSettings(request);
+  const choice = modelChoice(request);
+  const sampler = samplerSettings(request, choice.profile);
   const { pitches, source } = pitchesFromRequest(request);
   if (pitches.length !== 1) throw new InputError(`flight takes one pitch; the file has ${pitches.length} (choose one with --pitch-name)`);
   const { pitch, echo } = pitches[0];
@@ -57,7 +64,7 @@ export function parseFlight(request: Request): FlightJob {
     axisGiven = a.given;
   } else if (request.candidate !== undefined) {
     const n = parseInteger("candidate", request.candidate, "a candidate number from the screen, 1 or more");
-    if (n < 1) throw new InputError(`--candidate ${n} is out of range; expected 1 or more`);
+    if (n < 1 || n > TOP_RANGE[1]) throw new InputError(`--candidate ${n} is out of range; expected 1 to ${TOP_RANGE[1]}`);
     axisRequest = { kind: "candidate", n };
     axisGiven = `candidate ${n}`;
   } else {
@@ -65,11 +72,13 @@ export function parseFlight(request: Request): FlightJob {
     axisRequest = { kind: "reference", name };
     axisGiven = `${name} reference`;
   }
+  const inputs = [...(source !== undefined && !request.demo ? [{ option: "pitch", path: source }] : []), ...(choice.source !== undefined ? [{ option: "model", path: choice.source }] : [])];
   return {
     pitch,
     echo,
-    source,
+    inputs,
     sampler,
+    model: buildModel(choice.profile, sampler.seamShape),
     axisGiven,
     axisRequest,
     airMode: oneOf("air", request.air ?? "standard", ["standard", "none"] as const),
@@ -78,7 +87,9 @@ export function parseFlight(request: Request): FlightJob {
     launch: launchAngles(request),
     drag: dragModel(request),
     spinDecayS: spinDecay(request),
-    seamScale: parseInRange("seam-scale", request["seam-scale"] ?? "1", SEAM_FORCE_SCALE_RANGE[0], SEAM_FORCE_SCALE_RANGE[1], ""),
+    phaseRad: request.phase === undefined ? undefined : parseNumber("phase", request.phase, "degrees (the ball's phase at release)") * DEG,
+    windowStartM: windowStart(request),
+    trajectory: request.trajectory === true,
   };
 }
 
@@ -88,7 +99,17 @@ export function runFlight(job: FlightJob): FlightOutcome {
   const ask = job.axisRequest;
   if (ask.kind === "axis") axis = ask.vector;
   else {
-    const screen = screenPitch(job.pitch, { seamShape: s.seamShape, seamPoints: s.seamPoints, band: s.band, top: ask.kind === "candidate" ? Math.min(Math.max(ask.n, DEFAULT_TOP), TOP_RANGE[1]) : DEFAULT_TOP });
+    // the screen of this pitch as `screen` makes it (default settings; this flight's air and window)
+    const screen = screenPitch(job.pitch, {
+      ...DEFAULT_SCREEN_OPTIONS,
+      seamShape: s.seamShape,
+      seamPoints: s.seamPoints,
+      band: s.band,
+      model: job.model,
+      air: job.air,
+      windowStartM: job.windowStartM,
+      top: ask.kind === "candidate" ? Math.min(Math.max(ask.n, DEFAULT_TOP), TOP_RANGE[1]) : DEFAULT_TOP,
+    });
     if (ask.kind === "candidate") {
       if (ask.n > screen.candidates.length) throw new InputError(`--candidate ${ask.n} is out of range; the screen found ${screen.candidates.length} candidate(s)`);
       axis = screen.candidates[ask.n - 1].axis;
@@ -96,6 +117,7 @@ export function runFlight(job: FlightJob): FlightOutcome {
   }
   const flight = flyPitch({
     pitch: job.pitch,
+    model: job.model,
     drag: job.drag,
     spinDecayTimeConstantS: job.spinDecayS,
     axisBall: axis,
@@ -103,25 +125,36 @@ export function runFlight(job: FlightJob): FlightOutcome {
     vacuum: job.airMode === "none",
     release: job.release,
     launch: job.launch,
-    seamForce: { band: s.band, seamShape: s.seamShape, seamPoints: s.seamPoints, scale: job.seamScale },
+    phaseRad: job.phaseRad,
+    windowStartM: job.windowStartM,
+    spread: true,
+    trajectory: job.trajectory,
   });
   return { job, axis, flight };
 }
 
 const IN = (m: number) => m / M_PER_IN;
 
-/** The flight's numbers in user units (inches, degrees, seconds): the one form JSON and the terminal read. */
+/** The flight's numbers in user units (inches, degrees, seconds, newtons): the one form JSON and the terminal read. */
 export function flightNumbers(o: FlightOutcome) {
   const f = o.flight;
   const { hand, view } = o.job.pitch;
   const vacuum = o.job.airMode === "none";
-  const mv = f.movement;
+  const fr = f.fromRelease;
   const part = (p: { xM: number; zM: number }) => ({
     horizontalIn: IN(p.xM),
     verticalIn: IN(p.zM),
     armSideIn: IN(toArmSide(p.xM, p.zM, hand).armSideM),
   });
-  const seamClock = directionToClockAngle([mv.seamBreakM.xM, 0, mv.seamBreakM.zM], view);
+  const trade = (b: TradeBreak) => ({
+    inducedVerticalBreakIn: IN(b.inducedVerticalBreakM),
+    horizontalBreakIn: IN(b.horizontalBreakM),
+    armSideIn: IN(tradeArmSide(b, hand).armSideM),
+  });
+  const t = f.trade;
+  const seam = t.seamM;
+  const spread = f.seamSpread;
+  const range = (r: { min: number; p10: number; p90: number; max: number }) => ({ minIn: IN(r.min), p10In: IN(r.p10), p90In: IN(r.p90), maxIn: IN(r.max) });
   return {
     axis: { ball: o.axis, latLon: formatLatLon(vectorToLatLon(o.axis)) },
     air: {
@@ -137,11 +170,38 @@ export function flightNumbers(o: FlightOutcome) {
     timeToPlateS: f.flight.timeToPlateS,
     plate: { xIn: IN(f.flight.plateCrossingM[0]), zIn: IN(f.flight.plateCrossingM[2]) },
     approach: { verticalDeg: f.flight.verticalApproachAngleRad / DEG, horizontalDeg: f.flight.horizontalApproachAngleRad / DEG },
-    movement: {
-      ...part(mv.breakM),
-      magnus: part(mv.magnusBreakM),
-      seam: { ...part(mv.seamBreakM), clock: seamClock === null ? null : formatClock(angleToClock(seamClock)) },
+    seam: {
+      mode: f.seamMode,
+      ...(f.phaseRad !== undefined ? { phaseDeg: f.phaseRad / DEG } : {}),
+      turnsToPlate: f.turns,
+      coefficient: { across: f.seamCoefficient.across, alongMagnus: f.seamCoefficient.alongMagnus },
     },
-    seamCoefficient: { alongAxis: f.seamCoefficient.alongAxis, alongMagnus: f.seamCoefficient.alongMagnus },
+    movement: {
+      trade: {
+        ...trade(t.total),
+        windowFt: f.windowStartM / M_PER_FT,
+        magnus: trade(t.magnusM),
+        seam: { ...trade(seam), verticalIn: IN(seam.inducedVerticalBreakM), clock: movementClock(seam.horizontalBreakM, seam.inducedVerticalBreakM, view) },
+        drag: trade(t.dragM),
+      },
+      fromRelease: {
+        ...part(fr.breakM),
+        magnus: part(fr.magnusM),
+        seam: { ...part(fr.seamM), clock: movementClock(fr.seamM.xM, fr.seamM.zM, view) },
+      },
+      ...(spread
+        ? { seamSpread: { basis: "trade", releasePhases: spread.phases, horizontalBreak: range(spread.horizontalBreakM), inducedVerticalBreak: range(spread.inducedVerticalBreakM) } }
+        : {}),
+    },
+    ...(f.trajectory
+      ? {
+          trajectory: Array.from({ length: f.trajectory.tS.length }, (_, i) => ({
+            tS: f.trajectory!.tS[i],
+            xFt: f.trajectory!.xM[i] / M_PER_FT,
+            yFt: f.trajectory!.yM[i] / M_PER_FT,
+            zFt: f.trajectory!.zM[i] / M_PER_FT,
+          })),
+        }
+      : {}),
   };
 }

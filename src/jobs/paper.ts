@@ -13,7 +13,7 @@ import { LayoutError, loadLayout, type Layout } from "../render/paper/layouts.js
 import { addPage, finish, newDocument } from "../render/paper/pdfDoc.js";
 import { TOP_RANGE } from "../screening/screen.js";
 import { projectRoot } from "../version.js";
-import { screenAndFly, seamMovementOf } from "./pipeline.js";
+import { screenAll } from "./pipeline.js";
 import { samplerSettings, type SamplerSettings } from "./request/settings.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { parseScreen, screenOne, type ScreenJob } from "./screen.js";
@@ -87,7 +87,7 @@ export async function runCard(job: CardJob): Promise<PaperOutput> {
     picks = result.candidates.slice(first, first + perPage).map((s, k) => ({ screened: s, rep: report.candidates[first + k] }));
   }
   const s = job.screen.sampler;
-  const contents = picks.map((p, k) => cardContent(report, p.rep, p.screened, s.band, s.seamShape, seamMovementOf(screened, p.screened), `card${k + 1}`));
+  const contents = picks.map((p, k) => cardContent(report, p.rep, p.screened, s.band, s.seamShape, `card${k + 1}`));
   if (job.svg) return { bytes: renderCardSvg(cardLayout, contents[0]), format: "svg", pages: 1, pitches: 1 };
   const doc = newDocument(layout, contents[0].title);
   let pages = 1;
@@ -116,12 +116,12 @@ export function parseAtlas(request: Request): AtlasJob {
 }
 
 export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number, total: number) => void = () => {}): Promise<PaperOutput> {
-  const flown = screenAndFly(job.screen, tick);
+  const flown = screenAll(job.screen, tick);
   const s = job.screen.sampler;
   const pdf = await renderAtlasPdf({
     layout: job.layout,
     team: job.screen.team,
-    pitches: flown.map((f) => ({ result: f.result, report: f.report, movements: f.movements })),
+    pitches: flown.map((f) => ({ result: f.result, report: f.report })),
     band: s.band,
     seamShape: s.seamShape,
     onPage: (done, total) => tick("pages", done, total),

@@ -30,12 +30,13 @@ import type { Pitch } from "../screening/pitch.js";
 import { airState, type AirConditions, type AirState } from "./air.js";
 import { simulateFlight, type FlightOptions, type Launch } from "./flight.js";
 import { releasePosition, releaseVelocity } from "./launch.js";
-import { seamForceHook, turnAveragedSeamForceCoefficient, type SeamForceParams } from "./seamForce.js";
-import { seamModelFor, spinVector } from "./pitchFlight.js";
+import { spinVector } from "./pitchFlight.js";
+import { seamHookTurnAverage } from "./seamModel/hooks.js";
+import { coefficientMap } from "./seamModel/map.js";
+import { seamModel, type SeamModel } from "./seamModel/model.js";
+import type { SeamModelProfile } from "./seamModel/parameters.js";
 import { toArmSide } from "../../geometry/frames.js";
 
-/** The seam-force model's resolution for explaining (coarser than flight's default; see DEVELOPERS.md). */
-export const EXPLAIN_MODEL: SeamForceParams = { seamPoints: 512, azimuthBins: 72, phases: 72 };
 export const DEFAULT_EXPLAIN_GRID_DEG = 4;
 export const DEFAULT_EXPLAIN_TOP = 3;
 /** Launch used for explaining, rad: 1 deg below level, toward the middle of the plate. */
@@ -74,7 +75,8 @@ export interface ExplainOptions {
   readonly gridSpacingRad?: number;
   readonly top?: number;
   readonly air?: AirConditions;
-  readonly seamForce?: SeamForceParams;
+  /** The seam-force model profile; default the built-in one. */
+  readonly profile?: SeamModelProfile;
 }
 
 interface CoefficientMap {
@@ -91,7 +93,7 @@ export class Explainer {
   private readonly grid: SphereGrid;
   private readonly reps: Int32Array;
   private readonly air: AirState;
-  private readonly params: SeamForceParams;
+  private readonly model: SeamModel;
   private readonly top: number;
 
   constructor(options: ExplainOptions = {}) {
@@ -102,7 +104,7 @@ export class Explainer {
     for (let i = 0; i < this.grid.count; i++) if (rep[i] === i) reps.push(i);
     this.reps = Int32Array.from(reps);
     this.air = airState(options.air ?? {});
-    this.params = { ...EXPLAIN_MODEL, ...options.seamForce };
+    this.model = seamModel(options.profile);
     this.top = options.top ?? DEFAULT_EXPLAIN_TOP;
     if (!(Number.isInteger(this.top) && this.top >= 1 && this.top <= 20)) throw new RangeError(`top ${this.top} must be a whole number from 1 to 20`);
   }
@@ -111,17 +113,15 @@ export class Explainer {
   private mapAt(key: number): CoefficientMap {
     let m = this.maps.get(key);
     if (!m) {
-      const model = seamModelFor(this.params);
+      const gyro = Math.max(-89.9, Math.min(89.9, key * GYRO_STEP_DEG)) * DEG;
+      const map = coefficientMap(this.model, gyro, this.grid);
       const ca = new Float64Array(this.reps.length);
       const cm = new Float64Array(this.reps.length);
-      const g = this.grid;
       this.reps.forEach((i, k) => {
-        const gyro = Math.max(-89.9, Math.min(89.9, key * GYRO_STEP_DEG)) * DEG;
-        const c = turnAveragedSeamForceCoefficient(model, [g.points[3 * i], g.points[3 * i + 1], g.points[3 * i + 2]], gyro);
-        ca[k] = c.alongAxis;
-        cm[k] = c.alongMagnus;
+        ca[k] = map.across[i];
+        cm[k] = map.alongMagnus[i];
       });
-      m = { grid: g, reps: this.reps, ca, cm };
+      m = { grid: this.grid, reps: this.reps, ca, cm };
       this.maps.set(key, m);
     }
     return m;
@@ -143,7 +143,7 @@ export class Explainer {
       simulateFlight(launch, {
         ...base,
         magnus: false,
-        seamForce: seamForceHook({ axis: [0, 0, 1], gyroRad: p.gyroRad, coefficient: { alongAxis, alongMagnus, magnitude: Math.hypot(alongAxis, alongMagnus) } }),
+        seamForce: seamHookTurnAverage(this.model, [0, 0, 1], p.gyroRad, { across: alongAxis, alongMagnus }),
       });
     const sx = spinless.plateCrossingM[0];
     const sz = spinless.plateCrossingM[2];

@@ -3,14 +3,11 @@
  * the field frame (geometry/frames.ts: x toward the catcher's right, y toward the
  * pitcher, z up; the pitch flies along -y).
  *
- * The seam-shifted-wake push of any ball orientation lies along +-a, where
- * a = unit(w - (w . v) v) is the spin axis's part across the flight line
- * (src/sampling/exact.ts shows the Magnus-direction part averages to zero). So a
- * pitch's spin axis fixes the line of the push; the seam orientation sets its sign
- * and size. `pushInField` turns the sampler's `alongAxis` into field terms.
+ * The seam-force model (src/physics/seamModel) reports its force along a =
+ * unit(w - (w . v) v), the spin axis's part across the flight line ("across"), and
+ * along m = unit(w x v), the Magnus direction; `pitchFrame` gives both in the field.
  */
-import { armSideDirection, directionToClockAngle, spinAxisFromTilt, TOWARD_PLATE, type ClockView, type Hand, HANDS, VIEWS } from "../../geometry/frames.js";
-import { clockToAngle } from "../../geometry/clock.js";
+import { armSideDirection, spinAxisFromTilt, TOWARD_PLATE, type ClockView, type Hand, HANDS, VIEWS } from "../../geometry/frames.js";
 import { dot3, unit3, type Vec3 } from "../../geometry/vec.js";
 import { DEG, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 
@@ -58,51 +55,6 @@ export function pitchFrame(p: Pitch): PitchFrame {
   return { spinAxis: w, flight: [...v] as Vec3, pushLine: a, magnus: m, armSide: armSideDirection(p.hand) };
 }
 
-export interface FieldPush {
-  /** Push vector in the field frame (asymmetry units: the sampler's alongAxis along a). */
-  readonly vector: Vec3;
-  /** Clock reading angle of the push direction, radians clockwise from 12:00 in the pitch's view; null when zero. */
-  readonly clockRad: number | null;
-  /** Component toward the arm side (negative: glove side). */
-  readonly armSide: number;
-  /** Component up (negative: down). */
-  readonly up: number;
-}
-
-/** The seam push of an orientation whose sampler result is `alongAxis`, in field terms. */
-export function pushInField(frame: PitchFrame, view: ClockView, alongAxis: number): FieldPush {
-  const a = frame.pushLine;
-  const vector: Vec3 = [alongAxis * a[0], alongAxis * a[1], alongAxis * a[2]];
-  const clockRad = Math.abs(alongAxis) > 1e-15 ? directionToClockAngle(vector, view, frame.flight) : null;
-  return { vector, clockRad, armSide: dot3(vector, frame.armSide), up: vector[2] };
-}
-
-/** Unit field direction of the wanted push (null for "any"). */
-export function wantDirection(frame: PitchFrame, want: Want): Vec3 | null {
-  switch (want) {
-    case "arm":
-      return frame.armSide;
-    case "glove":
-      return [-frame.armSide[0], -frame.armSide[1], -frame.armSide[2]];
-    case "up":
-      return [0, 0, 1];
-    case "down":
-      return [0, 0, -1];
-    default:
-      return null;
-  }
-}
-
-/**
- * How a sampler result scores for the pitch: the push's component toward the wanted
- * direction (alongAxis times a . wanted), or the asymmetry magnitude for "any".
- * Returns the factor f with score = f * alongAxis, or null for "any" (score = |alongAxis|).
- */
-export function scoreFactor(frame: PitchFrame, want: Want): number | null {
-  const d = wantDirection(frame, want);
-  return d ? dot3(frame.pushLine, d) : null;
-}
-
 /** Checks a pitch's numbers, throwing RangeError with the field's name and the expected range. */
 export function assertPitch(p: Pitch): void {
   const speedMph = p.speedMPerS / M_PER_S_PER_MPH;
@@ -124,5 +76,3 @@ function fmt(x: number): string {
   return Number.isFinite(x) ? String(Math.round(x * 1000) / 1000) : String(x);
 }
 
-/** Tilt in radians from minutes past 12:00 (re-exported for callers that hold only this module). */
-export const tiltFromClockMinutes = (minutes: number): number => clockToAngle(minutes);

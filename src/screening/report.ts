@@ -1,14 +1,16 @@
 /**
  * The screen result in user units (degrees, inches, clock readings): the one form
- * that the JSON, the CSV, the terminal table and the printed cards all read, so the
- * numbers agree everywhere they appear.
+ * that the JSON, the CSV, the terminal table, the printed cards and the 3-D page all
+ * read, so the numbers agree everywhere they appear.
  */
+import { BALL_RADIUS_M } from "../../geometry/ball.js";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
 import { angleToClock, formatClock } from "../../geometry/clock.js";
+import { movementClock } from "../../geometry/frames.js";
+import { DEG, M_PER_FT, M_PER_IN } from "../../geometry/units.js";
 import { type Vec3 } from "../../geometry/vec.js";
-import { DEG } from "../../geometry/units.js";
-import type { ScreenResult, ScreenedOrientation } from "./screen.js";
-import { pushInField } from "./pitch.js";
+import { seamForceNewtons } from "../physics/seamModel/newtons.js";
+import { REACH_FLOOR, type ScreenResult, type ScreenedOrientation } from "./screen.js";
 
 export interface FingerReport {
   finger: string;
@@ -24,14 +26,19 @@ export interface OrientationReport {
   axis: Vec3;
   latLon: { latDeg: number; lonDeg: number; text: string };
   landmark: { name: string; angleDeg: number };
+  /** Seam movement toward the wanted direction (its size for "any"), inches. */
   score: number;
-  push: { clock: string | null; armSide: number; up: number };
-  crossingsPerRevolution: number;
-  robustness: { mean: number; p10: number };
+  /** The seam part of the flight at the plate, trade basis, inches; its direction as a clock reading in the pitch's view. */
+  seamMovement: { armSideIn: number; verticalIn: number; horizontalIn: number; clock: string | null; towardWantIn: number };
+  /** Score under release scatter of the axis, inches. */
+  robustness: { meanIn: number; p10In: number };
+  /** What the list is ranked by, inches. */
   rankScore: number;
-  seamInBand: number;
-  sides: { axisPlus: number; axisMinus: number; magnusPlus: number; magnusMinus: number };
-  asymmetry: { alongAxis: number; alongMagnus: number; magnitude: number };
+  /** The model's turn-averaged seam-force coefficient, and the force at release speed and the pitch's air, N. */
+  seamForce: { across: number; alongMagnus: number; acrossN: number; alongMagnusN: number };
+  crossingsPerRevolution: number;
+  /** The sampler's band occupancy through a turn (seam occupancy, not the push). */
+  occupancy: { seamInBand: number; axisPlus: number; axisMinus: number };
   fingers: FingerReport[];
   release: { ballToField: number[]; trailingPoint: Vec3; fingerSpacingIn: number };
 }
@@ -63,10 +70,15 @@ export interface ScreenReport {
       bandCenterDeg: number;
       bandWidthDeg: number;
     };
+    /** The seam-force model profile in use. */
+    model: { name: string; hash: string };
+    /** The air the flights used. */
+    air: { densityKgM3: number };
+    /** The trade's movement window: from this distance to the front of the plate. */
+    windowFt: number;
   };
-  /** The line the seam push acts along: the +a direction in field terms. */
-  pushLine: { clock: string | null; armSide: number; up: number };
-  wantReach: number;
+  /** How far toward the wanted direction the seams can push, as a share of the strongest seam push anywhere, percent (100 for "any"). */
+  reach: { wantPct: number; bestTowardIn: number; strongestIn: number; outOfReach: boolean };
   grid: { count: number; spacingDeg: number };
   maximaFound: number;
   candidates: OrientationReport[];
@@ -78,23 +90,35 @@ export function clockText(rad: number | null): string | null {
   return rad === null ? null : formatClock(angleToClock(rad));
 }
 
-function orientationReport(o: ScreenedOrientation, rank?: number): OrientationReport {
+
+function orientationReport(r: ScreenResult, o: ScreenedOrientation, rank?: number): OrientationReport {
   const ll = vectorToLatLon(o.axis);
-  const a = o.averages;
+  const m = o.seamMovement;
+  const dynamic = seamForceNewtons(1, o.flight.air.densityKgM3, BALL_RADIUS_M, r.pitch.speedMPerS);
   return {
     ...(rank !== undefined ? { rank } : {}),
     ...(o.reference ? { reference: o.reference } : {}),
     axis: o.axis,
     latLon: { latDeg: ll.latDeg, lonDeg: ll.lonDeg, text: formatLatLon(ll) },
     landmark: { name: o.landmark.name, angleDeg: o.landmark.angleRad / DEG },
-    score: o.score,
-    push: { clock: clockText(o.push.clockRad), armSide: o.push.armSide, up: o.push.up },
+    score: o.score / M_PER_IN,
+    seamMovement: {
+      armSideIn: m.armSideM / M_PER_IN,
+      verticalIn: m.verticalM / M_PER_IN,
+      horizontalIn: m.horizontalM / M_PER_IN,
+      clock: movementClock(m.horizontalM, m.verticalM, r.pitch.view),
+      towardWantIn: o.score / M_PER_IN,
+    },
+    robustness: { meanIn: o.robustness.mean / M_PER_IN, p10In: o.robustness.p10 / M_PER_IN },
+    rankScore: o.rankScore / M_PER_IN,
+    seamForce: {
+      across: o.coefficient.across,
+      alongMagnus: o.coefficient.alongMagnus,
+      acrossN: o.coefficient.across * dynamic,
+      alongMagnusN: o.coefficient.alongMagnus * dynamic,
+    },
     crossingsPerRevolution: o.crossingsPerRevolution,
-    robustness: { mean: o.robustness.mean, p10: o.robustness.p10 },
-    rankScore: o.rankScore,
-    seamInBand: a.seamInBand,
-    sides: { axisPlus: a.axisPlus, axisMinus: a.axisMinus, magnusPlus: a.magnusPlus, magnusMinus: a.magnusMinus },
-    asymmetry: { alongAxis: a.alongAxis, alongMagnus: a.alongMagnus, magnitude: a.magnitude },
+    occupancy: { seamInBand: o.occupancy.seamInBand, axisPlus: o.occupancy.axisPlus, axisMinus: o.occupancy.axisMinus },
     fingers: o.grip.pads.map((p) => ({
       finger: p.finger,
       direction: p.direction,
@@ -106,9 +130,10 @@ function orientationReport(o: ScreenedOrientation, rank?: number): OrientationRe
   };
 }
 
-export function screenReport(r: ScreenResult, echo: PitchEcho, bandCenterDeg: number, bandWidthDeg: number): ScreenReport {
+export function screenReport(r: ScreenResult, echo: PitchEcho): ScreenReport {
   const s = r.settings;
-  const line = pushInField(r.frame, r.pitch.view, 1);
+  const band = s.band;
+  const air = r.references[0]?.flight.air ?? r.candidates[0]?.flight.air;
   return {
     input: {
       pitch: echo,
@@ -120,15 +145,22 @@ export function screenReport(r: ScreenResult, echo: PitchEcho, bandCenterDeg: nu
         fingerSpacingIn: s.fingerSpacingIn,
         seamShape: s.seamShape,
         seamPoints: s.seamPoints,
-        bandCenterDeg,
-        bandWidthDeg,
+        bandCenterDeg: band.centerRad / DEG,
+        bandWidthDeg: band.widthRad / DEG,
       },
+      model: { name: s.model.profile.name, hash: s.model.profile.hash },
+      air: { densityKgM3: air ? air.densityKgM3 : 0 },
+      windowFt: s.windowStartM / M_PER_FT,
     },
-    pushLine: { clock: clockText(line.clockRad), armSide: line.armSide, up: line.up },
-    wantReach: r.wantReach,
-    grid: { count: r.map.grid.count, spacingDeg: s.gridSpacingRad / DEG },
+    reach: {
+      wantPct: 100 * r.reach.wantFraction,
+      bestTowardIn: r.reach.bestTowardM / M_PER_IN,
+      strongestIn: r.reach.strongestM / M_PER_IN,
+      outOfReach: r.reach.wantFraction < REACH_FLOOR,
+    },
+    grid: { count: r.grid.count, spacingDeg: s.gridSpacingRad / DEG },
     maximaFound: r.maximaFound,
-    candidates: r.candidates.map((c, i) => orientationReport(c, i + 1)),
-    references: r.references.map((c) => orientationReport(c)),
+    candidates: r.candidates.map((c, i) => orientationReport(r, c, i + 1)),
+    references: r.references.map((c) => orientationReport(r, c)),
   };
 }

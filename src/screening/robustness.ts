@@ -16,7 +16,7 @@
  */
 import { perpendicularUnit, type Vec3 } from "../../geometry/vec.js";
 
-export const SCATTER_SAMPLES = 128;
+export const SCATTER_SAMPLES = 64;
 export const DEFAULT_SPREAD_DEG = 5;
 const GOLDEN = (1 + Math.sqrt(5)) / 2;
 

@@ -1,35 +1,53 @@
 /**
- * Screening one pitch: every spin-axis position on the ball, the distinct best
- * ones, how forgiving each is, the classic holds beside them, and the fingers.
+ * Screening one pitch with the one seam-force model: every spin-axis position on the
+ * ball, the distinct best ones, how forgiving each is, the classic holds beside them,
+ * and the fingers. Every number is the model's seam movement at the plate, in the
+ * trade's reading (physics/tradeMovement.ts: a constant-acceleration fit over the
+ * window ending at the plate), for the pitch's air.
  *
- * 1. Sweep: the sampler on the equal-area ring grid (geometry/sphereGrid.ts), one
- *    evaluation per symmetry orbit (src/sampling/sphereMap.ts).
- * 2. Score per position: the push's component toward the wanted direction, or the
- *    asymmetry magnitude for "any" (src/screening/pitch.ts). The score is invariant
- *    under the curve's symmetry group, so maxima come in orbits.
- * 3. Candidates: grid cells that beat all their neighbours (one per orbit), the best
- *    of them refined off the grid by a pattern search on the sphere, then merged when
- *    a symmetry maps one within MERGE_RAD of another, and shown in one canonical image
- *    (the image with the largest z, then y, then x).
- * 4. Robustness under release scatter (src/screening/robustness.ts), and a rank:
- *    "strength" = score, "robust" = 10th-percentile score, "blend" (default) = their mean.
+ * 1. Sweep: the model's turn-averaged coefficient (along a and along Magnus) at every
+ *    cell of the equal-area ring grid (physics/seamModel/map.ts, one evaluation per
+ *    symmetry orbit, the Magnus part flipped for mirror images).
+ * 2. Seam movement per cell: the seam part of the flight is close to linear in the
+ *    coefficient, S = c_a J_a + c_m J_m, with J_a, J_m the seam movement of a unit
+ *    coefficient for this pitch (two flights; physics/pitchFlight.ts unitSeamMovement).
+ * 3. Score per cell: the seam movement toward the wanted direction (arm side, glove
+ *    side, up, down), or its size for "any", inches. Reach: the best movement toward
+ *    the wanted direction as a share of the strongest seam movement anywhere.
+ * 4. Candidates: cells that beat their neighbours, one per orbit of the four rotations
+ *    (a mirror image is a different grip for this model: it reverses the Magnus part),
+ *    refined off the grid by a pattern search, merged when a rotation maps one within
+ *    MERGE_RAD of another, shown in one canonical image.
+ * 5. Each listed grip (candidates and the reference holds) is flown in full
+ *    (pitchFlight.ts flyPitch, the same flight `flight` makes): its seam movement and
+ *    score are the flight's. Robustness: the linear score under release scatter of the
+ *    axis (robustness.ts), mean and 10th percentile. Rank: "strength" = score,
+ *    "robust" = p10, "blend" (default) = their mean.
+ * The sampler's band occupancy (src/sampling) is reported beside each grip as seam
+ * occupancy, not as the push.
  */
 import { BoundedCache } from "../../geometry/cache.js";
 import { coverModel, type CoverModel } from "../../geometry/coverRegions.js";
 import { findLandmarks, nearestLandmark, type Landmark } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEFAULT_SEAM_POINTS, type SeamSamples } from "../../geometry/seamSamples.js";
-import { equalAreaGrid, gridNeighbours, orbitRepresentatives } from "../../geometry/sphereGrid.js";
+import { equalAreaGrid, gridNeighbours, orbitRepresentatives, type SphereGrid } from "../../geometry/sphereGrid.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
-import { angleBetween, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
 import { DEG } from "../../geometry/units.js";
-import { DEFAULT_BAND, type Band } from "../sampling/band.js";
+import { angleBetween, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
+import type { AirConditions } from "../physics/air.js";
+import { flyPitch, tradeArmSide, unitSeamMovement, type PitchFlight } from "../physics/pitchFlight.js";
+import { coefficientMap } from "../physics/seamModel/map.js";
+import type { SeamModel } from "../physics/seamModel/model.js";
+import { turnAverage, type TurnAverage } from "../physics/seamModel/turn.js";
+import { TRADE_WINDOW_START_M, type TradeBreak } from "../physics/tradeMovement.js";
+import { type Band } from "../sampling/band.js";
 import { crossingsPerRevolution } from "../sampling/crossings.js";
-import { bandAveragesExact, emptyAverages, type BandAverages } from "../sampling/exact.js";
+import { bandAveragesExact, type BandAverages } from "../sampling/exact.js";
 import { seamFor } from "../sampling/measure.js";
 import { computeSphereMap, type SphereMap } from "../sampling/sphereMap.js";
 import { DEFAULT_FINGER_SPACING_IN, placeFingers, type Grip } from "./hand.js";
-import { assertPitch, pitchFrame, pushInField, scoreFactor, type FieldPush, type Pitch, type PitchFrame } from "./pitch.js";
+import { assertPitch, pitchFrame, type Pitch, type PitchFrame, type Want } from "./pitch.js";
 import { findReferenceAxes, type ReferenceName } from "./references.js";
 import { DEFAULT_SPREAD_DEG, robustness, type Robustness } from "./robustness.js";
 
@@ -42,16 +60,26 @@ export const DEFAULT_TOP = 5;
 export const GRID_SPACING_RANGE_DEG: readonly [number, number] = [0.5, 10];
 export const TOP_RANGE: readonly [number, number] = [1, 50];
 export const SPREAD_RANGE_DEG: readonly [number, number] = [0, 30];
-/** Candidates closer than this after a symmetry are one candidate (maxima are broad: a few degrees across). */
+/** Candidates closer than this after a rotation are one candidate (maxima are broad: a few degrees across). */
 const MERGE_RAD = 2 * DEG;
 /** Pattern-search stopping step and evaluation cap. */
-const REFINE_TOLERANCE_RAD = 0.002 * DEG;
-const REFINE_MAX_EVALUATIONS = 400;
+const REFINE_TOLERANCE_RAD = 0.05 * DEG;
+const REFINE_MAX_EVALUATIONS = 64;
+/** Below this share of the strongest seam movement, the wanted direction counts as out of reach (README). */
+export const REACH_FLOOR = 0.05;
 
 export interface ScreenSettings {
+  /** Seam shape and samples for the band occupancy, crossings and fingers (the model has its own resolution). */
   readonly seamShape: number;
   readonly seamPoints: number;
+  /** The sampler's band: the model's fixation band. */
   readonly band: Band;
+  /** The one seam-force model. */
+  readonly model: SeamModel;
+  /** The pitch's air; standard air when empty. */
+  readonly air: AirConditions;
+  /** Where the trade's window starts, m. */
+  readonly windowStartM: number;
   readonly gridSpacingRad: number;
   readonly spreadRad: number;
   readonly rank: RankBy;
@@ -59,29 +87,44 @@ export interface ScreenSettings {
   readonly fingerSpacingIn: number;
 }
 
-export const DEFAULT_SCREEN_SETTINGS: ScreenSettings = {
+export const DEFAULT_SCREEN_OPTIONS = {
   seamShape: DEFAULT_SEAM_SHAPE,
   seamPoints: DEFAULT_SEAM_POINTS,
-  band: DEFAULT_BAND,
+  air: {},
+  windowStartM: TRADE_WINDOW_START_M,
   gridSpacingRad: DEFAULT_GRID_SPACING_DEG * DEG,
   spreadRad: DEFAULT_SPREAD_DEG * DEG,
-  rank: "blend",
+  rank: "blend" as RankBy,
   top: DEFAULT_TOP,
   fingerSpacingIn: DEFAULT_FINGER_SPACING_IN,
 };
+
+/** Seam movement at the plate in the trade's reading, m: toward the arm side, up, and toward the catcher's right. */
+export interface SeamMovement {
+  readonly armSideM: number;
+  readonly verticalM: number;
+  readonly horizontalM: number;
+}
 
 export interface ScreenedOrientation {
   /** Unit spin axis in the ball frame. */
   readonly axis: Vec3;
   readonly landmark: { readonly name: string; readonly angleRad: number };
+  /** The model's turn-averaged coefficient. */
+  readonly coefficient: TurnAverage;
+  /** The flight's seam movement (flyPitch, the same numbers `flight` reports). */
+  readonly seamMovement: SeamMovement;
+  /** Seam movement toward the wanted direction (or its size for "any"), m. */
   readonly score: number;
-  readonly averages: BandAverages;
-  readonly push: FieldPush;
-  readonly crossingsPerRevolution: number;
+  /** Score under release scatter, m (linear in the coefficient). */
   readonly robustness: Robustness;
-  /** The number the list is ranked by (see RankBy). */
+  /** The number the list is ranked by (see RankBy), m. */
   readonly rankScore: number;
+  /** The sampler's band occupancy (seam occupancy, not the push). */
+  readonly occupancy: BandAverages;
+  readonly crossingsPerRevolution: number;
   readonly grip: Grip;
+  readonly flight: PitchFlight;
   /** For reference holds: which one. */
   readonly reference?: ReferenceName;
 }
@@ -90,22 +133,54 @@ export interface ScreenResult {
   readonly pitch: Pitch;
   readonly frame: PitchFrame;
   readonly settings: ScreenSettings;
-  /** |a . wanted| (1 for "any"): how much of the push's size can point the wanted way. */
-  readonly wantReach: number;
+  /** Seam movement per unit coefficient along a and along Magnus (trade basis), m. */
+  readonly unit: { readonly across: TradeBreak; readonly alongMagnus: TradeBreak };
+  /** Best movement toward the wanted direction over the grid, as a share of the strongest movement anywhere (1 for "any"). */
+  readonly reach: { readonly wantFraction: number; readonly bestTowardM: number; readonly strongestM: number };
   readonly candidates: readonly ScreenedOrientation[];
   readonly references: readonly ScreenedOrientation[];
-  readonly map: SphereMap;
-  /** Score per grid cell. */
+  readonly grid: SphereGrid;
+  /** Per grid cell: the model's coefficient, the (linear) seam movement, m, and the score, m. */
+  readonly across: Float64Array;
+  readonly alongMagnus: Float64Array;
+  readonly armSideM: Float64Array;
+  readonly verticalM: Float64Array;
   readonly scores: Float64Array;
+  /** The sampler's occupancy map (seam occupancy, for the map's notes). */
+  readonly occupancy: SphereMap;
   /** Distinct local maxima found before the top-N cut. */
   readonly maximaFound: number;
 }
 
-/** The canonical image of an axis under the seam's symmetry group. */
+/** The wanted direction in the plate plane as (arm side, up) components, or null for "any". */
+export function wantVector(want: Want): readonly [number, number] | null {
+  switch (want) {
+    case "arm":
+      return [1, 0];
+    case "glove":
+      return [-1, 0];
+    case "up":
+      return [0, 1];
+    case "down":
+      return [0, -1];
+    default:
+      return null;
+  }
+}
+
+/** Score of a seam movement (arm side, up; m) for a want. */
+export function scoreOf(want: Want, armSideM: number, verticalM: number): number {
+  const d = wantVector(want);
+  return d === null ? Math.hypot(armSideM, verticalM) : d[0] * armSideM + d[1] * verticalM;
+}
+
+const PROPER = SEAM_SYMMETRIES.filter((g) => g.proper);
+
+/** The canonical image of an axis under the seam's rotations (largest z, then y, then x). */
 export function canonicalAxis(axis: Readonly<Vec3>): Vec3 {
   let best: Vec3 = [...axis] as Vec3;
   const key = (v: Vec3) => [Math.round(v[2] * 1e9), Math.round(v[1] * 1e9), Math.round(v[0] * 1e9)];
-  for (const g of SEAM_SYMMETRIES) {
+  for (const g of PROPER) {
     const img = applySymmetry(g, axis);
     const a = key(img);
     const b = key(best);
@@ -114,10 +189,10 @@ export function canonicalAxis(axis: Readonly<Vec3>): Vec3 {
   return best;
 }
 
-/** The smallest angle between `a` and any symmetric image of `b`. */
+/** The smallest angle between `a` and any rotated image of `b`. */
 export function symmetricAngle(a: Readonly<Vec3>, b: Readonly<Vec3>): number {
   let best = Infinity;
-  for (const g of SEAM_SYMMETRIES) best = Math.min(best, angleBetween(a, applySymmetry(g, b)));
+  for (const g of PROPER) best = Math.min(best, angleBetween(a, applySymmetry(g, b)));
   return best;
 }
 
@@ -126,45 +201,51 @@ interface Context {
   readonly frame: PitchFrame;
   readonly settings: ScreenSettings;
   readonly seam: SeamSamples;
-  readonly factor: number | null;
   readonly landmarks: readonly Landmark[];
   readonly cover: CoverModel;
-  readonly scratch: BandAverages;
+  readonly unit: { readonly across: TradeBreak; readonly alongMagnus: TradeBreak };
+  readonly scratch: TurnAverage;
 }
 
-function scoreOf(ctx: Context, x: number, y: number, z: number): number {
-  const r = bandAveragesExact(ctx.seam, x, y, z, ctx.pitch.gyroRad, ctx.settings.band, ctx.scratch);
-  return ctx.factor === null ? r.magnitude : ctx.factor * r.alongAxis;
+/** Linear seam movement (arm side, up; m) of a coefficient for the pitch. */
+function linearMovement(ctx: Context, across: number, alongMagnus: number): [number, number] {
+  const a = tradeArmSide(ctx.unit.across, ctx.pitch.hand);
+  const m = tradeArmSide(ctx.unit.alongMagnus, ctx.pitch.hand);
+  return [across * a.armSideM + alongMagnus * m.armSideM, across * a.verticalM + alongMagnus * m.verticalM];
 }
 
-/** Pattern search for a local maximum of the score on the sphere, from `start`. */
-function refine(ctx: Context, start: Vec3, stepRad: number): { axis: Vec3; score: number } {
+function linearScore(ctx: Context, x: number, y: number, z: number): number {
+  const c = turnAverage(ctx.settings.model, [x, y, z], ctx.pitch.gyroRad, ctx.scratch);
+  const [arm, up] = linearMovement(ctx, c.across, c.alongMagnus);
+  return scoreOf(ctx.pitch.want, arm, up);
+}
+
+const PATTERN = [
+  [1, 0],
+  [-1, 0],
+  [0, 1],
+  [0, -1],
+  [0.7071067811865476, 0.7071067811865476],
+  [-0.7071067811865476, -0.7071067811865476],
+  [0.7071067811865476, -0.7071067811865476],
+  [-0.7071067811865476, 0.7071067811865476],
+] as const;
+
+/** Pattern search for a local maximum of the linear score on the sphere, from `start`. */
+function refine(ctx: Context, start: Vec3, startScore: number, stepRad: number): { axis: Vec3; score: number } {
   let p = start;
-  let best = scoreOf(ctx, p[0], p[1], p[2]);
+  let best = startScore;
   let step = stepRad;
-  let evaluations = 1;
+  let evaluations = 0;
   while (step > REFINE_TOLERANCE_RAD && evaluations < REFINE_MAX_EVALUATIONS) {
     const e1 = perpendicularUnit(p);
     const e2: Vec3 = [p[1] * e1[2] - p[2] * e1[1], p[2] * e1[0] - p[0] * e1[2], p[0] * e1[1] - p[1] * e1[0]];
     let moved = false;
-    for (const [u, v] of [
-      [1, 0],
-      [-1, 0],
-      [0, 1],
-      [0, -1],
-      [0.7071067811865476, 0.7071067811865476],
-      [-0.7071067811865476, -0.7071067811865476],
-      [0.7071067811865476, -0.7071067811865476],
-      [-0.7071067811865476, 0.7071067811865476],
-    ]) {
-      const c = Math.cos(step);
-      const s = Math.sin(step);
-      const q = unit3([
-        c * p[0] + s * (u * e1[0] + v * e2[0]),
-        c * p[1] + s * (u * e1[1] + v * e2[1]),
-        c * p[2] + s * (u * e1[2] + v * e2[2]),
-      ]);
-      const value = scoreOf(ctx, q[0], q[1], q[2]);
+    const c = Math.cos(step);
+    const s = Math.sin(step);
+    for (const [u, v] of PATTERN) {
+      const q = unit3([c * p[0] + s * (u * e1[0] + v * e2[0]), c * p[1] + s * (u * e1[1] + v * e2[1]), c * p[2] + s * (u * e1[2] + v * e2[2])]);
+      const value = linearScore(ctx, q[0], q[1], q[2]);
       evaluations++;
       if (value > best) {
         best = value;
@@ -178,24 +259,29 @@ function refine(ctx: Context, start: Vec3, stepRad: number): { axis: Vec3; score
   return { axis: p, score: best };
 }
 
-/** Everything reported for one axis. */
+/** Everything reported for one axis: the full flight, robustness, occupancy, fingers. */
 function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceName): ScreenedOrientation {
   const axis = unit3(axisIn);
-  const averages = { ...bandAveragesExact(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad, ctx.settings.band) };
-  const score = ctx.factor === null ? averages.magnitude : ctx.factor * averages.alongAxis;
-  const rob = robustness(axis, ctx.settings.spreadRad, (x, y, z) => scoreOf(ctx, x, y, z));
-  const rankScore = ctx.settings.rank === "strength" ? score : ctx.settings.rank === "robust" ? rob.p10 : 0.5 * (score + rob.p10);
+  const s = ctx.settings;
+  const flight = flyPitch({ pitch: ctx.pitch, axisBall: axis, model: s.model, air: s.air, windowStartM: s.windowStartM });
+  const move = tradeArmSide(flight.trade.seamM, ctx.pitch.hand);
+  const seamMovement = { armSideM: move.armSideM, verticalM: move.verticalM, horizontalM: flight.trade.seamM.horizontalBreakM };
+  const score = scoreOf(ctx.pitch.want, seamMovement.armSideM, seamMovement.verticalM);
+  const rob = robustness(axis, s.spreadRad, (x, y, z) => linearScore(ctx, x, y, z));
+  const rankScore = s.rank === "strength" ? score : s.rank === "robust" ? rob.p10 : 0.5 * (score + rob.p10);
   const near = nearestLandmark(ctx.landmarks, axis);
   return {
     axis,
     landmark: { name: near.landmark.name, angleRad: near.angleRad },
+    coefficient: flight.seamCoefficient,
+    seamMovement,
     score,
-    averages,
-    push: pushInField(ctx.frame, ctx.pitch.view, averages.alongAxis),
-    crossingsPerRevolution: crossingsPerRevolution(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad),
     robustness: rob,
     rankScore,
-    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, ctx.settings.fingerSpacingIn),
+    occupancy: { ...bandAveragesExact(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad, s.band) },
+    crossingsPerRevolution: crossingsPerRevolution(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad),
+    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn),
+    flight,
     ...(reference ? { reference } : {}),
   };
 }
@@ -206,8 +292,7 @@ function coverFor(b: number): CoverModel {
 }
 
 /** Screens one pitch. Throws RangeError for an invalid pitch or settings. */
-export function screenPitch(pitch: Pitch, settingsIn: Partial<ScreenSettings> = {}): ScreenResult {
-  const settings: ScreenSettings = { ...DEFAULT_SCREEN_SETTINGS, ...settingsIn };
+export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResult {
   assertPitch(pitch);
   if (!(Number.isInteger(settings.top) && settings.top >= TOP_RANGE[0] && settings.top <= TOP_RANGE[1])) {
     throw new RangeError(`top ${settings.top} must be a whole number from ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
@@ -217,28 +302,46 @@ export function screenPitch(pitch: Pitch, settingsIn: Partial<ScreenSettings> = 
   }
   const frame = pitchFrame(pitch);
   const seam = seamFor(settings.seamShape, settings.seamPoints);
-  const factor = scoreFactor(frame, pitch.want);
+  const { across: ua, alongMagnus: um } = unitSeamMovement(pitch, settings.model, { air: settings.air, windowStartM: settings.windowStartM });
   const ctx: Context = {
     pitch,
     frame,
     settings,
     seam,
-    factor,
     landmarks: findLandmarks(settings.seamShape),
     cover: coverFor(settings.seamShape),
-    scratch: emptyAverages(),
+    unit: { across: ua, alongMagnus: um },
+    scratch: { across: 0, alongMagnus: 0 },
   };
 
-  const map = computeSphereMap(seam, pitch.gyroRad, settings.band, equalAreaGrid(settings.gridSpacingRad));
-  const grid = map.grid;
-  const scores = new Float64Array(grid.count);
-  for (let i = 0; i < grid.count; i++) scores[i] = factor === null ? map.magnitude[i] : factor * map.alongAxis[i];
+  const grid = equalAreaGrid(settings.gridSpacingRad);
+  const map = coefficientMap(settings.model, pitch.gyroRad, grid);
+  const n = grid.count;
+  const armSideM = new Float64Array(n);
+  const verticalM = new Float64Array(n);
+  const scores = new Float64Array(n);
+  let strongest = 0;
+  let bestToward = -Infinity;
+  const wantDir = wantVector(pitch.want);
+  for (let i = 0; i < n; i++) {
+    const [arm, up] = linearMovement(ctx, map.across[i], map.alongMagnus[i]);
+    armSideM[i] = arm;
+    verticalM[i] = up;
+    scores[i] = scoreOf(pitch.want, arm, up);
+    strongest = Math.max(strongest, Math.hypot(arm, up));
+    bestToward = Math.max(bestToward, scores[i]);
+  }
+  const reach = {
+    wantFraction: wantDir === null ? 1 : strongest > 0 ? Math.max(0, bestToward) / strongest : 0,
+    bestTowardM: Math.max(0, bestToward),
+    strongestM: strongest,
+  };
 
-  // local maxima, one per symmetry orbit
-  const rep = orbitRepresentatives(grid);
+  // local maxima, one per orbit of the rotations
+  const rep = orbitRepresentatives(grid, true);
   const nb = new Int32Array(16);
   const maxima: number[] = [];
-  for (let i = 0; i < grid.count; i++) {
+  for (let i = 0; i < n; i++) {
     if (rep[i] !== i || !(scores[i] > 0)) continue;
     const count = gridNeighbours(grid, i, nb);
     let isMax = true;
@@ -249,11 +352,11 @@ export function screenPitch(pitch: Pitch, settingsIn: Partial<ScreenSettings> = 
     if (isMax) maxima.push(i);
   }
   maxima.sort((p, q) => scores[q] - scores[p]);
-  const seeds = maxima.slice(0, 3 * settings.top + 10);
+  const seeds = maxima.slice(0, settings.top + 3);
 
   const refined: { axis: Vec3; score: number }[] = [];
   for (const i of seeds) {
-    const r = refine(ctx, [grid.points[3 * i], grid.points[3 * i + 1], grid.points[3 * i + 2]], settings.gridSpacingRad / 2);
+    const r = refine(ctx, [grid.points[3 * i], grid.points[3 * i + 1], grid.points[3 * i + 2]], scores[i], settings.gridSpacingRad / 2);
     const axis = canonicalAxis(r.axis);
     const twin = refined.find((x) => symmetricAngle(x.axis, axis) < Math.max(MERGE_RAD, settings.gridSpacingRad));
     if (twin) {
@@ -263,18 +366,25 @@ export function screenPitch(pitch: Pitch, settingsIn: Partial<ScreenSettings> = 
       }
     } else refined.push({ axis, score: r.score });
   }
-  const described = refined.map((r) => describe(ctx, r.axis));
+  refined.sort((p, q) => q.score - p.score);
+  const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
   const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));
   return {
     pitch,
     frame,
     settings,
-    wantReach: factor === null ? 1 : Math.abs(factor),
+    unit: ctx.unit,
+    reach,
     candidates: described.slice(0, settings.top),
     references,
-    map,
+    grid,
+    across: map.across,
+    alongMagnus: map.alongMagnus,
+    armSideM,
+    verticalM,
     scores,
+    occupancy: computeSphereMap(seam, pitch.gyroRad, settings.band, grid),
     maximaFound: refined.length,
   };
 }

@@ -8,7 +8,7 @@ const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-flight-"));
 const SINKER = ["--hand", "right", "--speed", "92", "--spin", "2150", "--tilt", "1:45", "--gyro", "10", "--want", "arm"];
 
 describe("seam-atlas flight", () => {
-  it("prints JSON with air, time, plate and movement split into Magnus and seam parts, in inches", () => {
+  it("prints JSON with air, time, plate, and movement the trade's way and from release, each split into Magnus and seam parts, in inches", () => {
     const r = runCli(["flight", ...SINKER, "--axis", "30N,100E", "--elevation-ft", "5200", "--temperature-f", "80", "--humidity", "40", "--json"]);
     expect(r.code).toBe(0);
     const j = JSON.parse(r.stdout);
@@ -17,18 +17,50 @@ describe("seam-atlas flight", () => {
     expect(j.timeToPlateS).toBeGreaterThan(0.35);
     expect(j.timeToPlateS).toBeLessThan(0.5);
     for (const k of ["xIn", "zIn"]) expect(typeof j.plate[k]).toBe("number");
-    for (const k of ["horizontalIn", "verticalIn"]) {
-      expect(typeof j.movement[k]).toBe("number");
-      expect(typeof j.movement.magnus[k]).toBe("number");
-      expect(typeof j.movement.seam[k]).toBe("number");
+    const t = j.movement.trade;
+    expect(t.windowFt).toBe(50); // common practice, no source: the trade's window starts 50 ft from home plate
+    for (const part of [t, t.magnus, t.seam, t.drag]) for (const k of ["inducedVerticalBreakIn", "horizontalBreakIn", "armSideIn"]) expect(typeof part[k]).toBe("number");
+    // a right-hander's arm side is toward the catcher's left, -x (common practice, no source)
+    expect(t.armSideIn).toBeCloseTo(-t.horizontalBreakIn, 12);
+    for (const k of ["horizontalIn", "verticalIn", "armSideIn"]) {
+      expect(typeof j.movement.fromRelease[k]).toBe("number");
+      expect(typeof j.movement.fromRelease.seam[k]).toBe("number");
     }
-    expect(j.input).toMatchObject({ elevationM: 1584.96, humidityPct: 40 });
+    expect(j.input).toMatchObject({ elevationM: 1584.96, humidityPct: 40, windowFt: 50, model: { name: "default" } });
+    expect(j.input.model.hash).toMatch(/^[0-9a-f]{8}$/);
   });
 
-  it("in a vacuum gives no movement at all against the spinless flight", () => {
+  it("in a vacuum gives no movement at all (no Magnus, no seam force, no drag)", () => {
     const j = JSON.parse(runCli(["flight", ...SINKER, "--axis", "lobe-B1", "--air", "none", "--json"]).stdout);
-    expect(Math.abs(j.movement.horizontalIn)).toBeLessThan(1e-9);
-    expect(Math.abs(j.movement.verticalIn)).toBeLessThan(1e-9);
+    expect(Math.abs(j.movement.fromRelease.horizontalIn)).toBeLessThan(1e-9);
+    expect(Math.abs(j.movement.fromRelease.verticalIn)).toBeLessThan(1e-9);
+    expect(Math.abs(j.movement.trade.inducedVerticalBreakIn)).toBeLessThan(1e-6);
+  });
+
+  it("reports for the screen's candidate 1 the seam movement screen --json reports for it, within 0.05 in (one model gives every number)", () => {
+    const screen = JSON.parse(runCli(["screen", ...SINKER, "--json"]).stdout);
+    const flight = JSON.parse(runCli(["flight", ...SINKER, "--candidate", "1", "--json"]).stdout);
+    const c = screen.candidates[0];
+    expect(Math.abs(flight.movement.trade.seam.armSideIn - c.seamMovement.armSideIn)).toBeLessThan(0.05);
+    expect(Math.abs(flight.movement.trade.seam.inducedVerticalBreakIn - c.seamMovement.verticalIn)).toBeLessThan(0.05);
+    expect(flight.movement.trade.seam.clock).toBe(c.seamMovement.clock);
+  });
+
+  it("turns the ball from a given release phase, reports the seam part's spread over phases, and adds the path at least every 5 ms with --trajectory", () => {
+    const slow = ["--hand", "right", "--speed", "80", "--spin", "60", "--tilt", "12:00"];
+    const a = JSON.parse(runCli(["flight", ...slow, "--axis", "20N,30E", "--phase", "0", "--json"]).stdout);
+    const b = JSON.parse(runCli(["flight", ...slow, "--axis", "20N,30E", "--phase", "90", "--json"]).stdout);
+    expect(a.seam.mode).toBe("time-resolved");
+    expect(a.seam.turnsToPlate).toBeLessThan(1);
+    // a knuckleball's seam movement depends on where the seams start (Watts & Sawyer, Am. J. Phys. 43, 1975)
+    const d = Math.hypot(a.movement.trade.seam.horizontalBreakIn - b.movement.trade.seam.horizontalBreakIn, a.movement.trade.seam.inducedVerticalBreakIn - b.movement.trade.seam.inducedVerticalBreakIn);
+    expect(d).toBeGreaterThan(0.1);
+    const spread = a.movement.seamSpread;
+    expect(spread.inducedVerticalBreak.maxIn).toBeGreaterThan(spread.inducedVerticalBreak.minIn);
+    const t = JSON.parse(runCli(["flight", ...SINKER, "--axis", "waist-A", "--trajectory", "--json"]).stdout).trajectory;
+    expect(t.length).toBeGreaterThan(300);
+    for (let i = 1; i < t.length; i++) expect(t[i].tS - t[i - 1].tS).toBeLessThanOrEqual(0.005);
+    expect(t[t.length - 1].yFt).toBeCloseTo(17 / 12, 6); // the front of home plate (Official Baseball Rules 2.02)
   });
 
   it("takes the screen's candidate or a reference hold instead of --axis", () => {

@@ -17,26 +17,31 @@ describe("seam-atlas screen", () => {
     expect(j.input.pitch).toMatchObject({ hand: "right", speedMph: 92, spinRpm: 2150, tilt: "1:45", view: "pitcher", gyroDeg: 10, want: "arm" });
     expect(j.candidates.length).toBeGreaterThanOrEqual(1);
     for (const c of [...j.candidates, ...j.references]) {
-      for (const k of ["axis", "latLon", "landmark", "score", "push", "crossingsPerRevolution", "robustness", "fingers"]) expect(c).toHaveProperty(k);
-      expect(c.push).toHaveProperty("clock");
-      expect(c.push).toHaveProperty("armSide");
-      expect(c.push).toHaveProperty("up");
-      expect(c.robustness).toHaveProperty("mean");
-      expect(c.robustness).toHaveProperty("p10");
+      for (const k of ["axis", "latLon", "landmark", "score", "seamMovement", "seamForce", "occupancy", "crossingsPerRevolution", "robustness", "fingers"]) expect(c).toHaveProperty(k);
+      for (const k of ["armSideIn", "verticalIn", "clock", "towardWantIn"]) expect(c.seamMovement).toHaveProperty(k);
+      // the score is the seam movement toward the wanted direction: the arm side for --want arm
+      expect(c.score).toBe(c.seamMovement.armSideIn);
+      expect(c.robustness).toHaveProperty("meanIn");
+      expect(c.robustness).toHaveProperty("p10In");
       expect(c.fingers.map((f: { finger: string }) => f.finger)).toEqual(["index", "middle", "thumb"]);
     }
     expect(j.references.map((x: { reference: string }) => x.reference)).toEqual(["four-seam", "two-seam"]);
+    expect(j.reach.wantPct).toBeGreaterThan(5);
+    expect(j.input.model.hash).toMatch(/^[0-9a-f]{8}$/);
+    expect(j.input.windowFt).toBe(50);
   });
 
   it("gives the same numbers in CSV, the table and JSON", () => {
     const j = JSON.parse(runCli(["screen", ...SINKER, "--grid", "4", "--json"]).stdout);
     const csv = runCli(["screen", ...SINKER, "--grid", "4", "--csv"]).stdout.trim().split("\n");
-    expect(csv[0].split(",")).toContain("score");
+    expect(csv[0].split(",")).toContain("scoreIn");
     const first = csv[1].split(",");
-    const col = csv[0].split(",").indexOf("score");
+    const col = csv[0].split(",").indexOf("scoreIn");
     expect(Number(first[col])).toBe(j.candidates[0].score);
     const table = runCli(["screen", ...SINKER, "--grid", "4"]).stdout;
-    expect(table).toContain((1000 * j.candidates[0].score).toFixed(2));
+    const shown = j.candidates[0].score.toFixed(1);
+    expect(table).toContain(`${j.candidates[0].score >= 0 ? "+" : ""}${shown}`);
+    expect(table).toContain(j.candidates[0].seamMovement.clock);
   });
 
   it("screens the demo staff from its file and writes the sphere maps, one per pitch", () => {
@@ -47,13 +52,12 @@ describe("seam-atlas screen", () => {
     expect(j.pitches.length).toBe(6);
     const m = JSON.parse(readFileSync(join(dir, "iris-talvela-sinker.json"), "utf8"));
     expect(m.cells.length).toBe(m.count);
-    expect(m.columns).toContain("score");
-    // every position's push lies on the push line: arm side and up are alongAxis times the line's components
-    const ia = m.columns.indexOf("alongAxis");
-    const iarm = m.columns.indexOf("pushArmSide");
-    const big = m.cells.reduce((best: number[], c: number[]) => (Math.abs(c[ia]) > Math.abs(best[ia]) ? c : best), m.cells[0]);
-    expect(Math.sign(big[iarm])).not.toBe(0);
-    expect(m.pushClock.positive).toMatch(/^\d{1,2}:\d{2}$/);
+    expect(m.columns).toContain("scoreIn");
+    // the score of a wanted arm-side push is the cell's arm-side seam movement
+    const is = m.columns.indexOf("scoreIn");
+    const iarm = m.columns.indexOf("seamArmSideIn");
+    for (const c of m.cells) expect(c[is]).toBe(c[iarm]);
+    expect(m.model.hash).toMatch(/^[0-9a-f]{8}$/);
   });
 
   it("selects one pitch of a staff by name", () => {

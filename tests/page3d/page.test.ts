@@ -9,7 +9,8 @@ import { pathToFileURL } from "node:url";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEG } from "../../geometry/units.js";
-import { formatScore as fmtScore, percent } from "../../src/render/numbers.js";
+import { formatMovementIn as inches, percent } from "../../src/render/numbers.js";
+import { movementClock, type ClockView } from "../../geometry/frames.js";
 import { parseScreen, runScreen } from "../../src/jobs/screen.js";
 import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, bandFromDegrees } from "../../src/sampling/band.js";
 import { measureOrientation } from "../../src/sampling/measure.js";
@@ -68,15 +69,15 @@ beforeAll(async () => {
 /** The figures the page must show for `o`, in the terminal's formatting (the shared formatting of src/render/numbers.ts). */
 function expectedFigures(o: OrientationReport): Record<string, string> {
   return {
-    score: fmtScore(o.score),
-    "push-clock": o.push.clock ?? "-",
-    "arm-side": fmtScore(o.push.armSide),
-    up: fmtScore(o.push.up),
+    score: inches(o.score),
+    "push-clock": o.seamMovement.clock ?? "-",
+    "arm-side": inches(o.seamMovement.armSideIn),
+    up: inches(o.seamMovement.verticalIn),
     crossings: String(o.crossingsPerRevolution),
-    "robust-mean": fmtScore(o.robustness.mean),
-    "robust-p10": fmtScore(o.robustness.p10),
+    "robust-mean": inches(o.robustness.meanIn),
+    "robust-p10": inches(o.robustness.p10In),
     axis: o.latLon.text,
-    "seam-in-band": percent(o.seamInBand),
+    "seam-in-band": percent(o.occupancy.seamInBand),
   };
 }
 
@@ -231,12 +232,11 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     );
     const state0 = await viewState(page);
     // the page's own exact sampler gives the report's turn averages (same code, same inputs)
-    expect(Math.abs(state0.pageAverages.axisPlus - o.sides.axisPlus)).toBeLessThan(1e-12);
-    expect(Math.abs(state0.pageAverages.axisMinus - o.sides.axisMinus)).toBeLessThan(1e-12);
-    expect(Math.abs(state0.pageAverages.alongAxis - o.asymmetry.alongAxis)).toBeLessThan(1e-12);
+    expect(Math.abs(state0.pageAverages.axisPlus - o.occupancy.axisPlus)).toBeLessThan(1e-12);
+    expect(Math.abs(state0.pageAverages.axisMinus - o.occupancy.axisMinus)).toBeLessThan(1e-12);
     expect(state0.timeline.plus).toEqual(Array.from(m.timeline!.axisPlus));
-    expect(await page.locator("#average-plus").textContent()).toBe(percent(o.sides.axisPlus));
-    expect(await page.locator("#average-minus").textContent()).toBe(percent(o.sides.axisMinus));
+    expect(await page.locator("#average-plus").textContent()).toBe(percent(o.occupancy.axisPlus));
+    expect(await page.locator("#average-minus").textContent()).toBe(percent(o.occupancy.axisMinus));
     const seen = new Set<string>();
     for (const k of [0, 37, 90, 181, 300]) {
       await pauseAt(page, k);
@@ -252,7 +252,8 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     }
     // the readout is live: it moves through the turn
     expect(seen.size).toBeGreaterThan(1);
-    expect(await page.locator("#side-plus-label").textContent()).toBe(`+ side (toward ${p.pushLine.clock})`);
+    const a = data.pitches[1].frame.pushLine;
+    expect(await page.locator("#side-plus-label").textContent()).toBe(`+ side (toward ${movementClock(a[0], a[2], p.input.pitch.view as ClockView)})`);
   }, BROWSER_TIMEOUT_MS);
 
   it("plays and pauses the turn, at the speed the slider sets", async () => {

@@ -2,7 +2,7 @@ import { existsSync, mkdtempSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { formatScore } from "../../src/render/numbers.js";
+import { formatMovementIn as inches } from "../../src/render/numbers.js";
 import { runCli, ROOT } from "../cli/run.js";
 import { inkSpread, itWithPoppler, pdfPages, pdfPageSizePt, pdfText, renderGray } from "./tools.js";
 import { loadLayout } from "../../src/render/paper/layouts.js";
@@ -28,12 +28,13 @@ describe("grip card", () => {
     expect(h).toBeCloseTo(288, 1);
   });
 
-  itWithPoppler("prints the same score, robustness, crossings and push as screen --json (pdftotext)", () => {
+  itWithPoppler("prints the same seam movement, score, robustness, crossings and push direction as screen --json (pdftotext)", () => {
     const text = pdfText(pdf).replace(/\s+/g, " ");
     const c = screen.candidates[0];
-    expect(text).toContain(formatScore(c.score));
-    expect(text).toContain(`${formatScore(c.robustness.mean)} / ${formatScore(c.robustness.p10)}`);
-    expect(text).toContain(`${c.push.clock} (pitcher)`);
+    expect(text).toContain(`${inches(c.seamMovement.armSideIn)} arm / ${inches(c.seamMovement.verticalIn)} up`);
+    expect(text).toContain(inches(c.score));
+    expect(text).toContain(`${inches(c.robustness.meanIn)} / ${inches(c.robustness.p10In)}`);
+    expect(text).toContain(`${c.seamMovement.clock} (pitcher)`);
     expect(text).toContain(c.latLon.text);
     expect(text).toMatch(new RegExp(`passes per turn ${c.crossingsPerRevolution}`));
     expect(text).toContain("Index pad:");
@@ -61,7 +62,7 @@ describe("grip card", () => {
     const sa = readFileSync(a, "utf8");
     expect(sa).toBe(readFileSync(b, "utf8"));
     expect(sa.startsWith("<svg")).toBe(true);
-    expect(sa).toContain(formatScore(screen.candidates[0].score));
+    expect(sa).toContain(inches(screen.candidates[0].score));
     expect(sa).not.toMatch(/Svgjs/);
   });
 
@@ -104,7 +105,7 @@ describe("atlas", () => {
   itWithPoppler("prints every candidate's and reference hold's score as screen --json gives it (pdftotext)", () => {
     const text = pdfText(pdf).replace(/\s+/g, " ");
     for (const p of screen.pitches) {
-      for (const o of [...p.candidates, ...p.references]) expect(text).toContain(`score ${formatScore(o.score)}`);
+      for (const o of [...p.candidates, ...p.references]) expect(text).toContain(`score ${inches(o.score)} in`);
     }
     expect(text).toContain("How to read this atlas");
   });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { latLonToVector } from "../../geometry/ballCoords.js";
-import { Explainer, EXPLAIN_MODEL } from "../../src/physics/explain.js";
+import { Explainer } from "../../src/physics/explain.js";
+import { seamModel } from "../../src/physics/seamModel/model.js";
 import { releasePosition } from "../../src/physics/launch.js";
 import { flyPitch } from "../../src/physics/pitchFlight.js";
 import { toArmSide } from "../../geometry/frames.js";
@@ -20,12 +21,12 @@ describe("explain", () => {
       [-20, 60],
     ]) {
       const planted = latLonToVector(lat, lon);
-      // the forward model at explain's resolution, so only the grid and the linearisation differ
-      const f = flyPitch({ pitch: sinker, axisBall: planted, launch, seamForce: EXPLAIN_MODEL });
-      const obs = toArmSide(f.movement.breakM.xM, f.movement.breakM.zM, "right");
+      // the same model, so only the grid and the linearisation differ
+      const f = flyPitch({ pitch: sinker, axisBall: planted, launch, model: seamModel() });
+      const obs = toArmSide(f.fromRelease.breakM.xM, f.fromRelease.breakM.zM, "right");
       const e = explainer.explain({ pitch: sinker, observedArmSideM: obs.armSideM, observedUpM: obs.upM });
       // the spin alone explains most of it, the residual is the seam part
-      const seam = toArmSide(f.movement.seamBreakM.xM, f.movement.seamBreakM.zM, "right");
+      const seam = toArmSide(f.fromRelease.seamM.xM, f.fromRelease.seamM.zM, "right");
       expect(Math.abs(e.residualArmSideM - seam.armSideM)).toBeLessThan(0.005);
       expect(Math.abs(e.residualUpM - seam.upM)).toBeLessThan(0.005);
       expect(e.matches[0].fitErrorM).toBeLessThan(0.1 * 0.0254);
@@ -34,10 +35,10 @@ describe("explain", () => {
     }
   });
 
-  it("leaves nothing to explain when the observed movement is the spin's own (best seam match moves the ball less than 0.1 in)", () => {
+  it("leaves nothing to explain when the observed movement is the spin's own (the best seam match moves the ball less than 0.25 in: on the 4 deg grid the weakest orientations still move it about 0.1 in)", () => {
     const e0 = new Explainer({ top: 1 }).explain({ pitch: sinker, observedArmSideM: 0, observedUpM: 0 });
     const e = new Explainer({ top: 1 }).explain({ pitch: sinker, observedArmSideM: e0.magnusArmSideM, observedUpM: e0.magnusUpM });
     expect(Math.hypot(e.residualArmSideM, e.residualUpM)).toBeLessThan(1e-12);
-    expect(Math.hypot(e.matches[0].seamArmSideM, e.matches[0].seamUpM)).toBeLessThan(0.1 * 0.0254);
+    expect(Math.hypot(e.matches[0].seamArmSideM, e.matches[0].seamUpM)).toBeLessThan(0.25 * 0.0254);
   });
 });

@@ -1,83 +1,115 @@
 import { describe, expect, it } from "vitest";
-import { clockToAngle, parseClock, angleToClock, formatClock } from "../../geometry/clock.js";
+import { BALL_CIRCUMFERENCE_IN } from "../../geometry/ball.js";
 import { equalAreaGrid } from "../../geometry/sphereGrid.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
+import { DEG, M_PER_IN } from "../../geometry/units.js";
 import { angleBetween } from "../../geometry/vec.js";
-import { bandAveragesExact } from "../../src/sampling/exact.js";
-import { seamFor } from "../../src/sampling/measure.js";
-import { computeSphereMap } from "../../src/sampling/sphereMap.js";
-import { pitchFrame, pushInField, scoreFactor, type Pitch } from "../../src/screening/pitch.js";
+import { flyPitch, tradeArmSide, unitSeamMovement } from "../../src/physics/pitchFlight.js";
+import { coefficientMap } from "../../src/physics/seamModel/map.js";
+import { seamModel } from "../../src/physics/seamModel/model.js";
+import { turnAverage } from "../../src/physics/seamModel/turn.js";
+import { pitchFrame, type Pitch } from "../../src/screening/pitch.js";
 import { robustness } from "../../src/screening/robustness.js";
-import { screenPitch, symmetricAngle } from "../../src/screening/screen.js";
-import { DEFAULT_BAND } from "../../src/sampling/band.js";
+import { DEFAULT_SCREEN_OPTIONS, scoreOf, screenPitch, symmetricAngle, type ScreenSettings } from "../../src/screening/screen.js";
 import { sinkerPitch } from "../helpers.js";
-import { DEG } from "../../geometry/units.js";
 
 const pitch = (over: Partial<Pitch> = {}): Pitch => sinkerPitch({ name: "test", ...over });
+const model = seamModel();
+const settings = (over: Partial<ScreenSettings> = {}): ScreenSettings => ({ ...DEFAULT_SCREEN_OPTIONS, band: model.band, model, ...over });
 
-describe("screen", () => {
+/** The screen's linear seam movement (arm side, up; m) of an axis for a pitch: c_a J_a + c_m J_m. */
+function linear(p: Pitch, axis: readonly [number, number, number]): [number, number] {
+  const u = unitSeamMovement(p, model);
+  const c = turnAverage(model, axis, p.gyroRad);
+  const a = tradeArmSide(u.across, p.hand);
+  const m = tradeArmSide(u.alongMagnus, p.hand);
+  return [c.across * a.armSideM + c.alongMagnus * m.armSideM, c.across * a.verticalM + c.alongMagnus * m.verticalM];
+}
+
+describe("screen (the one seam-force model, seam movement in the trade's reading)", () => {
   const p = pitch();
-  const r = screenPitch(p, { gridSpacingRad: 2 * DEG });
+  const r = screenPitch(p, settings({ gridSpacingRad: 3 * DEG }));
 
-  it("puts the top candidate within 1 deg and 1 % of the best found by exhaustive search on a 0.5 deg grid", () => {
-    const seam = seamFor();
-    const fine = computeSphereMap(seam, p.gyroRad, DEFAULT_BAND, equalAreaGrid(0.5 * DEG));
-    const f = scoreFactor(pitchFrame(p), p.want)!;
+  it("reports for every listed grip exactly the seam movement the flight reports for that axis (one model, one number), and the score is its arm-side part", () => {
+    for (const c of [...r.candidates, ...r.references]) {
+      const f = flyPitch({ pitch: p, axisBall: c.axis, model });
+      const m = tradeArmSide(f.trade.seamM, p.hand);
+      expect(Math.abs(c.seamMovement.armSideM - m.armSideM) / M_PER_IN).toBeLessThan(1e-9);
+      expect(Math.abs(c.seamMovement.verticalM - m.verticalM) / M_PER_IN).toBeLessThan(1e-9);
+      expect(c.score).toBe(c.seamMovement.armSideM);
+    }
+  });
+
+  it("maps seam movement linearly in the coefficient to within 5 % (or 0.2 in) of the full flight at the listed grips (the map's approximation; the listed grips are flown in full)", () => {
+    for (const c of r.candidates) {
+      const [arm, up] = linear(p, c.axis);
+      expect(Math.abs(arm - c.seamMovement.armSideM) / M_PER_IN).toBeLessThan(Math.max(0.2, 0.05 * Math.abs(c.seamMovement.armSideM / M_PER_IN)));
+      expect(Math.abs(up - c.seamMovement.verticalM) / M_PER_IN).toBeLessThan(Math.max(0.2, 0.05 * Math.abs(c.seamMovement.verticalM / M_PER_IN)));
+    }
+  });
+
+  it("puts the top candidate within 3 deg and 2 % of the best linear score found by exhaustive search on a 1 deg grid (brute force)", () => {
+    const grid = equalAreaGrid(1 * DEG);
+    const map = coefficientMap(model, p.gyroRad, grid);
+    const u = unitSeamMovement(p, model);
+    const a = tradeArmSide(u.across, p.hand);
+    const m = tradeArmSide(u.alongMagnus, p.hand);
     let best = -Infinity;
     let bestAxis: [number, number, number] = [0, 0, 1];
-    for (let i = 0; i < fine.grid.count; i++) {
-      const s = f * fine.alongAxis[i];
+    for (let i = 0; i < grid.count; i++) {
+      const arm = map.across[i] * a.armSideM + map.alongMagnus[i] * m.armSideM;
+      const up = map.across[i] * a.verticalM + map.alongMagnus[i] * m.verticalM;
+      const s = scoreOf(p.want, arm, up);
       if (s > best) {
         best = s;
-        bestAxis = [fine.grid.points[3 * i], fine.grid.points[3 * i + 1], fine.grid.points[3 * i + 2]];
+        bestAxis = [grid.points[3 * i], grid.points[3 * i + 1], grid.points[3 * i + 2]];
       }
     }
-    const topByScore = [...r.candidates].sort((a, b) => b.score - a.score)[0];
-    expect(Math.abs(topByScore.score - best) / best).toBeLessThan(0.01);
-    expect(topByScore.score).toBeGreaterThanOrEqual(best * 0.99);
-    expect(symmetricAngle(topByScore.axis, bestAxis)).toBeLessThan(1 * DEG);
+    const top = [...r.candidates].sort((x, y) => y.score - x.score)[0];
+    const [arm, up] = linear(p, top.axis);
+    expect(scoreOf(p.want, arm, up)).toBeGreaterThanOrEqual(best * 0.98);
+    expect(symmetricAngle(top.axis, bestAxis)).toBeLessThan(3 * DEG);
   });
 
-  it("gives every symmetric image of a position the identical score (to 1e-13)", () => {
-    const seam = seamFor();
-    const f = scoreFactor(pitchFrame(p), p.want)!;
-    for (const c of r.candidates) {
-      for (const g of SEAM_SYMMETRIES) {
-        const q = applySymmetry(g, c.axis);
-        const s = f * bandAveragesExact(seam, q[0], q[1], q[2], p.gyroRad, DEFAULT_BAND).alongAxis;
-        expect(Math.abs(s - c.score)).toBeLessThan(1e-13);
-      }
+  it("gives every rotated image of a grip the same coefficient (to 1e-12), and a mirrored image the Magnus part reversed: rotations only merge candidates", () => {
+    const c = r.candidates[0];
+    const base = turnAverage(model, c.axis, p.gyroRad, { across: 0, alongMagnus: 0 });
+    for (const g of SEAM_SYMMETRIES) {
+      const t = turnAverage(model, applySymmetry(g, c.axis), p.gyroRad, { across: 0, alongMagnus: 0 });
+      expect(Math.abs(t.across - base.across)).toBeLessThan(1e-12);
+      expect(Math.abs(t.alongMagnus - (g.proper ? 1 : -1) * base.alongMagnus)).toBeLessThan(1e-12);
     }
   });
 
-  it("lists distinct candidates: no two are symmetric images of each other within 2 deg", () => {
+  it("lists distinct candidates: no two are rotated images of each other within 2 deg", () => {
     for (let i = 0; i < r.candidates.length; i++)
       for (let j = i + 1; j < r.candidates.length; j++) expect(symmetricAngle(r.candidates[i].axis, r.candidates[j].axis)).toBeGreaterThan(2 * DEG);
   });
 
-  it("finds the two- and four-seam references with 2 and 4 crossings and no net asymmetry at zero gyro (common practice, no source: symmetric holds average out over a turn)", () => {
-    const r0 = screenPitch(pitch({ gyroRad: 0, want: "any" }), { gridSpacingRad: 4 * DEG, top: 1 });
+  it("finds the two- and four-seam references with 2 and 4 seam passes per turn, and at zero gyro the four-seam hold adds no seam movement (its seams balance over a turn: common practice, no source)", () => {
+    const r0 = screenPitch(pitch({ gyroRad: 0, want: "any" }), settings({ gridSpacingRad: 6 * DEG, top: 1 }));
     const four = r0.references.find((x) => x.reference === "four-seam")!;
     const two = r0.references.find((x) => x.reference === "two-seam")!;
     expect(four.crossingsPerRevolution).toBe(4);
     expect(two.crossingsPerRevolution).toBe(2);
-    expect(four.averages.magnitude).toBeLessThan(1e-12);
-    expect(two.averages.magnitude).toBeLessThan(1e-12);
-    // and a candidate adds over them
-    expect(r0.candidates[0].score).toBeGreaterThan(1e-3);
+    expect(Math.hypot(four.seamMovement.armSideM, four.seamMovement.verticalM) / M_PER_IN).toBeLessThan(0.01);
+    // and the best grip adds more than either hold
+    expect(r0.candidates[0].score).toBeGreaterThan(Math.max(four.score, two.score));
   });
 
-  it("robustness tends to the plain score as the scatter goes to zero (mean and p10 within 1e-9 at 1e-9 rad)", () => {
+  it("robustness tends to the linear score as the scatter goes to zero (mean and p10 within 1e-9 m at 1e-9 rad), and scatter off a maximum can only lose", () => {
     const c = r.candidates[0];
-    const seam = seamFor();
-    const f = scoreFactor(pitchFrame(p), p.want)!;
-    const score = (x: number, y: number, z: number) => f * bandAveragesExact(seam, x, y, z, p.gyroRad, DEFAULT_BAND).alongAxis;
+    const score = (x: number, y: number, z: number) => {
+      const [arm, up] = linear(p, [x, y, z]);
+      return scoreOf(p.want, arm, up);
+    };
+    const at = score(c.axis[0], c.axis[1], c.axis[2]);
     const tiny = robustness(c.axis, 1e-9, score);
-    expect(Math.abs(tiny.mean - c.score)).toBeLessThan(1e-9);
-    expect(Math.abs(tiny.p10 - c.score)).toBeLessThan(1e-9);
+    expect(Math.abs(tiny.mean - at)).toBeLessThan(1e-9);
+    expect(Math.abs(tiny.p10 - at)).toBeLessThan(1e-9);
     const wide = robustness(c.axis, 10 * DEG, score);
-    expect(wide.p10).toBeLessThan(c.score); // scatter off a maximum can only lose
-    expect(wide.mean).toBeLessThan(c.score);
+    expect(wide.p10).toBeLessThan(at);
+    expect(wide.mean).toBeLessThan(at);
   });
 
   it("ranks candidates by the blend (score + p10) / 2 by default", () => {
@@ -85,10 +117,18 @@ describe("screen", () => {
     for (const c of r.candidates) expect(Math.abs(c.rankScore - 0.5 * (c.score + c.robustness.p10))).toBeLessThan(1e-15);
   });
 
-  it("puts the index and middle pads one finger spacing apart (0.8 in along the surface) and names the cover half under each", () => {
+  it("says a wanted direction is out of reach when no grip can push that way: reach is the best push that way over the strongest push anywhere (0 to 1)", () => {
+    expect(r.reach.wantFraction).toBeGreaterThan(0.05);
+    expect(r.reach.wantFraction).toBeLessThanOrEqual(1);
+    expect(Math.abs(r.reach.bestTowardM - Math.max(...r.scores))).toBeLessThan(1e-15);
+    const any = screenPitch(pitch({ want: "any" }), settings({ gridSpacingRad: 6 * DEG, top: 1 }));
+    expect(any.reach.wantFraction).toBe(1);
+  });
+
+  it("puts the index and middle pads one finger spacing apart (0.8 in along the surface of the 9 1/8 in ball) and names the cover half under each", () => {
     for (const c of r.candidates) {
       const [index, middle] = c.grip.pads;
-      expect(angleBetween(index.direction, middle.direction) * (9.125 / (2 * Math.PI))).toBeCloseTo(0.8, 9);
+      expect(angleBetween(index.direction, middle.direction) * (BALL_CIRCUMFERENCE_IN / (2 * Math.PI))).toBeCloseTo(0.8, 9);
       expect(["A", "B"]).toContain(index.region.half);
       expect(index.seamDistanceIn).toBeGreaterThanOrEqual(0);
     }
@@ -105,36 +145,5 @@ describe("screen", () => {
       const tf1 = m[3] * t[0] + m[4] * t[1] + m[5] * t[2];
       expect(tf1).toBeGreaterThan(0.9); // +y is toward the pitcher: behind a ball flying along -y
     }
-  });
-});
-
-describe("push in field terms", () => {
-  it("reads the same direction from both views as mirror clocks, and arm side flips with the hand", () => {
-    for (const hand of ["right", "left"] as const) {
-      const pp = pitch({ hand, view: "pitcher" });
-      const pc = pitch({ hand, view: "catcher", tiltRad: clockToAngle(parseClock("10:15")) }); // 1:45 from behind the pitcher is 10:15 from behind the catcher
-      const fp = pitchFrame(pp);
-      const fc = pitchFrame(pc);
-      fp.spinAxis.forEach((x, k) => expect(Math.abs(x - fc.spinAxis[k])).toBeLessThan(1e-12));
-      const a = pushInField(fp, "pitcher", 0.01);
-      const b = pushInField(fc, "catcher", 0.01);
-      const toMinutes = (rad: number) => angleToClock(rad);
-      expect(Math.abs(((toMinutes(a.clockRad!) + toMinutes(b.clockRad!)) % 720))).toBeLessThan(1e-6);
-      expect(Math.abs(a.armSide - b.armSide)).toBeLessThan(1e-15);
-      // arm side: the pitcher's right (-x) for a right-hander (common practice, no source)
-      expect(Math.sign(a.armSide)).toBe(Math.sign(hand === "right" ? -a.vector[0] : a.vector[0]));
-    }
-    // the same field push is arm side for one hand and glove side for the other
-    const r = pushInField(pitchFrame(pitch({ hand: "right" })), "pitcher", 0.01);
-    const l = pushInField(pitchFrame(pitch({ hand: "left" })), "pitcher", 0.01);
-    expect(Math.abs(r.armSide + l.armSide)).toBeLessThan(1e-15);
-    expect(formatClock(angleToClock(r.clockRad!))).toBe("4:45");
-  });
-
-  it("puts the push across the Magnus direction: for pure backspin it is horizontal (arm or glove side)", () => {
-    const f = pitchFrame(pitch({ tiltRad: 0, gyroRad: 0 }));
-    const push = pushInField(f, "pitcher", 0.01);
-    expect(Math.abs(push.up)).toBeLessThan(1e-15);
-    expect(Math.abs(Math.abs(push.armSide) - 0.01)).toBeLessThan(1e-15);
   });
 });

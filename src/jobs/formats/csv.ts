@@ -5,8 +5,8 @@ import type { ScreenReport } from "../../screening/report.js";
 import type { ExplainedRow } from "../explain.js";
 
 const SCREEN_COLUMNS = [
-  "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "score", "pushClock", "pushArmSide", "pushUp",
-  "crossingsPerRevolution", "robustMean", "robustP10", "rankScore", "seamInBand", "alongAxis",
+  "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "scoreIn", "seamArmSideIn", "seamVerticalIn", "seamClock",
+  "robustMeanIn", "robustP10In", "rankScoreIn", "crossingsPerRevolution", "seamInBand", "coefficientAcross", "coefficientAlongMagnus", "modelHash",
 ];
 
 export function screenCsv(reports: readonly ScreenReport[]): string {
@@ -17,7 +17,8 @@ export function screenCsv(reports: readonly ScreenReport[]): string {
       rows.push(
         csvRow([
           p.pitcher, p.name, o.reference ?? "candidate", o.rank ?? "", o.latLon.latDeg, o.latLon.lonDeg, o.landmark.name, o.landmark.angleDeg, o.score,
-          o.push.clock, o.push.armSide, o.push.up, o.crossingsPerRevolution, o.robustness.mean, o.robustness.p10, o.rankScore, o.seamInBand, o.asymmetry.alongAxis,
+          o.seamMovement.armSideIn, o.seamMovement.verticalIn, o.seamMovement.clock, o.robustness.meanIn, o.robustness.p10In, o.rankScore,
+          o.crossingsPerRevolution, o.occupancy.seamInBand, o.seamForce.across, o.seamForce.alongMagnus, r.input.model.hash,
         ]),
       );
     }

@@ -4,12 +4,10 @@
  * JSON keeps full precision; people's rounding is the other formats' business.
  */
 import { formatLatLon, vectorToLatLon } from "../../../geometry/ballCoords.js";
-import { DEG, M_PER_FT, PA_PER_HPA } from "../../../geometry/units.js";
+import { DEG, M_PER_FT, M_PER_IN, PA_PER_HPA } from "../../../geometry/units.js";
 import { TOOL_NAME, TOOL_VERSION } from "../../version.js";
 import type { Measurement } from "../../sampling/measure.js";
-import { pushInField } from "../../screening/pitch.js";
 import type { ScreenResult } from "../../screening/screen.js";
-import { clockText } from "../../screening/report.js";
 import type { ExplainOneJob, ExplainedRow, ExplanationNumbers } from "../explain.js";
 import { flightNumbers, type FlightOutcome } from "../flight.js";
 import type { LandmarksResult } from "../landmarks.js";
@@ -73,21 +71,23 @@ export function screenDocument(o: ScreenOutcome) {
 }
 
 /**
- * One sphere map as plain JSON: cell centres (ball frame) and per-cell numbers,
- * rounded to 6 decimals. The push of every position lies on the pitch's push line,
- * so its clock reading is `pushClock.positive` where alongAxis > 0 and
- * `pushClock.negative` where it is < 0; `pushArmSide` and `pushUp` are its components.
+ * One sphere map as plain JSON: cell centres (ball frame) and per-cell numbers. The
+ * seam movement of each cell is the screen's linear estimate (the listed grips are
+ * flown in full: see the screen's JSON), in inches at the plate in the trade's reading;
+ * `score` is its part toward the wanted direction (its size for "any"); `across` and
+ * `alongMagnus` are the model's turn-averaged coefficients; `seamInBand` is the
+ * sampler's occupancy. Coordinates to 6 decimals, inches to 3, coefficients to 6.
  */
 export function sphereMapDocument(r: ScreenResult) {
-  const g = r.map.grid;
-  const round = (x: number) => Math.round(x * 1e6) / 1e6;
-  const line = pushInField(r.frame, r.pitch.view, 1);
+  const g = r.grid;
+  const r6 = (x: number) => Math.round(x * 1e6) / 1e6;
+  const r3 = (x: number) => Math.round(x * 1e3) / 1e3;
   const cells: number[][] = [];
   for (let i = 0; i < g.count; i++) {
-    const a = r.map.alongAxis[i];
     cells.push([
-      round(g.points[3 * i]), round(g.points[3 * i + 1]), round(g.points[3 * i + 2]), round(r.scores[i]), round(a), round(r.map.seamInBand[i]),
-      round(a * line.armSide), round(a * line.up),
+      r6(g.points[3 * i]), r6(g.points[3 * i + 1]), r6(g.points[3 * i + 2]),
+      r3(r.scores[i] / M_PER_IN), r3(r.armSideM[i] / M_PER_IN), r3(r.verticalM[i] / M_PER_IN),
+      r6(r.across[i]), r6(r.alongMagnus[i]), r6(r.occupancy.seamInBand[i]),
     ]);
   }
   return {
@@ -95,8 +95,10 @@ export function sphereMapDocument(r: ScreenResult) {
     spacingDeg: r.settings.gridSpacingRad / DEG,
     count: g.count,
     ringCounts: Array.from(g.ringCount),
-    pushClock: { positive: clockText(line.clockRad), negative: clockText(pushInField(r.frame, r.pitch.view, -1).clockRad), view: r.pitch.view },
-    columns: ["x", "y", "z", "score", "alongAxis", "seamInBand", "pushArmSide", "pushUp"],
+    model: { name: r.settings.model.profile.name, hash: r.settings.model.profile.hash },
+    want: r.pitch.want,
+    view: r.pitch.view,
+    columns: ["x", "y", "z", "scoreIn", "seamArmSideIn", "seamVerticalIn", "across", "alongMagnus", "seamInBand"],
     cells,
   };
 }
@@ -116,7 +118,9 @@ export function flightDocument(o: FlightOutcome) {
       releaseHeightFt: j.release.heightM / M_PER_FT,
       releaseSideFt: j.release.armSideM / M_PER_FT,
       extensionFt: j.release.extensionM / M_PER_FT,
-      seamScale: j.seamScale,
+      model: { name: j.model.profile.name, hash: j.model.profile.hash },
+      phaseDeg: j.phaseRad === undefined ? null : j.phaseRad / DEG,
+      windowFt: j.windowStartM / M_PER_FT,
       drag: j.drag.name,
       dragCoefficient: j.drag.name === "constant" ? j.drag.dragCoefficient : null,
       spinDecayS: j.spinDecayS ?? null,

@@ -4,7 +4,7 @@
  */
 import { formatLatLon, vectorToLatLon } from "../../../geometry/ballCoords.js";
 import { DEG } from "../../../geometry/units.js";
-import { fixed, formatMovementIn, formatScore, percent, signed } from "../../render/numbers.js";
+import { fixed, formatMovementIn, percent, signed } from "../../render/numbers.js";
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import type { ExplainOneJob, ExplanationNumbers } from "../explain.js";
 import { flightNumbers, type FlightOutcome } from "../flight.js";
@@ -89,26 +89,30 @@ function fingerWords(o: OrientationReport): string {
 export function screenTable(r: ScreenReport): string {
   const p = r.input.pitch;
   const s = r.input.settings;
+  const reach =
+    p.want === "any"
+      ? ""
+      : r.reach.outOfReach
+        ? `\n  OUT OF REACH: the seams cannot push this pitch ${WANT_WORDS[p.want]} (at best ${fixed(r.reach.wantPct, 0)} % of the strongest seam movement, ${fixed(r.reach.strongestIn, 1)} in); no grip is ranked for it`
+        : `\n  toward ${WANT_WORDS[p.want].replace("toward ", "")}: at best ${fixed(r.reach.bestTowardIn, 1)} in, ${fixed(r.reach.wantPct, 0)} % of the strongest seam movement (${fixed(r.reach.strongestIn, 1)} in)`;
   const head =
     `${p.pitcher ? `${p.pitcher}, ` : ""}${p.name} (${p.hand === "right" ? "RHP" : "LHP"}): ${fixed(p.speedMph, 1)} mph, ${fixed(p.spinRpm, 0)} rpm, ` +
-    `tilt ${p.tilt} from behind the ${p.view}, gyro ${fixed(p.gyroDeg, 1)} deg (spin efficiency ${fixed(p.efficiencyPct, 1)} %); wanted push: ${WANT_WORDS[p.want]}\n` +
-    `  the seam push acts along ${r.pushLine.clock ?? "-"} / its opposite (same view)` +
-    (p.want === "any" ? "" : `; at most ${fixed(100 * r.wantReach, 0)} % of it can point ${WANT_WORDS[p.want]}`) +
-    `\n  ${r.grid.count.toLocaleString("en-US")} axis positions at ${s.gridSpacingDeg} deg, ${r.maximaFound} distinct maxima; scatter ${s.spreadDeg} deg; ranked by ${s.rank}` +
-    `\n  score and push in thousandths of the seam-asymmetry unit (see README)\n`;
-  const rows: string[][] = [["", "axis on ball", "nearest landmark", "score", "mean", "p10", "push", "arm side", "up", "crossings"]];
+    `tilt ${p.tilt} from behind the ${p.view}, gyro ${signed(p.gyroDeg, 1)} deg (spin efficiency ${fixed(p.efficiencyPct, 1)} %); wanted push: ${WANT_WORDS[p.want]}` +
+    reach +
+    `\n  ${r.grid.count.toLocaleString("en-US")} axis positions at ${s.gridSpacingDeg} deg, ${r.maximaFound} distinct maxima; scatter ${s.spreadDeg} deg; ranked by ${s.rank}; model ${r.input.model.name} (${r.input.model.hash})` +
+    `\n  seam movement at the plate in inches, the trade's reading over the last ${fixed(r.input.windowFt, 0)} ft (arm side, up, and its clock direction)\n`;
+  const rows: string[][] = [["", "axis on ball", "nearest landmark", "arm side", "up", "toward", "score", "mean", "p10", "passes"]];
   const add = (label: string, o: OrientationReport) =>
     rows.push([
-      label, o.latLon.text, `${o.landmark.name} ${fixed(o.landmark.angleDeg, 0)} deg`, formatScore(o.score), formatScore(o.robustness.mean), formatScore(o.robustness.p10),
-      o.push.clock ?? "-", formatScore(o.push.armSide), formatScore(o.push.up), String(o.crossingsPerRevolution),
+      label, o.latLon.text, `${o.landmark.name} ${fixed(o.landmark.angleDeg, 0)} deg`, formatMovementIn(o.seamMovement.armSideIn), formatMovementIn(o.seamMovement.verticalIn),
+      o.seamMovement.clock ?? "-", formatMovementIn(o.score), formatMovementIn(o.robustness.meanIn), formatMovementIn(o.robustness.p10In), String(o.crossingsPerRevolution),
     ]);
-  r.candidates.forEach((o) => add(`#${o.rank}`, o));
+  if (!r.reach.outOfReach) r.candidates.forEach((o) => add(`#${o.rank}`, o));
   r.references.forEach((o) => add(o.reference!, o));
   const widths = rows[0].map((_, c) => Math.max(...rows.map((row) => row[c].length)));
-  const lines = rows.map((row) => "  " + row.map((cell, c) => (c >= 3 && c !== 6 ? cell.padStart(widths[c]) : cell.padEnd(widths[c]))).join("  "));
-  const fingers = [...r.candidates.map((o) => [`#${o.rank}`, o] as const), ...r.references.map((o) => [o.reference!, o] as const)].map(
-    ([label, o]) => `  ${label} fingers: ${fingerWords(o)}`,
-  );
+  const lines = rows.map((row) => "  " + row.map((cell, c) => (c >= 3 && c !== 5 ? cell.padStart(widths[c]) : cell.padEnd(widths[c]))).join("  "));
+  const listed = [...(r.reach.outOfReach ? [] : r.candidates.map((o) => [`#${o.rank}`, o] as const)), ...r.references.map((o) => [o.reference!, o] as const)];
+  const fingers = listed.map(([label, o]) => `  ${label} fingers: ${fingerWords(o)}`);
   return head + lines.join("\n") + "\n" + fingers.join("\n");
 }
 
@@ -119,18 +123,30 @@ export function screenText(team: string | undefined, reports: readonly ScreenRep
 export function flightText(o: FlightOutcome): string {
   const echo = o.job.echo;
   const d = flightNumbers(o);
-  const m = d.movement;
+  const t = d.movement.trade;
+  const fr = d.movement.fromRelease;
+  const sp = d.movement.seamSpread;
+  const seamMode =
+    d.seam.mode === "turn-average"
+      ? `turn-averaged (${fixed(d.seam.turnsToPlate, 1)} turns to the plate)`
+      : `time-resolved from release phase ${fixed(d.seam.phaseDeg ?? 0, 0)} deg (${fixed(d.seam.turnsToPlate, 1)} turns to the plate)`;
   const lines: [string, string][] = [
-    ["pitch", `${echo.pitcher ? `${echo.pitcher}, ` : ""}${echo.name}: ${fixed(echo.speedMph, 1)} mph, ${fixed(echo.spinRpm, 0)} rpm, tilt ${echo.tilt} (${echo.view}), gyro ${fixed(echo.gyroDeg, 1)} deg`],
+    ["pitch", `${echo.pitcher ? `${echo.pitcher}, ` : ""}${echo.name}: ${fixed(echo.speedMph, 1)} mph, ${fixed(echo.spinRpm, 0)} rpm, tilt ${echo.tilt} (${echo.view}), gyro ${signed(echo.gyroDeg, 1)} deg`],
     ["seam orientation", `${d.axis.latLon} (${o.job.axisGiven})`],
+    ["seam model", `${o.job.model.profile.name} (${o.job.model.profile.hash}), ${seamMode}`],
     ["air", o.job.airMode === "none" ? "none (vacuum)" : `${fixed(d.air.densityKgM3, 4)} kg/m^3, Re ${fixed(d.air.reynolds / 1e5, 2)}e5, spin factor ${fixed(d.air.spinFactor, 3)}`],
     ["launch", `${fixed(d.launch.verticalDeg, 2)} deg up, ${fixed(d.launch.horizontalDeg, 2)} deg right${d.launch.aimed ? " (aimed at the middle of the zone)" : ""}`],
     ["time to plate", `${fixed(d.timeToPlateS, 3)} s`],
     ["at the plate", `${fixed(d.plate.xIn, 1)} in right of centre, ${fixed(d.plate.zIn, 1)} in high`],
     ["approach", `${fixed(d.approach.verticalDeg, 2)} deg vertical, ${fixed(d.approach.horizontalDeg, 2)} deg horizontal`],
-    ["movement vs spinless", `${formatMovementIn(m.armSideIn)} in arm side, ${formatMovementIn(m.verticalIn)} in up`],
-    ["  Magnus part", `${formatMovementIn(m.magnus.armSideIn)} in arm side, ${formatMovementIn(m.magnus.verticalIn)} in up`],
-    ["  seam part", `${formatMovementIn(m.seam.armSideIn)} in arm side, ${formatMovementIn(m.seam.verticalIn)} in up, toward ${m.seam.clock ?? "-"} (${echo.view}'s view)`],
+    [`movement (last ${fixed(t.windowFt, 0)} ft)`, `${formatMovementIn(t.inducedVerticalBreakIn)} in induced vertical break, ${formatMovementIn(t.horizontalBreakIn)} in horizontal break (${formatMovementIn(t.armSideIn)} in arm side)`],
+    ["  Magnus part", `${formatMovementIn(t.magnus.inducedVerticalBreakIn)} in up, ${formatMovementIn(t.magnus.armSideIn)} in arm side`],
+    ["  seam part", `${formatMovementIn(t.seam.inducedVerticalBreakIn)} in up, ${formatMovementIn(t.seam.armSideIn)} in arm side, toward ${t.seam.clock ?? "-"} (${echo.view}'s view)`],
+    ...(sp
+      ? ([["  seam, by release phase", `${formatMovementIn(sp.inducedVerticalBreak.p10In)} to ${formatMovementIn(sp.inducedVerticalBreak.p90In)} in up, ${formatMovementIn(sp.horizontalBreak.p10In)} to ${formatMovementIn(sp.horizontalBreak.p90In)} in horizontal (10th to 90th percentile of ${sp.releasePhases} phases)`]] as [string, string][])
+      : []),
+    ["  drag's own part", `${formatMovementIn(t.drag.inducedVerticalBreakIn)} in up, ${formatMovementIn(t.drag.armSideIn)} in arm side`],
+    ["from release", `${formatMovementIn(fr.armSideIn)} in arm side, ${formatMovementIn(fr.verticalIn)} in up against the spinless flight (seam part ${formatMovementIn(fr.seam.armSideIn)} / ${formatMovementIn(fr.seam.verticalIn)})`],
   ];
   return table(lines) + "\n";
 }

@@ -9,6 +9,7 @@ import { assertSeamPointCount, DEFAULT_SEAM_POINTS, SEAM_POINTS_RANGE } from "..
 import { celsiusFromFahrenheit, DEG, M_PER_FT, PA_PER_HPA } from "../../../geometry/units.js";
 import { InputError } from "../../io/errors.js";
 import type { AirConditions } from "../../physics/air.js";
+import { TRADE_WINDOW_START_M } from "../../physics/tradeMovement.js";
 import { ELEVATION_MAX_M, ELEVATION_MIN_M } from "../../physics/atmosphere.js";
 import { DEFAULT_CONSTANT_DRAG_COEFFICIENT, DRAG_COEFFICIENT_MAX, DRAG_MODEL_NAMES, type DragModel } from "../../physics/drag.js";
 import { PRESSURE_MAX_PA, PRESSURE_MIN_PA, TEMPERATURE_MAX_C, TEMPERATURE_MIN_C } from "../../physics/humidity.js";
@@ -21,7 +22,9 @@ import {
   RELEASE_SIDE_RANGE_M,
   type ReleasePoint,
 } from "../../physics/launch.js";
-import { bandFromDegrees, DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, type Band } from "../../sampling/band.js";
+import { bandOf, type SeamModelProfile } from "../../physics/seamModel/parameters.js";
+import type { Band } from "../../sampling/band.js";
+import { modelChoice } from "./model.js";
 import { DEFAULT_FINGER_SPACING_IN, FINGER_SPACING_MAX_IN } from "../../screening/hand.js";
 import { DEFAULT_SPREAD_DEG } from "../../screening/robustness.js";
 import { DEFAULT_GRID_SPACING_DEG, DEFAULT_TOP, GRID_SPACING_RANGE_DEG, RANKS, SPREAD_RANGE_DEG, TOP_RANGE, type RankBy } from "../../screening/screen.js";
@@ -38,8 +41,8 @@ export interface SamplerSettings {
   readonly seamPoints: number;
 }
 
-/** Seam shape, band and seam resolution. */
-export function samplerSettings(request: Request): SamplerSettings {
+/** Seam shape, band and seam resolution; the band is the model profile's (after --band-center/--band-width). */
+export function samplerSettings(request: Request, profile: SeamModelProfile = modelChoice(request).profile): SamplerSettings {
   const seamShape =
     request["seam-shape"] === undefined ? DEFAULT_SEAM_SHAPE : parseNumber("seam-shape", request["seam-shape"], "a seam shape b strictly between 0 and 0.5");
   try {
@@ -47,14 +50,7 @@ export function samplerSettings(request: Request): SamplerSettings {
   } catch (err) {
     throw new InputError(`--seam-shape: ${(err as Error).message}`);
   }
-  const bandCenterDeg = parseNumber("band-center", request["band-center"] ?? DEFAULT_BAND_CENTER_DEG, "degrees from the stagnation point");
-  const bandWidthDeg = parseNumber("band-width", request["band-width"] ?? DEFAULT_BAND_WIDTH_DEG, "a positive number of degrees");
-  let band: Band;
-  try {
-    band = bandFromDegrees(bandCenterDeg, bandWidthDeg);
-  } catch (err) {
-    throw new InputError(`--band-center/--band-width: ${(err as Error).message}`);
-  }
+  const band = bandOf(profile.values);
   const expected = `a multiple of 4 from ${SEAM_POINTS_RANGE[0]} to ${SEAM_POINTS_RANGE[1]}`;
   const seamPoints = parseInteger("seam-points", request["seam-points"] ?? DEFAULT_SEAM_POINTS, expected);
   try {
@@ -62,7 +58,7 @@ export function samplerSettings(request: Request): SamplerSettings {
   } catch (err) {
     throw new InputError(`--seam-points: ${(err as Error).message}`);
   }
-  return { seamShape, band, bandCenterDeg, bandWidthDeg, seamPoints };
+  return { seamShape, band, bandCenterDeg: profile.values.bandCenterDeg, bandWidthDeg: profile.values.bandWidthDeg, seamPoints };
 }
 
 export interface ScreenOptions {
@@ -152,4 +148,12 @@ export function spinDecay(request: Request): number | undefined {
   const tau = parseNumber("spin-decay-s", request["spin-decay-s"], "seconds above 0");
   if (!(tau > 0)) throw new InputError(`--spin-decay-s ${tau} must be above 0 seconds`);
   return tau;
+}
+
+/** Accepted start of the trade's movement window, ft from home plate (beyond the plate, inside a release). */
+export const WINDOW_RANGE_FT: readonly [number, number] = [10, 55];
+
+/** Where the trade's movement window starts, m (--window-ft; default 50 ft, common practice). */
+export function windowStart(request: Request): number {
+  return parseInRange("window-ft", request["window-ft"] ?? TRADE_WINDOW_START_M / M_PER_FT, WINDOW_RANGE_FT[0], WINDOW_RANGE_FT[1], "ft") * M_PER_FT;
 }

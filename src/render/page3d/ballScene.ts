@@ -26,7 +26,7 @@ const SIDE_LABEL_RADIUS = 1.26;
 const SIDE_LABEL_AZIMUTH_RAD = (40 * Math.PI) / 180;
 /** The push arrow's start: azimuth off the a line about v, radians. */
 const PUSH_AZIMUTH_RAD = (32 * Math.PI) / 180;
-/** |alongAxis| below this draws no push arrow: there is no direction to show (asymmetry units). */
+/** A seam-force coefficient below this draws no push arrow: there is no direction to show (dimensionless). */
 const NO_PUSH = 1e-12;
 
 /** Frees the GPU buffers of everything under `root` (geometries, materials, textures) once it leaves the scene. */
@@ -132,25 +132,27 @@ export class BallScene {
   }
 
   /**
-   * Sets the orientation shown: the ball-frame spin axis, the gyro, and the push
-   * (`alongAxis` in asymmetry units, drawn along +-a with a length relative to `pushScale`).
+   * Sets the orientation shown: the ball-frame spin axis, the gyro, and the push: the
+   * seam-force model's turn-averaged coefficient (across = along a = flow +x, alongMagnus
+   * along m = flow -y), drawn in its direction across the flow with a length relative to `pushScale`.
    */
-  setOrientation(axis: Readonly<Vec3>, gyroRad: number, alongAxis: number, pushScale: number): void {
+  setOrientation(axis: Readonly<Vec3>, gyroRad: number, push: { readonly across: number; readonly alongMagnus: number }, pushScale: number): void {
     this.pose.setOrientation(axis, gyroRad);
     if (this.pushArrow) {
       this.flow.remove(this.pushArrow);
       dispose(this.pushArrow);
     }
     this.pushArrow = null;
-    this.pushLabel.visible = Math.abs(alongAxis) > NO_PUSH;
+    const size = Math.hypot(push.across, push.alongMagnus);
+    this.pushLabel.visible = size > NO_PUSH;
     if (!this.pushLabel.visible) return;
-    const length = PUSH_MIN_LENGTH + PUSH_SPAN_LENGTH * Math.min(1, Math.abs(alongAxis) / Math.max(pushScale, NO_PUSH));
-    const side = Math.sign(alongAxis);
-    const direction = new Vector3(side, 0, 0);
-    // from the band's centre line on the side it points to, turned off the a line (towards flow +y, away from the
-    // side labels) so that it stands clear of the spin axis, which leaves the ball close to +-a
+    const length = PUSH_MIN_LENGTH + PUSH_SPAN_LENGTH * Math.min(1, size / Math.max(pushScale, NO_PUSH));
+    const direction = new Vector3(push.across / size, -push.alongMagnus / size, 0);
+    // from the band's centre line on the side it points to, turned a little off that azimuth so that it
+    // stands clear of the spin axis, which leaves the ball close to +-a
     const ring = Math.sin(this.bandCenterRad);
-    const start = new Vector3(side * ring * Math.cos(PUSH_AZIMUTH_RAD), ring * Math.sin(PUSH_AZIMUTH_RAD), Math.cos(this.bandCenterRad)).multiplyScalar(ARROW_GAP);
+    const azimuth = Math.atan2(direction.y, direction.x) + PUSH_AZIMUTH_RAD;
+    const start = new Vector3(ring * Math.cos(azimuth), ring * Math.sin(azimuth), Math.cos(this.bandCenterRad)).multiplyScalar(ARROW_GAP);
     this.pushArrow = arrowMesh(PALETTE.push, length, 0.03);
     aimArrow(this.pushArrow, start, direction);
     this.flow.add(this.pushArrow);

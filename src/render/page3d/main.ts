@@ -14,6 +14,7 @@ import { measureOrientation, seamFor } from "../../sampling/measure.js";
 import { BallScene, NoWebGLError } from "./ballScene.js";
 import { listOrientations, pitchLabel, type ListedOrientation, type ViewData, type ViewPitch } from "./data.js";
 import { oppositeClock } from "../../../geometry/clock.js";
+import { movementClock, type ClockView } from "../../../geometry/frames.js";
 import { percent as percentText } from "../numbers.js";
 import { OrbitControl, type OrbitView } from "./orbit.js";
 import { fieldToWorld } from "./sceneMath.js";
@@ -68,8 +69,8 @@ function homeView(pitch: ViewPitch): OrbitView {
   // field +y (toward the pitcher) is world -z, azimuth pi; field -y is world +z, azimuth 0
   const base = pitch.report.input.pitch.view === "catcher" ? 0 : Math.PI;
   const top = pitch.report.candidates[0] ?? pitch.report.references[0];
-  const sign = top && top.asymmetry.alongAxis < 0 ? -1 : 1;
-  const push = fieldToWorld(pitch.frame.pushLine).multiplyScalar(sign);
+  const m = top ? top.seamMovement : { horizontalIn: 0, verticalIn: 1 };
+  const push = fieldToWorld([m.horizontalIn, 0, m.verticalIn]);
   const facing = (azimuthRad: number) => push.x * Math.sin(azimuthRad) + push.z * Math.cos(azimuthRad);
   const right = base + HOME_AZIMUTH_OFFSET_RAD;
   const left = base - HOME_AZIMUTH_OFFSET_RAD;
@@ -141,9 +142,9 @@ function start(): void {
     scene?.setGeometry(seam, stitchLayout(s.seamShape), band);
     scene?.setPitch(pitch().frame, gyroRad());
     orbit?.setHome(homeView(pitch()));
-    const clock = report.pushLine.clock;
-    element(PAGE_IDS.sidePlusLabel).textContent = `+ side (toward ${clock ?? "-"})`;
-    element(PAGE_IDS.sideMinusLabel).textContent = `\u2212 side (toward ${oppositeClock(clock) ?? "-"})`;
+    const across = movementClock(pitch().frame.pushLine[0], pitch().frame.pushLine[2], report.input.pitch.view as ClockView);
+    element(PAGE_IDS.sidePlusLabel).textContent = `+ side (toward ${across ?? "-"})`;
+    element(PAGE_IDS.sideMinusLabel).textContent = `\u2212 side (toward ${oppositeClock(across) ?? "-"})`;
     listed = listOrientations(report);
     renderOrientationList(list, listed, 0, chooseOrientation);
     chooseOrientation(0);
@@ -159,18 +160,18 @@ function start(): void {
     const s = report.input.settings;
     element(PAGE_IDS.orientationTitle).textContent = `${item.label}: ${o.latLon.text}, near ${o.landmark.name}`;
     renderFigures(element(PAGE_IDS.numbers), o);
-    element(PAGE_IDS.averagePlus).textContent = percentText(o.sides.axisPlus);
-    element(PAGE_IDS.averageMinus).textContent = percentText(o.sides.axisMinus);
-    const pushScale = Math.max(...listed.map((x) => Math.abs(x.orientation.asymmetry.alongAxis)));
-    scene?.setOrientation(o.axis, gyroRad(), o.asymmetry.alongAxis, pushScale);
+    element(PAGE_IDS.averagePlus).textContent = percentText(o.occupancy.axisPlus);
+    element(PAGE_IDS.averageMinus).textContent = percentText(o.occupancy.axisMinus);
+    const pushScale = Math.max(...listed.map((x) => Math.hypot(x.orientation.seamForce.across, x.orientation.seamForce.alongMagnus)));
+    scene?.setOrientation(o.axis, gyroRad(), o.seamForce, pushScale);
     shares?.setOrientation(o.axis, gyroRad());
     const m = measureOrientation({ axis: o.axis, gyroRad: gyroRad() }, { band: band ?? undefined, seamShape: s.seamShape, seamPoints: s.seamPoints });
     pageAverages = { seamInBand: m.seamInBand, axisPlus: m.axisPlus, axisMinus: m.axisMinus, alongAxis: m.alongAxis };
     series = {
       plus: m.timeline ? Array.from(m.timeline.axisPlus) : [],
       minus: m.timeline ? Array.from(m.timeline.axisMinus) : [],
-      averagePlus: o.sides.axisPlus,
-      averageMinus: o.sides.axisMinus,
+      averagePlus: o.occupancy.axisPlus,
+      averageMinus: o.occupancy.axisMinus,
     };
     status.textContent = `Showing ${item.label} for ${pitchLabel(report)}.`;
     state.dirty = true;

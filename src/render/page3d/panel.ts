@@ -6,7 +6,7 @@
  */
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import type { ListedOrientation } from "./data.js";
-import { fixed as fixedDigits, formatScore as thousandthsText, percent as percentText } from "../numbers.js";
+import { fixed as fixedDigits, formatMovementIn as inches, percent as percentText } from "../numbers.js";
 
 const WANT_WORDS: Record<string, string> = { arm: "toward the arm side", glove: "toward the glove side", up: "up", down: "down", any: "any direction" };
 
@@ -17,7 +17,7 @@ export function pitchSummary(report: ScreenReport): string {
   return (
     `${p.hand === "right" ? "RHP" : "LHP"}: ${fixedDigits(p.speedMph, 1)} mph, ${fixedDigits(p.spinRpm, 0)} rpm, tilt ${p.tilt} from behind the ${p.view}, ` +
     `gyro ${fixedDigits(p.gyroDeg, 1)} deg (spin efficiency ${fixedDigits(p.efficiencyPct, 1)} %); wanted push: ${WANT_WORDS[p.want] ?? p.want}. ` +
-    `The seam push acts along ${report.pushLine.clock ?? "-"} / its opposite. Band ${fixedDigits(s.bandCenterDeg - s.bandWidthDeg / 2, 1)} to ` +
+    `Seam-force model ${report.input.model.name} (${report.input.model.hash}). Band ${fixedDigits(s.bandCenterDeg - s.bandWidthDeg / 2, 1)} to ` +
     `${fixedDigits(s.bandCenterDeg + s.bandWidthDeg / 2, 1)} deg from the stagnation point; grid ${s.gridSpacingDeg} deg, ranked by ${s.rank}.`
   );
 }
@@ -32,16 +32,16 @@ export function fingerText(o: OrientationReport): string {
 /** The displayed figures of one orientation, keyed as the page's data-field attributes. */
 export function orientationFigures(o: OrientationReport): [field: string, label: string, value: string][] {
   return [
-    ["score", "Score", thousandthsText(o.score)],
-    ["push-clock", "Push (clock, same view)", o.push.clock ?? "-"],
-    ["arm-side", "Push toward arm side", thousandthsText(o.push.armSide)],
-    ["up", "Push up", thousandthsText(o.push.up)],
+    ["score", "Score, in", inches(o.score)],
+    ["push-clock", "Seam movement toward (clock, same view)", o.seamMovement.clock ?? "-"],
+    ["arm-side", "Seam movement toward arm side, in", inches(o.seamMovement.armSideIn)],
+    ["up", "Seam movement up, in", inches(o.seamMovement.verticalIn)],
     ["crossings", "Seam crossings per turn", String(o.crossingsPerRevolution)],
-    ["robust-mean", "Robustness: mean", thousandthsText(o.robustness.mean)],
-    ["robust-p10", "Robustness: 10th percentile", thousandthsText(o.robustness.p10)],
+    ["robust-mean", "Robustness: mean, in", inches(o.robustness.meanIn)],
+    ["robust-p10", "Robustness: 10th percentile, in", inches(o.robustness.p10In)],
     ["axis", "Axis on the ball", o.latLon.text],
     ["landmark", "Nearest landmark", `${o.landmark.name} ${fixedDigits(o.landmark.angleDeg, 0)} deg`],
-    ["seam-in-band", "Seam in band, turn average", percentText(o.seamInBand)],
+    ["seam-in-band", "Seam in band, turn average (occupancy)", percentText(o.occupancy.seamInBand)],
     ["fingers", "Fingers", fingerText(o)],
   ];
 }
@@ -76,7 +76,7 @@ export function renderOrientationList(ul: HTMLElement, listed: readonly ListedOr
     name.textContent = `${item.label}  ${item.orientation.latLon.text}`;
     const what = doc.createElement("span");
     what.className = "what";
-    what.textContent = `score ${thousandthsText(item.orientation.score)}`;
+    what.textContent = `score ${inches(item.orientation.score)} in`;
     button.append(name, what);
     button.addEventListener("click", () => onChoose(index));
     li.append(button);

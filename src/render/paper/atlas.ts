@@ -9,8 +9,9 @@
  * Every number comes from the screen report (src/screening/report.ts) through the
  * shared formats, so it equals what `screen --json` gives.
  */
+import { M_PER_IN } from "../../../geometry/units.js";
 import type { Band } from "../../sampling/band.js";
-import { fixed, formatMovementIn, formatScore } from "../numbers.js";
+import { fixed, formatMovementIn } from "../numbers.js";
 import type { ScreenReport } from "../../screening/report.js";
 import type { ScreenResult } from "../../screening/screen.js";
 import { TOOL_VERSION } from "../../version.js";
@@ -18,13 +19,11 @@ import { renderSphereMapSvg } from "../sphereMapDrawing.js";
 import { cardContent, cardOrigins, drawCard } from "./card.js";
 import type { Layout } from "./layouts.js";
 import { addPage, drawSvg, finish, newDocument, PT_PER_IN, textInBox, type Doc } from "./pdfDoc.js";
-import { CAUTION_LONG, CAUTION_SHORT, pitchSummary, type SeamMovement } from "./words.js";
+import { CAUTION_LONG, CAUTION_SHORT, pitchSummary } from "./words.js";
 
 export interface AtlasPitch {
   readonly result: ScreenResult;
   readonly report: ScreenReport;
-  /** Seam movement per candidate then per reference hold, in that order. */
-  readonly movements: readonly SeamMovement[];
 }
 
 export interface AtlasInput {
@@ -39,12 +38,12 @@ export interface AtlasInput {
 const WANT: Record<string, string> = { arm: "arm side", glove: "glove side", up: "up", down: "down", any: "either way" };
 
 export const HOW_TO_READ = [
-  "What this atlas is. For each pitch it screens every place on the ball where the spin axis could pierce it, and ranks the distinct grips by the predicted seam-shifted-wake push toward the wanted direction. The numbers are a model's, for planning lab time, not a promise.",
-  "The sphere map. Each cell is one spin-axis position on the ball, drawn on the Hammer equal-area projection of the ball's own frame (longitude from the seam's node-1, latitude toward waist-A), coloured by score. The seam is drawn over it. Numbered hexagons are the candidates, crossed squares the four-seam and two-seam holds.",
-  "Score. The push's component toward the wanted direction, or its size when any direction will do, in thousandths of the seam-asymmetry unit (the turn-averaged share of seam in the separation band times its lever on the unit ball). Bigger is a stronger, steadier push. The classic holds sit near zero when there is no gyro: their seams balance over a turn.",
-  "Robustness. No one places the axis exactly. 'mean' and 'p10' are the score's average and its 10th percentile when the axis wanders on the ball by about 5 degrees. A grip whose p10 stays close to its score is forgiving.",
-  "Seam passes per turn. How many times a seam crosses the front of the ball per revolution: 4 for the four-seam hold, 2 for the two-seam.",
-  "Push and movement. The push acts along one line fixed by the spin axis (printed as a clock reading from behind the pitcher or the catcher, as the pitch's tilt is); arm side and up are its components. 'seam movement' is the flight model's extra inches at the front of the plate at standard sea-level air.",
+  "What this atlas is. For each pitch it screens every place on the ball where the spin axis could pierce it, and ranks the distinct grips by the seam movement they add toward the wanted direction, in inches at the plate. One seam-force model gives every number: the direction, the inches and the ranking. The numbers are a model's, for planning lab time, not a promise: calibrate it to your own measurements (README).",
+  "The model. At each instant the air leaves the ball at a separation line. Where a seam sits well ahead of that line it trips the boundary layer, which then clings longer on that side; where a seam sits in the separation band it fixes the line at itself. A ball pushed by an uneven separation line moves toward the side that separates later. As the ball turns these change; the model follows them through each turn.",
+  "Seam movement. The seam part of the movement at the front of the plate, read as the trade reads movement (a constant-acceleration fit over the last 50 ft, gravity removed): arm side and up, in inches, and its direction as a clock reading from behind the pitcher or the catcher, as the pitch's tilt is.",
+  "The sphere map. Each cell is one spin-axis position on the ball, drawn on the Hammer equal-area projection of the ball's own frame (longitude from the seam's node-1, latitude toward waist-A), coloured by the seam movement toward the wanted direction, in inches. The seam is drawn over it. Numbered hexagons are the candidates, crossed squares the four-seam and two-seam holds.",
+  "Score and robustness. The score is the seam movement toward the wanted direction (its size when any direction will do). No one places the axis exactly: 'mean' and 'p10' are the score's average and its 10th percentile when the axis wanders on the ball by about 5 degrees. A grip whose p10 stays close to its score is forgiving.",
+  "Seam passes per turn and seam in band. How many times a seam crosses the front of the ball per revolution (4 for the four-seam hold, 2 for the two-seam), and the share of the seam that sits in the separation band through a turn (occupancy, not the push).",
   "Finger placement. Index and middle pads sit side by side along the spin axis at the back of the ball at release, with the thumb beneath. The grip may slide along the spin equator without changing the prediction; the card puts the pads where they rest on or nearest a seam.",
 ];
 
@@ -63,9 +62,10 @@ function coverPage(doc: Doc, input: AtlasInput): void {
     const head = `${r.input.pitch.pitcher ? `${r.input.pitch.pitcher} - ` : ""}${r.input.pitch.name}`;
     textInBox(doc, head, { xIn: m, yIn: y, wIn: w, hIn: 0.25 }, { font: f.bold, sizePt: f.sizePt + 1 });
     const line2 = pitchSummary(r);
-    const line3 = best
-      ? `best grip #1: axis ${best.latLon.text}, score ${formatScore(best.score)}, robustness ${formatScore(best.robustness.mean)} / ${formatScore(best.robustness.p10)}, push toward ${best.push.clock ?? "-"}, ${best.crossingsPerRevolution} seam passes per turn`
-      : "no grip pushes the wanted way for this spin";
+    const line3 =
+      best && !r.reach.outOfReach
+        ? `best grip #1: axis ${best.latLon.text}, seam movement ${formatMovementIn(best.seamMovement.armSideIn)} in arm side / ${formatMovementIn(best.seamMovement.verticalIn)} in up toward ${best.seamMovement.clock ?? "-"}, robustness ${formatMovementIn(best.robustness.meanIn)} / ${formatMovementIn(best.robustness.p10In)} in, ${best.crossingsPerRevolution} seam passes per turn`
+        : `the seams cannot push this pitch ${WANT[r.input.pitch.want]} (at most ${fixed(r.reach.wantPct, 0)} % of the strongest seam movement)`;
     textInBox(doc, `${line2}\n${line3}`, { xIn: m + 0.15, yIn: y + 0.24, wIn: w - 0.15, hIn: 0.6 }, { font: f.body, sizePt: f.sizePt - 1, color: "#333333" });
     y += 0.95;
     if (y > L.page.heightIn - m - 1.6) break;
@@ -92,11 +92,11 @@ function mapPage(doc: Doc, input: AtlasInput, p: AtlasPitch, index: number): voi
   const pp = r.input.pitch;
   textInBox(doc, `${pp.pitcher ? `${pp.pitcher} - ` : ""}${pp.name}: where the spin axis could sit`, { xIn: m, yIn: m, wIn: w, hIn: 0.4 }, { font: f.bold, sizePt: f.titleSizePt - 4 });
   textInBox(doc, pitchSummary(r), { xIn: m, yIn: m + 0.45, wIn: w, hIn: 0.4 }, { font: f.body, sizePt: f.sizePt - 1, color: "#333333" });
-  const values = p.result.scores.map((x) => 1000 * x);
-  const svg = renderSphereMapSvg(values, p.result.map.grid, {
+  const values = p.result.scores.map((x) => x / M_PER_IN);
+  const svg = renderSphereMapSvg(values, p.result.grid, {
     widthPx: 720,
-    title: `score toward ${WANT[pp.want]} over every spin-axis position`,
-    valueLabel: "score, thousandths of the seam-asymmetry unit",
+    title: pp.want === "any" ? "seam movement over every spin-axis position" : `seam movement toward ${WANT[pp.want]} over every spin-axis position`,
+    valueLabel: "seam movement, in",
     seamShape: input.seamShape,
     candidates: r.candidates.map((c) => ({ direction: c.axis, label: String(c.rank) })),
     referenceHolds: r.references.map((c) => ({ direction: c.axis, label: c.reference === "four-seam" ? "4S" : "2S" })),
@@ -105,14 +105,14 @@ function mapPage(doc: Doc, input: AtlasInput, p: AtlasPitch, index: number): voi
   });
   drawSvg(doc, svg, L.blocks.map);
   const lines = [
-    `The seam push of this pitch acts along ${r.pushLine.clock ?? "-"} and its opposite (from behind the ${pp.view}).` +
-      (pp.want === "any" ? "" : ` At most ${fixed(100 * r.wantReach, 0)} % of it can point ${WANT[pp.want]}.`),
+    `The strongest seam movement anywhere on the ball is ${fixed(r.reach.strongestIn, 1)} in.` +
+      (pp.want === "any" ? "" : r.reach.outOfReach ? ` The seams cannot push ${WANT[pp.want]} for this spin (${fixed(r.reach.wantPct, 0)} % of that at best).` : ` Toward ${WANT[pp.want]} the best is ${fixed(r.reach.bestTowardIn, 1)} in (${fixed(r.reach.wantPct, 0)} %).`),
     `${r.grid.count.toLocaleString("en-US")} positions at ${r.input.settings.gridSpacingDeg} deg; ${r.maximaFound} distinct maxima; ranked by ${r.input.settings.rank}.`,
     "",
     ...[...r.candidates, ...r.references].map((o, k) => {
-      const mv = p.movements[k];
       const label = o.reference ? `${o.reference} hold` : `#${o.rank}`;
-      return `${label}: axis ${o.latLon.text} (${o.landmark.name}), score ${formatScore(o.score)}, robustness ${formatScore(o.robustness.mean)} / ${formatScore(o.robustness.p10)}, push toward ${o.push.clock ?? "-"}, ${o.crossingsPerRevolution} passes per turn, seam movement ${formatMovementIn(mv.armSideIn)} in arm side / ${formatMovementIn(mv.upIn)} in up`;
+      const mv = o.seamMovement;
+      return `${label}: axis ${o.latLon.text} (${o.landmark.name}), seam movement ${formatMovementIn(mv.armSideIn)} in arm side / ${formatMovementIn(mv.verticalIn)} in up toward ${mv.clock ?? "-"}, score ${formatMovementIn(o.score)} in, robustness ${formatMovementIn(o.robustness.meanIn)} / ${formatMovementIn(o.robustness.p10In)} in, ${o.crossingsPerRevolution} passes per turn`;
     }),
   ];
   textInBox(doc, lines.join("\n"), L.blocks.mapNotes, { font: f.body, sizePt: f.sizePt - 1.5, lineGap: 1.5 });
@@ -147,7 +147,7 @@ export async function renderAtlasPdf(input: AtlasInput): Promise<{ bytes: Buffer
         pages++;
         tick();
       }
-      const content = cardContent(p.report, o.rep, o.screened, input.band, input.seamShape, p.movements[k], `p${i}c${k}`);
+      const content = cardContent(p.report, o.rep, o.screened, input.band, input.seamShape, `p${i}c${k}`);
       drawCard(doc, L.card!, content, origins[k % perPage]);
     });
   });

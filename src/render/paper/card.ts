@@ -9,7 +9,7 @@ import type { ScreenedOrientation } from "../../screening/screen.js";
 import type { Layout } from "./layouts.js";
 import { drawSvg, PT_PER_IN, rowsInBox, textInBox, type Doc } from "./pdfDoc.js";
 import { cardDrawings, type CardDrawings } from "./views.js";
-import { CAUTION_SHORT, fingerSentence, holdAdvice, numberLines, orientationTitle, pitchSummary, type SeamMovement } from "./words.js";
+import { CAUTION_SHORT, fingerSentence, holdAdvice, numberLines, orientationTitle, pitchSummary } from "./words.js";
 
 export interface CardContent {
   readonly title: string;
@@ -27,14 +27,13 @@ export function cardContent(
   screened: ScreenedOrientation,
   band: Band,
   seamShape: number,
-  movement?: SeamMovement,
   idPrefix = "card",
 ): CardContent {
   return {
     title: orientationTitle(report, orientation),
     summary: pitchSummary(report),
     drawings: cardDrawings(screened, band, seamShape, 300, idPrefix),
-    numbers: numberLines(report, orientation, movement),
+    numbers: numberLines(report, orientation),
     fingers: orientation.fingers.map(fingerSentence),
     advice: holdAdvice(orientation),
   };

@@ -4,7 +4,7 @@
  *               up at the top: the finger pads face the viewer;
  *   "the flow"  seen from the side, across both the flight line and the push line:
  *               the separation band (a ring about the flight line) shows as a strip
- *               and the push arrow lies in the page.
+ *               and the push arrow (the direction of the seam movement) lies in the page.
  * Directions go from the field frame to the ball frame through the release rotation
  * of the hand model (src/screening/hand.ts).
  */
@@ -28,8 +28,10 @@ export function cardDrawings(o: ScreenedOrientation, band: Band, seamShape: numb
   const b = (v: Vec3) => applyRotation(toBall, v);
   const up = b([0, 0, 1]);
   const pads = o.grip.pads.map((p) => ({ direction: p.direction, label: PAD_LABELS[p.finger] ?? p.finger, radiusIn: PAD_RADIUS_IN }));
-  const pushBall = b(o.push.vector);
-  const hasPush = Math.hypot(...o.push.vector) > 1e-9;
+  // the push: the direction of the seam movement at the plate (plate plane: x toward the catcher's right, z up)
+  const push: Vec3 = [o.seamMovement.horizontalM, 0, o.seamMovement.verticalM];
+  const pushBall = b(push);
+  const hasPush = Math.hypot(...push) > 1e-9;
   const held = renderBallSvg(
     {
       seamShape,
@@ -42,7 +44,7 @@ export function cardDrawings(o: ScreenedOrientation, band: Band, seamShape: numb
   // the flow view looks across both the flight line and the push line, so the band (a
   // ring about the flight line) shows as a strip and the push arrow lies in the page
   const v: Vec3 = [0, -1, 0];
-  const a = o.push.vector;
+  const a = push;
   let side = cross(v, Math.hypot(...a) > 1e-12 ? a : [0, 0, 1]);
   if (Math.hypot(...side) < 1e-9) side = [1, 0, 0];
   if (side[2] < 0 || (side[2] === 0 && side[0] < 0)) side = [-side[0], -side[1], -side[2]];

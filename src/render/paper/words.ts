@@ -3,7 +3,7 @@
  * screen report's numbers (src/screening/report.ts), with the shared number
  * formats (src/screening/numbers.ts), so the paper says what `screen --json` says.
  */
-import { fixed, formatInches, formatMovementIn, formatScore } from "../numbers.js";
+import { fixed, formatInches, formatMovementIn } from "../numbers.js";
 import type { FingerReport, OrientationReport, ScreenReport } from "../../screening/report.js";
 
 /** The safety caution every card, atlas and handout carries (our wording). */
@@ -49,30 +49,24 @@ export function orientationTitle(r: ScreenReport, o: OrientationReport): string 
   return o.reference ? `${who}${p.name} - reference: ${o.reference} hold` : `${who}${p.name} - grip #${o.rank}`;
 }
 
-/** Movement numbers a card can show, from the flight model (inches at the plate). */
-export interface SeamMovement {
-  readonly armSideIn: number;
-  readonly upIn: number;
-}
-
-/** The numbers block: label / value pairs, in print order. */
-export function numberLines(r: ScreenReport, o: OrientationReport, movement?: SeamMovement): [string, string][] {
-  const lines: [string, string][] = [
+/** The numbers block: label / value pairs, in print order (inches of seam movement at the plate, the trade's reading). */
+export function numberLines(r: ScreenReport, o: OrientationReport): [string, string][] {
+  const m = o.seamMovement;
+  const want = r.input.pitch.want;
+  return [
     ["axis on ball", o.latLon.text],
     ["nearest mark", `${o.landmark.name}, ${fixed(o.landmark.angleDeg, 0)} deg`],
-    ["score", formatScore(o.score)],
-    ["mean / p10", `${formatScore(o.robustness.mean)} / ${formatScore(o.robustness.p10)}`],
+    ["seam move, in", `${formatMovementIn(m.armSideIn)} arm / ${formatMovementIn(m.verticalIn)} up`],
+    ["push toward", m.clock ? `${m.clock} (${r.input.pitch.view})` : "none"],
+    [want === "any" ? "score, in" : `toward ${WANT_WORDS[want]}, in`, formatMovementIn(o.score)],
+    ["mean / p10, in", `${formatMovementIn(o.robustness.meanIn)} / ${formatMovementIn(o.robustness.p10In)}`],
     ["passes per turn", String(o.crossingsPerRevolution)],
-    ["push toward", o.push.clock ? `${o.push.clock} (${r.input.pitch.view})` : "none"],
-    ["arm side / up", `${formatScore(o.push.armSide)} / ${formatScore(o.push.up)}`],
-    ["seam in band", `${fixed(100 * o.seamInBand, 1)} %`],
+    ["seam in band", `${fixed(100 * o.occupancy.seamInBand, 1)} % (occupancy)`],
   ];
-  if (movement) lines.push(["seam move, in", `${formatMovementIn(movement.armSideIn)} arm / ${formatMovementIn(movement.upIn)} up`]);
-  return lines;
 }
 
 /** What a reader should do with a grip card, in one sentence. */
 export function holdAdvice(o: OrientationReport): string {
-  if (o.reference) return `The classic ${o.reference} hold, for comparison: scores and pushes are for this pitch's spin.`;
+  if (o.reference) return `The classic ${o.reference} hold, for comparison: its seam movement is for this pitch's spin.`;
   return `Set the spin axis through ${o.latLon.text} on the ball; the grip may slide along the spin equator without changing the prediction.`;
 }
