@@ -11,6 +11,7 @@ import { registerFlight } from "./flight.js";
 import { registerExplain } from "./explain.js";
 import { registerPaper } from "./paper.js";
 import { registerView } from "./view.js";
+import { registerForce } from "./force.js";
 
 export async function main(args: string[]): Promise<void> {
   let cli = yargs(args)
@@ -18,7 +19,7 @@ export async function main(args: string[]): Promise<void> {
     .usage("$0 <command> [options]\n\nSeam-orientation geometry: where the spin axis pierces the ball, how much seam sits in the separation band through a turn, and the seam-shifted-wake push that follows.")
     .version(TOOL_VERSION)
     .strict()
-    .demandCommand(1, "give a command: atlas, card, handout, view, screen, measure, flight, explain or landmarks (see --help)")
+    .demandCommand(1, "give a command: atlas, card, handout, view, screen, measure, flight, force, explain or landmarks (see --help)")
     .recommendCommands()
     .wrap(Math.min(110, process.stdout.columns || 100))
     .fail((msg, err) => {
@@ -32,6 +33,7 @@ export async function main(args: string[]): Promise<void> {
   cli = registerExplain(cli);
   cli = registerPaper(cli);
   cli = registerView(cli);
+  cli = registerForce(cli);
   cli = registerLandmarks(cli);
   await cli.parseAsync();
 }

@@ -10,6 +10,7 @@ import type { Measurement } from "../../sampling/measure.js";
 import type { ScreenResult } from "../../screening/screen.js";
 import type { ExplainOneJob, ExplainedRow, ExplanationNumbers } from "../explain.js";
 import { flightNumbers, type FlightOutcome } from "../flight.js";
+import { FORCE_TIMELINE_PHASES, type ForceResult } from "../force.js";
 import type { LandmarksResult } from "../landmarks.js";
 import type { MeasureResult } from "../measure.js";
 import type { ScreenOutcome } from "../screen.js";
@@ -147,4 +148,41 @@ export function batchJsonRow(r: ExplainedRow, first: boolean): string {
 
 export function batchJsonClose(): string {
   return `\n]}\n`;
+}
+
+export function forceDocument(r: ForceResult) {
+  const j = r.job;
+  const t = r.timeline;
+  const k = r.dynamicForceN;
+  const ll = vectorToLatLon(j.axisBall);
+  return {
+    ...head("force"),
+    input: {
+      axis: j.axis.given,
+      gyroDeg: j.gyroRad / DEG,
+      speedMph: j.speedMph,
+      spinRpm: j.spinRpm,
+      densityKgM3: j.air.densityKgM3,
+      model: { name: j.model.profile.name, hash: j.model.profile.hash },
+    },
+    axis: j.axisBall,
+    latLon: { latDeg: ll.latDeg, lonDeg: ll.lonDeg, text: formatLatLon(ll) },
+    frames: "alongMagnus along unit(w x v), across along the spin axis projected across the flight (geometry/flow.ts); separation angles from the front stagnation point",
+    dynamicForceN: k,
+    magnusN: r.magnusN,
+    turnAverage: { alongMagnusN: r.turnAverage.alongMagnus * k, acrossN: r.turnAverage.across * k, alongMagnus: r.turnAverage.alongMagnus, across: r.turnAverage.across },
+    timeline: Array.from({ length: FORCE_TIMELINE_PHASES }, (_, i) => ({
+      phaseDeg: (360 * i) / FORCE_TIMELINE_PHASES,
+      alongMagnusN: t.alongMagnus[i] * k,
+      acrossN: t.across[i] * k,
+      alongMagnus: t.alongMagnus[i],
+      across: t.across[i],
+      separationDeg: {
+        plusAcross: t.separationPlusAcrossRad[i] / DEG,
+        minusAcross: t.separationMinusAcrossRad[i] / DEG,
+        plusMagnus: t.separationPlusMagnusRad[i] / DEG,
+        minusMagnus: t.separationMinusMagnusRad[i] / DEG,
+      },
+    })),
+  };
 }

@@ -8,6 +8,7 @@ import { fixed, formatMovementIn, percent, signed } from "../../render/numbers.j
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import type { ExplainOneJob, ExplanationNumbers } from "../explain.js";
 import { flightNumbers, type FlightOutcome } from "../flight.js";
+import type { ForceResult } from "../force.js";
 import type { LandmarksResult } from "../landmarks.js";
 import type { MeasureResult } from "../measure.js";
 
@@ -163,4 +164,46 @@ export function explainText(job: ExplainOneJob, n: ExplanationNumbers): string {
     ),
   ];
   return lines.join("\n") + "\n";
+}
+
+/** A signed series as one row of characters: bars up for positive, down for negative, 5 deg a column. */
+function signedPlot(values: ArrayLike<number>, max: number, columns: number): [string, string] {
+  const n = values.length;
+  let up = "";
+  let down = "";
+  for (let c = 0; c < columns; c++) {
+    const i0 = Math.floor((c * n) / columns);
+    const i1 = Math.max(i0 + 1, Math.floor(((c + 1) * n) / columns));
+    let sum = 0;
+    for (let i = i0; i < i1; i++) sum += values[i];
+    const mean = sum / (i1 - i0);
+    const level = max > 0 ? Math.round((Math.abs(mean) / max) * (BARS.length - 1)) : 0;
+    up += mean > 0 ? BARS[level] : " ";
+    down += mean < 0 ? BARS[level] : " ";
+  }
+  return [up, down];
+}
+
+export function forceText(r: ForceResult): string {
+  const j = r.job;
+  const t = r.timeline;
+  const k = r.dynamicForceN;
+  const n = (c: number) => `${signed(c * k, 3)} N`;
+  const max = Math.max(...Array.from(t.across, Math.abs), ...Array.from(t.alongMagnus, Math.abs), 1e-12);
+  const [au, ad] = signedPlot(t.across, max, 72);
+  const [mu, md] = signedPlot(t.alongMagnus, max, 72);
+  const rows: [string, string][] = [
+    ["seam orientation", `${formatLatLon(vectorToLatLon(j.axisBall))} (given as ${j.axis.given}), gyro ${signed(j.gyroRad / DEG, 1)} deg`],
+    ["air and speed", `${fixed(j.air.densityKgM3, 4)} kg/m^3, ${fixed(j.speedMph, 1)} mph: ${fixed(k, 3)} N per unit coefficient`],
+    ["seam model", `${j.model.profile.name} (${j.model.profile.hash})`],
+    ["turn average", `${n(r.turnAverage.across)} across, ${n(r.turnAverage.alongMagnus)} along Magnus`],
+    ["largest in the turn", `${fixed(max * k, 3)} N`],
+    ...(r.magnusN > 0 ? ([["Magnus at this spin", `${fixed(r.magnusN, 3)} N (${fixed(j.spinRpm, 0)} rpm)`]] as [string, string][]) : []),
+  ];
+  return (
+    table(rows) +
+    `\n\n  instantaneous side force through one turn (0 to 360 deg, 5 deg a column; full bar = ${fixed(max * k, 3)} N):\n` +
+    `    across        + |${au}|\n                  - |${ad}|\n` +
+    `    along Magnus  + |${mu}|\n                  - |${md}|\n`
+  );
 }
