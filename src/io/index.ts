@@ -10,7 +10,7 @@ export { decodeUtf8, firstInvalidUtf8, lineOfOffset, startsWithBom, utf16Bom } f
 export { baseSlug, MAX_SLUG_BYTES, MAX_SLUG_CHARS, uniqueSlugs } from "./slugs.js";
 export { ensureFolder } from "./folders.js";
 export { FLUSH_BYTES, openOutputStream, writeOutput, type OutputStream } from "./output.js";
-export { formatOfPath, OUTPUT_FORMATS, planOutputs, type InputRef, type OutputFormat, type OutputRequest, type PlannedOutput } from "./outputPlan.js";
+export { formatOfPath, OUTPUT_FORMATS, planOutputs, writesStraight, type InputRef, type OutputFormat, type OutputRequest, type PlannedOutput } from "./outputPlan.js";
 export {
   csvCellText,
   csvLine,

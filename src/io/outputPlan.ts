@@ -139,6 +139,21 @@ function classify(req: OutputRequest): PlannedOutput {
   return { ...base, kind: "file", path: found.path, viaLink };
 }
 
+/**
+ * Whether `path` (as typed) is written straight into rather than replaced: `-`, a
+ * character device, a FIFO, or a file that a name under /dev or /proc leads to.
+ * Such outputs have no file name to tell a format by.
+ */
+export function writesStraight(path: string): boolean {
+  if (path === "-") return true;
+  try {
+    const st = statSync(path);
+    return st.isCharacterDevice() || st.isFIFO() || (st.isFile() && SYSTEM_FOLDERS.test(resolve(path)));
+  } catch {
+    return false;
+  }
+}
+
 /** Folders whose files are the system's, never replaced by a rename. */
 const SYSTEM_FOLDERS = /^\/(dev|proc)\//;
 
