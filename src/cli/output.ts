@@ -6,7 +6,6 @@
  */
 import { InputError } from "../io/errors.js";
 import { planOutputs, type InputRef, type OutputFormat, type PlannedOutput } from "../io/output.js";
-import { quote } from "../io/quote.js";
 
 export { openOutputStream, writeOutput, type PlannedOutput } from "../io/output.js";
 
@@ -51,10 +50,10 @@ export function wroteLines(planned: readonly (PlannedOutput | undefined)[]): str
     .join("");
 }
 
-/** Refuses `flag` (which prints to standard output) beside an output that is standard output already. */
-export function refuseSecondStdout(planned: readonly (PlannedOutput | undefined)[], flag: string): void {
-  const p = planned.find((q) => q?.kind === "stdout");
-  if (p) throw new InputError(`${p.option} ${quote(p.given)} and ${flag} both write to standard output; expected one of them`);
+/** Refuses `flag` (which prints to standard output) beside an output given as `-`; called before planning. */
+export function refuseSecondStdout(wanted: readonly WantedOutput[], flag: string): void {
+  const w = wanted.find((q) => q.path === "-");
+  if (w) throw new InputError(`${w.option} "-" and ${flag} both write to standard output; expected one of them`);
 }
 
 /** Prints to standard output. */

@@ -39,11 +39,12 @@ export function registerScreen(y: Argv): Argv {
       const { inputFiles } = await import("../jobs/request/inputs.js");
       const job = parseScreen(argv);
       const mapOutputs = mapsWanted(argv.map, job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name)));
-      const [out, ...maps] = planRun([{ option: "--out", path: argv.out, format: "json" }, ...mapOutputs], inputFiles(argv));
-      const planned = [out, ...maps];
+      const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: "json" }, ...mapOutputs];
       // standard output carries one document: --out - may go with --json (the same JSON), nothing else
-      if (argv.csv) refuseSecondStdout(planned, "--csv");
-      if (argv.json) refuseSecondStdout(maps, "--json");
+      if (argv.csv) refuseSecondStdout(wanted, "--csv");
+      if (argv.json) refuseSecondStdout(mapOutputs, "--json");
+      const [out, ...maps] = planRun(wanted, inputFiles(argv));
+      const planned = [out, ...maps];
       const { jsonText, screenDocument, sphereMapDocument } = await import("../jobs/formats/json.js");
       const outcome = runScreen(job);
       const json = jsonText(screenDocument(outcome));

@@ -190,15 +190,19 @@ function bomInName(name: string): string {
 
 /** Checks the header's names: every required column there, no unknown one. */
 function checkHeader(names: readonly string[], label: string): void {
-  const where = `${label} header`;
   const expected = `expected the columns ${INPUT_COLUMNS.join(", ")}`;
   const unknown = names.filter((c) => !INPUT_COLUMNS.includes(c));
   // a byte-order mark in a name also hides a required column: name the mark first
   const marked = unknown.find((c) => bomInName(c) !== "");
-  if (marked !== undefined) throw new InputError(`${where}: unknown column ${quote(marked)}${bomInName(marked)}; ${expected}`);
+  if (marked !== undefined) throw new InputError(`${label}: the header has the unknown column ${quote(marked)}${bomInName(marked)}; ${expected}`);
   const missing = REQUIRED.filter((c) => !names.includes(c));
-  if (missing.length) throw new InputError(`${where}: the header lacks column "${missing[0]}"; ${expected}`);
-  if (unknown.length) throw new InputError(`${where}: unknown column ${quote(unknown[0])}; ${expected}`);
+  if (missing.length) throw new InputError(`${label}: the header lacks column "${missing[0]}"; ${expected}`);
+  if (unknown.length) throw new InputError(`${label}: the header has the unknown column ${quote(unknown[0])}; ${expected}`);
+}
+
+/** How messages name the batch's CSV. */
+function batchLabel(job: ExplainBatchJob): string {
+  return `--csv-in ${quote(job.csvIn)}`;
 }
 
 function rowPitch(cells: Readonly<Record<string, string>>, lineNo: number, label: string): { pitch: Pitch; moveArmIn: number; moveUpIn: number; label: [string, string] } {
@@ -228,7 +232,7 @@ function rowPitch(cells: Readonly<Record<string, string>>, lineNo: number, label
  * cannot be read or lacks a column is one InputError, and nothing is written.
  */
 export async function openExplainBatch(job: ExplainBatchJob): Promise<CsvReader> {
-  const label = `--csv-in ${quote(job.csvIn)}`;
+  const label = batchLabel(job);
   const reader = readCsv(job.csvIn, { label });
   try {
     checkHeader(await reader.header(), label);
@@ -241,7 +245,7 @@ export async function openExplainBatch(job: ExplainBatchJob): Promise<CsvReader>
 
 /** Streams the batch: one row in, one row out through `events`; a bad row is skipped or stops the run (job.onBadRow). */
 export async function runExplainBatch(job: ExplainBatchJob, reader: CsvReader, events: BatchEvents): Promise<BatchSummary> {
-  const label = `--csv-in ${quote(job.csvIn)}`;
+  const label = batchLabel(job);
   let done = 0;
   let skipped = 0;
   let stoppedAt: string | undefined;

@@ -23,7 +23,7 @@ export function optionText(option: string, value: unknown): string {
 
 /** A path option's one value, as typed (not trimmed: a file name may have spaces). */
 export function optionPath(option: string, value: unknown): string {
-  if (Array.isArray(value)) throw new InputError(`--${option} was given ${value.length} times; give it once`);
+  if (Array.isArray(value)) throw new InputError(`--${option} was given ${value.length} times; expected it once`);
   return String(value ?? "");
 }
 
