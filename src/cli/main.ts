@@ -90,10 +90,17 @@ function yargsMessage(msg: string, args: readonly string[]): string {
   return msg;
 }
 
-// a reader that closes standard output early (| head) ends the run quietly
+/** Whether `err` is a pipe closed by its reader (EPIPE), raised directly or as an error's cause. */
+function readerWentAway(err: unknown): boolean {
+  const e = err as { code?: unknown; cause?: { code?: unknown } } | undefined;
+  return e?.code === "EPIPE" || e?.cause?.code === "EPIPE";
+}
+
+// a reader that closes its pipe early (| head) ends the run quietly, whether the
+// output was printed or written as `--out -`, as in a shell pipeline (POSIX SIGPIPE)
 process.stdout.on("error", (err: NodeJS.ErrnoException) => {
-  if (err.code === "EPIPE") process.exit(0);
+  if (readerWentAway(err)) process.exit(0);
   exitWithError(new InputError(`cannot write "-": ${errnoWords(err)}`));
 });
 
-main(hideBin(process.argv)).catch(exitWithError);
+main(hideBin(process.argv)).catch((err) => (readerWentAway(err) ? process.exit(0) : exitWithError(err)));

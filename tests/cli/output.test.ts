@@ -6,11 +6,11 @@
  */
 import { chmodSync, lstatSync, mkdtempSync, openSync, closeSync, constants, readdirSync, readFileSync, readlinkSync, statSync, symlinkSync, writeFileSync } from "node:fs";
 import { readFile } from "node:fs/promises";
-import { execFileSync } from "node:child_process";
+import { execFileSync, spawn } from "node:child_process";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { runCli, runCliAsync } from "./run.js";
+import { BIN, runCli, runCliAsync } from "./run.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-output-"));
 const MEASURE = ["measure", "--axis", "lobe-B1"];
@@ -37,6 +37,18 @@ describe("standard output, devices, pipes and links", () => {
     const twice = runCli([...MEASURE, "--out", "-", "--json"]);
     expect(twice.stdout).toBe(r.stdout);
   });
+
+  it("a reader that closes the pipe early ends the run quietly, printed or written as --out - [POSIX write(2): EPIPE; sh pipelines]", async () => {
+    for (const args of [["screen", "--demo", "--grid", "6", "--json"], ["screen", "--demo", "--grid", "6", "--out", "-"]]) {
+      const child = spawn(process.execPath, [BIN, ...args], { stdio: ["ignore", "pipe", "pipe"] });
+      child.stdout.destroy(); // the reader is gone before the first byte is written
+      let stderr = "";
+      child.stderr.setEncoding("utf8").on("data", (d: string) => (stderr += d));
+      const code = await new Promise<number | null>((resolve) => child.on("close", (c) => resolve(c)));
+      expect(code).toBe(0);
+      expect(stderr).toBe("");
+    }
+  }, 60_000);
 
   it("explain's batch with --out -: CSV on standard output, the summary on stderr [RFC 4180 sec. 2]", () => {
     const csv = join(tmp, "std.csv");
