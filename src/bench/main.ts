@@ -3,7 +3,7 @@
  * --json, and always written to out/bench.json). Run on the compiled JavaScript.
  */
 import { spawnSync } from "node:child_process";
-import { mkdirSync, writeFileSync } from "node:fs";
+import { planOutputs, writeOutput } from "../io/output.js";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
@@ -104,6 +104,8 @@ function startup() {
 
 async function main(): Promise<void> {
   const json = process.argv.includes("--json");
+  // through the one output writer, planned before the figures are taken
+  const [benchFile] = planOutputs([{ option: "the benchmark's file", path: join(projectRoot(), "out", "bench.json"), format: "json" }], []);
   const start = startup();
   const seam = seamFor(DEFAULT_SEAM_SHAPE, DEFAULT_SEAM_POINTS);
   const gyro = 10 * DEG;
@@ -217,9 +219,7 @@ async function main(): Promise<void> {
     memory: { rssMB: Math.round(mem.rss / 1e5) / 10, heapUsedMB: Math.round(mem.heapUsed / 1e5) / 10 },
   };
   if (!Number.isFinite(sink)) throw new Error("benchmark produced a non-finite sum");
-  const outDir = join(projectRoot(), "out");
-  mkdirSync(outDir, { recursive: true });
-  writeFileSync(join(outDir, "bench.json"), JSON.stringify(result, null, 2) + "\n");
+  writeOutput(benchFile, JSON.stringify(result, null, 2) + "\n");
   if (json) {
     process.stdout.write(JSON.stringify(result) + "\n");
     return;

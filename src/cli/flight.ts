@@ -1,7 +1,7 @@
 /** `seam-atlas flight`: a pitch with a seam orientation flown to the plate, its movement split into Magnus and seam parts. */
 import type { Argv } from "yargs";
 import { textOption, withAirOptions, withPitchOptions, withSamplerOptions } from "./options.js";
-import { print, writeAtomic } from "./output.js";
+import { planRun, print, writeOutput } from "./output.js";
 
 export function registerFlight(y: Argv): Argv {
   return y.command(
@@ -27,17 +27,21 @@ export function registerFlight(y: Argv): Argv {
             .option("window-ft", textOption("where the trade's movement window starts, ft from home plate (10 to 55)", "50"))
             .option("trajectory", { type: "boolean", default: false, describe: "add the flight's path (every 1 ms) to the JSON" })
             .option("json", { type: "boolean", default: false, describe: "print JSON" })
-            .option("out", textOption("also write the JSON to this file"))
+            .option("out", textOption("also write the JSON to this file (- for standard output)"))
             .example("$0 flight --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --candidate 1", "the screen's best grip, in inches")
             .example("$0 flight --hand right --speed 94 --spin 2350 --tilt 12:45 --axis waist-A --elevation-ft 5200", "a four-seam hold at altitude"),
         ),
       ),
     async (argv) => {
       const { parseFlight, runFlight } = await import("../jobs/flight.js");
+      const { inputFiles } = await import("../jobs/request/inputs.js");
       const { flightDocument, jsonText } = await import("../jobs/formats/json.js");
-      const outcome = runFlight(parseFlight(argv));
+      const job = parseFlight(argv);
+      const [out] = planRun([{ option: "--out", path: argv.out, format: "json" }], inputFiles(argv));
+      const outcome = runFlight(job);
       const json = jsonText(flightDocument(outcome));
-      if (typeof argv.out === "string") writeAtomic(argv.out, json);
+      if (out) writeOutput(out, json);
+      if (out?.kind === "stdout") return; // the JSON is the standard output
       print(argv.json ? json : (await import("../jobs/formats/text.js")).flightText(outcome));
     },
   );

@@ -1,7 +1,7 @@
 /** `seam-atlas force`: the seam-force model's side force through one turn and its turn average. */
 import type { Argv } from "yargs";
 import { textOption, withAirOptions } from "./options.js";
-import { print } from "./output.js";
+import { planRun, print, writeOutput } from "./output.js";
 
 export function registerForce(y: Argv): Argv {
   return y.command(
@@ -19,16 +19,20 @@ export function registerForce(y: Argv): Argv {
           .option("band-width", textOption("fixation band width, deg [default: the model profile's]"))
           .option("seam-shape", textOption("seam shape b, 0 < b < 0.5 [default: fitted to a published cover's waist]"))
           .option("json", { type: "boolean", default: false, describe: "print JSON (360 phases)" })
-          .option("out", textOption("also write the JSON to this file"))
+          .option("out", textOption("also write the JSON to this file (- for standard output)"))
           .example("$0 force --axis waist-A --speed 65", "a knuckleball held on the four-seam axis, turned through one revolution")
           .example("$0 force --axis 3.6N,135E --gyro 10 --speed 92 --spin 2150 --json", "a sinker's grip, as JSON"),
       ),
     async (argv) => {
       const { parseForce, runForce } = await import("../jobs/force.js");
+      const { inputFiles } = await import("../jobs/request/inputs.js");
       const { forceDocument, jsonText } = await import("../jobs/formats/json.js");
-      const result = runForce(parseForce(argv));
+      const job = parseForce(argv);
+      const [out] = planRun([{ option: "--out", path: argv.out, format: "json" }], inputFiles(argv));
+      const result = runForce(job);
       const json = jsonText(forceDocument(result));
-      if (typeof argv.out === "string") (await import("./output.js")).writeAtomic(argv.out, json);
+      if (out) writeOutput(out, json);
+      if (out?.kind === "stdout") return; // the JSON is the standard output
       print(argv.json ? json : (await import("../jobs/formats/text.js")).forceText(result));
     },
   );

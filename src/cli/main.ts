@@ -2,6 +2,8 @@
 /** The `seam-atlas` command: parse, validate, call the library, write. */
 import yargs from "yargs";
 import { hideBin } from "yargs/helpers";
+import { quote } from "../io/quote.js";
+import { errnoWords } from "../io/writeErrors.js";
 import { TOOL_VERSION } from "../version.js";
 import { exitWithError, InputError } from "./errors.js";
 import { registerLandmarks } from "./landmarks.js";
@@ -13,19 +15,24 @@ import { registerPaper } from "./paper.js";
 import { registerView } from "./view.js";
 import { registerForce } from "./force.js";
 
+/** The commands, in the order --help lists them in words. */
+export const COMMANDS = ["atlas", "card", "handout", "view", "screen", "measure", "flight", "force", "explain", "landmarks"] as const;
+
 export async function main(args: string[]): Promise<void> {
+  refuseByteOrderMarks(args);
+  const command = args[0];
+  if (command !== undefined && !command.startsWith("-") && !(COMMANDS as readonly string[]).includes(command)) throw unknownCommand(command);
   let cli = yargs(args)
     .scriptName("seam-atlas")
     .usage("$0 <command> [options]\n\nSeam-orientation geometry: where the spin axis pierces the ball, how much seam sits in the separation band through a turn, and the seam-shifted-wake push that follows.")
     .version(TOOL_VERSION)
     .strict()
-    .demandCommand(1, "give a command: atlas, card, handout, view, screen, measure, flight, force, explain or landmarks (see --help)")
-    .recommendCommands()
+    .demandCommand(1, `give a command: ${COMMANDS.slice(0, -1).join(", ")} or ${COMMANDS.at(-1)} (see --help)`)
     .wrap(Math.min(110, process.stdout.columns || 100))
     .fail((msg, err) => {
       // yargs' own complaints (unknown option, missing value) are input errors too
       if (err && err.name !== "YError") throw err;
-      throw new InputError((msg ?? err?.message ?? "bad command line").replace(/\s+/g, " ").trim());
+      throw new InputError(yargsMessage((msg ?? err?.message ?? "bad command line").replace(/\s+/g, " ").trim(), args));
     });
   cli = registerMeasure(cli);
   cli = registerScreen(cli);
@@ -38,4 +45,64 @@ export async function main(args: string[]): Promise<void> {
   await cli.parseAsync();
 }
 
-main(hideBin(process.argv)).catch(exitWithError);
+/**
+ * A byte-order mark (U+FEFF) is invisible and no value holds one: it comes along
+ * when text is copied out of a file saved with one. Named, with its option.
+ */
+function refuseByteOrderMarks(args: readonly string[]): void {
+  args.forEach((a, i) => {
+    if (!a.includes("\ufeff")) return;
+    const inline = /^(--?[^=]+)=([\s\S]*)$/.exec(a);
+    const what = inline ? `${inline[1]} ${quote(inline[2])}` : i > 0 && args[i - 1].startsWith("-") ? `${args[i - 1]} ${quote(a)}` : quote(a);
+    throw new InputError(`${what} holds a byte-order mark (U+FEFF, invisible); expected the value without it`);
+  });
+}
+
+/** "unknown command", with the nearest command when one is near (edit distance at most 2). */
+function unknownCommand(typed: string): InputError {
+  const near = COMMANDS.map((c) => ({ c, d: editDistance(typed.toLowerCase(), c) })).sort((a, b) => a.d - b.d)[0];
+  const hint = near.d <= 2 ? `did you mean ${near.c}?` : `expected one of ${COMMANDS.join(", ")}`;
+  return new InputError(`unknown command ${quote(typed)}; ${hint}`);
+}
+
+/** Levenshtein distance (insertions, deletions, substitutions), for command suggestions. */
+function editDistance(a: string, b: string): number {
+  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const row = [i];
+    for (let j = 1; j <= b.length; j++) row.push(Math.min(prev[j] + 1, row[j - 1] + 1, prev[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1)));
+    prev = row;
+  }
+  return prev[b.length];
+}
+
+/** yargs' messages in the tool's words: the option as typed and where to read about it. */
+function yargsMessage(msg: string, args: readonly string[]): string {
+  const command = args[0] !== undefined && !args[0].startsWith("-") ? args[0] : undefined;
+  const help = command ? `see seam-atlas ${command} --help` : "see seam-atlas --help";
+  const unknown = /^Unknown arguments?: (.+)$/.exec(msg);
+  if (unknown) {
+    const name = unknown[1].split(", ")[0];
+    const asOption = args.find((a) => a === `--${name}` || a === `-${name}` || a.startsWith(`--${name}=`));
+    if (asOption !== undefined) return `unknown option --${name}${command ? ` for ${command}` : ""}; ${help}`;
+    return `unexpected ${quote(name)}${command ? ` after ${command}` : ""}; expected options only (${help})`;
+  }
+  const noValue = /^Not enough arguments following: (.+)$/.exec(msg);
+  if (noValue) return `--${noValue[1]} is given without a value; ${help}`;
+  return msg;
+}
+
+/** Whether `err` is a pipe closed by its reader (EPIPE), raised directly or as an error's cause. */
+function readerWentAway(err: unknown): boolean {
+  const e = err as { code?: unknown; cause?: { code?: unknown } } | undefined;
+  return e?.code === "EPIPE" || e?.cause?.code === "EPIPE";
+}
+
+// a reader that closes its pipe early (| head) ends the run quietly, whether the
+// output was printed or written as `--out -`, as in a shell pipeline (POSIX SIGPIPE)
+process.stdout.on("error", (err: NodeJS.ErrnoException) => {
+  if (readerWentAway(err)) process.exit(0);
+  exitWithError(new InputError(`cannot write "-": ${errnoWords(err)}`));
+});
+
+main(hideBin(process.argv)).catch((err) => (readerWentAway(err) ? process.exit(0) : exitWithError(err)));

@@ -1,12 +1,26 @@
 /** `seam-atlas card`, `atlas` and `handout`: the printed outputs. */
 import { join } from "node:path";
 import type { Argv } from "yargs";
+import type { InputRef, OutputFormat } from "../io/outputPlan.js";
+import type { Layout } from "../render/paper/layouts.js";
 import { projectRoot } from "../version.js";
 import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
-import { print, progress, writeAtomic } from "./output.js";
+import { planRun, print, progress, writeOutput, type PlannedOutput } from "./output.js";
 
-function outputPath(argv: Record<string, unknown>, fallback: string): string {
-  return typeof argv.out === "string" ? argv.out : join(projectRoot(), "out", fallback);
+/**
+ * Plans a paper command's one output (--out, or out/FALLBACK in the project) before
+ * anything is drawn; the layout file is an input it may not replace.
+ */
+async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat): Promise<PlannedOutput> {
+  const { inputFiles } = await import("../jobs/request/inputs.js");
+  const { layoutsDir } = await import("../jobs/paper.js");
+  const inputs: InputRef[] = [...inputFiles(argv), { option: "--layout", path: join(layoutsDir(), `${layout.name}.json`) }];
+  return planRun([{ option: "--out", path: argv.out ?? join(projectRoot(), "out", fallback), format }], inputs)[0]!;
+}
+
+/** What a paper command prints once its file is written ("wrote PATH ..."), unless the file went to standard output. */
+function wrote(out: PlannedOutput, details = ""): void {
+  if (out.kind !== "stdout") print(`wrote ${out.given}${details}\n`);
 }
 
 export function registerPaper(y: Argv): Argv {
@@ -18,21 +32,22 @@ export function registerPaper(y: Argv): Argv {
         withAirOptions(withScreenOptions(
           withSamplerOptions(
             withPitchOptions(c)
-              .option("candidate", textOption("which of the screen's candidates (1 = best)", "1"))
+              .option("candidate", textOption("which of the screen's candidates (1 = best) [default: 1]"))
               .option("reference", textOption("print a reference hold instead: four-seam or two-seam"))
               .option("layout", textOption("a card or sheet layout from templates/layouts (a sheet holds the top candidates)", "index-card-4x6"))
               .option("svg", { type: "boolean", default: false, describe: "write SVG instead of PDF (card layouts only)" })
-              .option("out", textOption("output file [default: out/card.pdf or out/card.svg]"))
+              .option("out", textOption("output file, - for standard output [default: out/card.pdf or out/card.svg]"))
               .example("$0 card --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --want arm", "the best grip card for a sinker")
               .example("$0 card --demo --pitch-name 'Iris Talvela/sinker' --layout letter-sheet-6-cards", "a sheet of cards to cut out"),
           ),
         )),
       async (argv) => {
         const { parseCard, runCard } = await import("../jobs/paper.js");
-        const made = await runCard(parseCard(argv));
-        const out = outputPath(argv, made.format === "svg" ? "card.svg" : "card.pdf");
-        writeAtomic(out, made.bytes);
-        print(`wrote ${out}\n`);
+        const job = parseCard(argv);
+        const out = await planPaper(argv, job.layout, job.svg ? "card.svg" : "card.pdf", job.svg ? "svg" : "pdf");
+        const made = await runCard(job);
+        writeOutput(out, made.bytes);
+        wrote(out);
       },
     )
     .command(
@@ -44,16 +59,17 @@ export function registerPaper(y: Argv): Argv {
             withPitchOptions(c)
               .option("top", textOption("candidates per pitch (1 to 12)", "4"))
               .option("layout", textOption("an atlas layout from templates/layouts", "atlas-letter"))
-              .option("out", textOption("output PDF [default: out/atlas.pdf]"))
+              .option("out", textOption("output PDF, - for standard output [default: out/atlas.pdf]"))
               .example("$0 atlas --demo", "the demo staff's atlas in out/atlas.pdf"),
           ),
         )),
       async (argv) => {
         const { parseAtlas, runAtlas } = await import("../jobs/paper.js");
-        const made = await runAtlas(parseAtlas(argv), progress());
-        const out = outputPath(argv, "atlas.pdf");
-        writeAtomic(out, made.bytes);
-        print(`wrote ${out} (${made.pages} pages, ${made.pitches} pitch(es))\n`);
+        const job = parseAtlas(argv);
+        const out = await planPaper(argv, job.layout, "atlas.pdf", "pdf");
+        const made = await runAtlas(job, progress());
+        writeOutput(out, made.bytes);
+        wrote(out, ` (${made.pages} pages, ${made.pitches} pitch(es))`);
       },
     )
     .command(
@@ -61,14 +77,15 @@ export function registerPaper(y: Argv): Argv {
       "print a clinic handout for players (PDF): what spin and seams do, why the classic holds average out, how to try a grip safely",
       (c) =>
         withSamplerOptions(
-          c.option("layout", textOption("a handout layout from templates/layouts", "handout-letter")).option("out", textOption("output PDF [default: out/handout.pdf]")),
+          c.option("layout", textOption("a handout layout from templates/layouts", "handout-letter")).option("out", textOption("output PDF, - for standard output [default: out/handout.pdf]")),
         ),
       async (argv) => {
         const { parseHandout, runHandout } = await import("../jobs/paper.js");
-        const made = await runHandout(parseHandout(argv));
-        const out = outputPath(argv, "handout.pdf");
-        writeAtomic(out, made.bytes);
-        print(`wrote ${out} (${made.pages} pages)\n`);
+        const job = parseHandout(argv);
+        const out = await planPaper(argv, job.layout, "handout.pdf", "pdf");
+        const made = await runHandout(job);
+        writeOutput(out, made.bytes);
+        wrote(out, ` (${made.pages} pages)`);
       },
     );
 }

@@ -1,9 +1,14 @@
 /** `seam-atlas screen`: every spin-axis position on the ball for a pitch, the best distinct grips and the classic holds. */
+import { existsSync, statSync } from "node:fs";
+import { join } from "node:path";
 import type { Argv } from "yargs";
 import { InputError } from "../io/errors.js";
+import { formatOfPath } from "../io/outputPlan.js";
+import { quote } from "../io/quote.js";
+import { uniqueSlugs } from "../io/slugs.js";
 import { DEFAULT_TOP } from "../screening/screen.js";
 import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
-import { print, writeAtomic } from "./output.js";
+import { planRun, print, refuseSecondStdout, toStdout, wroteLines, writeOutput, type WantedOutput } from "./output.js";
 
 export function registerScreen(y: Argv): Argv {
   return y.command(
@@ -16,39 +21,58 @@ export function registerScreen(y: Argv): Argv {
             .option("top", textOption("how many candidates to list (1 to 50)", String(DEFAULT_TOP)))
             .option("json", { type: "boolean", default: false, describe: "print JSON" })
             .option("csv", { type: "boolean", default: false, describe: "print CSV, one row per candidate or reference hold" })
-            .option("out", textOption("also write the JSON to this file"))
-            .option("map", textOption("write the full sphere map (JSON) to this file; with several pitches, one file each (NAME.json) in this folder"))
+            .option("out", textOption("also write the JSON to this file (- for standard output)"))
+            .option(
+              "map",
+              textOption(
+                "write the full sphere map (JSON) to this file; for several pitches (a staff), or when it is an existing folder, a folder: one PITCHER-PITCH.json per pitch, each name unique",
+              ),
+            )
             .example("$0 screen --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --want arm", "a right-hander's sinker")
-            .example("$0 screen --demo --csv", "the demo staff as CSV"),
+            .example("$0 screen --demo --csv", "the demo staff as CSV")
+            .example("$0 screen --demo --map out/maps", "the demo staff's sphere maps, one file per pitch in out/maps/"),
         ),
       )),
     async (argv) => {
       if (argv.json && argv.csv) throw new InputError(`give --json or --csv, not both`);
       const { parseScreen, runScreen } = await import("../jobs/screen.js");
+      const { inputFiles } = await import("../jobs/request/inputs.js");
+      const job = parseScreen(argv);
+      const mapOutputs = mapsWanted(argv.map, job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name)));
+      const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: "json" }, ...mapOutputs];
+      // standard output carries one document: --out - may go with --json (the same JSON), nothing else
+      if (argv.csv) refuseSecondStdout(wanted, "--csv");
+      if (argv.json) refuseSecondStdout(mapOutputs, "--json");
+      const [out, ...maps] = planRun(wanted, inputFiles(argv));
+      const planned = [out, ...maps];
       const { jsonText, screenDocument, sphereMapDocument } = await import("../jobs/formats/json.js");
-      const outcome = runScreen(parseScreen(argv));
+      const outcome = runScreen(job);
       const json = jsonText(screenDocument(outcome));
-      // build every output before writing any
-      const mapFiles: [string, string][] = [];
-      if (typeof argv.map === "string") {
-        if (outcome.screened.length === 1) mapFiles.push([argv.map, JSON.stringify(sphereMapDocument(outcome.screened[0].result)) + "\n"]);
-        else {
-          const { join } = await import("node:path");
-          for (const s of outcome.screened) {
-            const stem = `${s.input.echo.pitcher}-${s.input.echo.name}`.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "");
-            mapFiles.push([join(argv.map, `${stem}.json`), JSON.stringify(sphereMapDocument(s.result)) + "\n"]);
-          }
-        }
-      }
-      if (typeof argv.out === "string") writeAtomic(argv.out, json);
-      for (const [path, text] of mapFiles) writeAtomic(path, text);
+      if (out) writeOutput(out, json);
+      maps.forEach((m, i) => m && writeOutput(m, JSON.stringify(sphereMapDocument(outcome.screened[i].result)) + "\n"));
+      if (toStdout(planned)) return;
       const reports = outcome.screened.map((s) => s.report);
       if (argv.json) print(json);
       else if (argv.csv) print((await import("../jobs/formats/csv.js")).screenCsv(reports));
-      else {
-        print((await import("../jobs/formats/text.js")).screenText(outcome.job.team, reports));
-        for (const f of [argv.out, ...mapFiles.map((m) => m[0])]) if (typeof f === "string") print(`wrote ${f}\n`);
-      }
+      else print((await import("../jobs/formats/text.js")).screenText(outcome.job.team, reports) + wroteLines(planned));
     },
   );
+}
+
+/**
+ * The sphere-map outputs --map asks for: with one pitch the file it names; with
+ * several, one file per pitch in the folder it names, each named by a unique
+ * readable stem of "PITCHER-PITCH" (io/slugs.ts).
+ */
+function mapsWanted(map: unknown, labels: readonly string[]): WantedOutput[] {
+  if (map === undefined) return [];
+  const folder = typeof map === "string" && map !== "" && existsSync(map) && statSync(map).isDirectory();
+  if (typeof map !== "string" || (labels.length === 1 && !folder)) return [{ option: "--map", path: map, format: "json" }];
+  const n = labels.length;
+  const expected = `expected a folder for the ${n} pitches' sphere maps (one PITCHER-PITCH.json each)`;
+  const given = `--map ${quote(map)}`;
+  if (map === "" || map === "-") throw new InputError(`${given} cannot hold ${n} sphere maps; ${expected}`);
+  if (existsSync(map) && !statSync(map).isDirectory()) throw new InputError(`${given} is a file, but the run has ${n} pitches; ${expected}`);
+  if (!existsSync(map) && formatOfPath(map) !== undefined) throw new InputError(`${given} is named like a file, but the run has ${n} pitches; ${expected}`);
+  return uniqueSlugs(labels).map((stem) => ({ option: "--map", path: join(map, `${stem}.json`), format: "json" as const }));
 }

@@ -16,13 +16,14 @@
  * line after it is read again (each restart moves at least one line forward).
  *
  * Cells come back as bytes and are decoded here as strict UTF-8; a record with a
- * NUL byte or bytes that are not UTF-8 is a bad record. Blank lines are skipped.
+ * NUL byte or bytes that are not UTF-8 is a bad record, and a file that starts
+ * with a UTF-16 byte-order mark has its first line reported as UTF-16. Blank lines are skipped.
  * Spaces before an opening quote are dropped (csv-parse's ltrim); text after a
  * closing quote, a space included, makes a bad record as RFC 4180 has it
  * (csv-parse's rtrim cannot be used: it fails on byte cells).
  */
 import { parse, type CsvError, type Parser } from "csv-parse";
-import { decodeUtf8 } from "./utf8.js";
+import { decodeUtf8, utf16Bom, utf16Problem } from "./utf8.js";
 
 /** A record read from the file: its cells (as written, not trimmed). */
 export interface RawCsvRecord {
@@ -88,6 +89,12 @@ export class CsvRecordSplitter {
       this.bomChecked = true;
       if (this.buf[0] === 0xef && this.buf[1] === 0xbb && this.buf[2] === 0xbf) this.consume(3);
       this.fedUpTo = this.bufStart;
+      const wide = utf16Bom(this.buf);
+      if (wide) {
+        // every later line is UTF-16 too, each reported on its own if read on
+        out.push({ line: 1, problem: utf16Problem(wide), expected: "expected a file saved as UTF-8 text", resynced: true });
+        this.resyncing = true;
+      }
     }
     for (;;) {
       if (this.resyncing && !this.resync()) return out;

@@ -5,8 +5,9 @@
 
 /** An error in what the user gave (a value, a file, a path): one line, exit status 2. */
 export class InputError extends Error {
-  constructor(message: string) {
-    super(message);
+  /** @param options.cause the system error behind it, if any (ES2022 error cause). */
+  constructor(message: string, options?: { cause?: unknown }) {
+    super(message, options);
     this.name = "InputError";
   }
 }

@@ -5,7 +5,8 @@
  *
  * Stricter than JSON.parse, on purpose:
  * - bytes must be well-formed UTF-8 (RFC 8259 sec. 8.1); a leading byte-order mark
- *   is accepted and dropped (sec. 8.1 lets a parser ignore it);
+ *   is accepted and dropped (sec. 8.1 lets a parser ignore it); a UTF-16 one is
+ *   named in the message;
  * - a key may appear once per object (sec. 4 leaves duplicates to the
  *   implementation; we refuse them), and the keys `__proto__`, `constructor` and
  *   `prototype` are refused; objects have no prototype (`Object.create(null)`);
@@ -18,7 +19,7 @@
  */
 import { InputError } from "./errors.js";
 import { quote } from "./quote.js";
-import { firstInvalidUtf8, lineOfOffset, startsWithBom } from "./utf8.js";
+import { firstInvalidUtf8, lineOfOffset, startsWithBom, utf16Bom, utf16Problem } from "./utf8.js";
 
 /** A parsed JSON document and the line where each of its values starts. */
 export interface LocatedJson {
@@ -46,6 +47,8 @@ export function parseStrictJson(input: Uint8Array | string, source: string): Loc
   if (typeof input === "string") {
     text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   } else {
+    const wide = utf16Bom(input);
+    if (wide) throw new InputError(`${source} line 1: ${utf16Problem(wide)}; expected a file saved as UTF-8 text`);
     const bytes = startsWithBom(input) ? input.subarray(3) : input;
     const bad = firstInvalidUtf8(bytes);
     if (bad >= 0) {

@@ -33,7 +33,7 @@ import { quote } from "./quote.js";
 import { createTemp, removeTemp, untrackTemp } from "./tempFiles.js";
 import { writeError } from "./writeErrors.js";
 
-export { formatOfPath, OUTPUT_FORMATS, planOutputs, type InputRef, type OutputFormat, type OutputRequest, type PlannedOutput } from "./outputPlan.js";
+export { formatOfPath, OUTPUT_FORMATS, planOutputs, writesStraight, type InputRef, type OutputFormat, type OutputRequest, type PlannedOutput } from "./outputPlan.js";
 export { uniqueSlugs } from "./slugs.js";
 
 /** Bytes gathered by an output stream before they are written. */

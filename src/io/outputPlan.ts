@@ -18,13 +18,16 @@
  * links), checked for regular and not-yet-existing files; a file extension that
  * names another format than the one declared (not checked for `-` and devices).
  * Missing folders are created one level at a time, after all other checks pass;
- * the target's folder must be writable, and so must an existing target file.
+ * the target's folder must be writable (a temporary file is made there and
+ * removed at once, so root on a read-only mount is caught too), and so must an
+ * existing target file.
  */
-import { accessSync, constants, existsSync, lstatSync, readlinkSync, realpathSync, statSync, type Stats } from "node:fs";
+import { accessSync, closeSync, constants, existsSync, lstatSync, readlinkSync, realpathSync, statSync, type Stats } from "node:fs";
 import { basename, dirname, extname, join, resolve } from "node:path";
 import { InputError } from "./errors.js";
 import { ensureFolder } from "./folders.js";
 import { quote } from "./quote.js";
+import { createTemp, removeTemp } from "./tempFiles.js";
 import { errnoWords } from "./writeErrors.js";
 
 /** Formats an output can declare. */
@@ -139,6 +142,21 @@ function classify(req: OutputRequest): PlannedOutput {
   return { ...base, kind: "file", path: found.path, viaLink };
 }
 
+/**
+ * Whether `path` (as typed) is written straight into rather than replaced: `-`, a
+ * character device, a FIFO, or a file that a name under /dev or /proc leads to.
+ * Such outputs have no file name to tell a format by.
+ */
+export function writesStraight(path: string): boolean {
+  if (path === "-") return true;
+  try {
+    const st = statSync(path);
+    return st.isCharacterDevice() || st.isFIFO() || (st.isFile() && SYSTEM_FOLDERS.test(resolve(path)));
+  } catch {
+    return false;
+  }
+}
+
 /** Folders whose files are the system's, never replaced by a rename. */
 const SYSTEM_FOLDERS = /^\/(dev|proc)\//;
 
@@ -227,6 +245,12 @@ function checkFolder(p: PlannedOutput): void {
   ensureFolder(dir, where);
   try {
     accessSync(dir, constants.W_OK);
+    // access(2) answers for the permission bits only, and yes to root everywhere; a
+    // file made and removed at once also meets a read-only mount, a file system
+    // that takes no new files (sysfs) and a full quota of inodes
+    const probe = createTemp(p.path);
+    closeSync(probe.fd);
+    removeTemp(probe.path);
   } catch (err) {
     throw new InputError(`${where}: cannot write into the folder ${quote(dir)}: ${errnoWords(err)}`);
   }

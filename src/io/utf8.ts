@@ -14,6 +14,23 @@ export function startsWithBom(bytes: Uint8Array): boolean {
   return bytes.length >= 3 && bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf;
 }
 
+/**
+ * The UTF-16 byte-order mark `bytes` starts with, if any: FF FE (little-endian) or
+ * FE FF (big-endian) (The Unicode Standard, sec. 23.8). Neither can begin UTF-8
+ * text, and a file that starts so was saved as UTF-16, which messages say by name.
+ */
+export function utf16Bom(bytes: Uint8Array): "FF FE" | "FE FF" | undefined {
+  if (bytes.length < 2) return undefined;
+  if (bytes[0] === 0xff && bytes[1] === 0xfe) return "FF FE";
+  if (bytes[0] === 0xfe && bytes[1] === 0xff) return "FE FF";
+  return undefined;
+}
+
+/** What to say about a file that starts with a UTF-16 byte-order mark. */
+export function utf16Problem(bom: string): string {
+  return `the file starts with the UTF-16 byte-order mark ${bom}, so it is saved as UTF-16`;
+}
+
 /** `bytes` as text, or `undefined` when it is not well-formed UTF-8. A BOM is kept. */
 export function decodeUtf8(bytes: Uint8Array): string | undefined {
   try {

@@ -48,6 +48,6 @@ export function errnoWords(err: unknown): string {
  */
 export function writeError(path: string, err: unknown): Error {
   if (err instanceof InputError) return err;
-  if (typeof (err as NodeJS.ErrnoException | undefined)?.code === "string") return new InputError(`cannot write ${quote(path)}: ${errnoWords(err)}`);
+  if (typeof (err as NodeJS.ErrnoException | undefined)?.code === "string") return new InputError(`cannot write ${quote(path)}: ${errnoWords(err)}`, { cause: err });
   return err instanceof Error ? err : new Error(String(err));
 }

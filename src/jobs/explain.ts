@@ -8,21 +8,26 @@
  *   tilt (H:MM), view (pitcher|catcher, default pitcher), gyro_deg or efficiency_pct
  *   (default gyro 0), move_arm_in, move_up_in (observed movement with gravity
  *   removed: inches toward the arm side, and up).
+ * The CSV is read by io/csv.ts (RFC 4180: quoted commas, quotes and line breaks,
+ * CRLF, a leading BOM); a record that cannot be read, or a row with a bad value,
+ * is one bad row with its line. Numbers are decimal only (io/numbers.ts).
  */
-import { createReadStream, existsSync } from "node:fs";
-import { createInterface } from "node:readline";
+import { statSync } from "node:fs";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
 import { findLandmarks, nearestLandmark } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEG, M_PER_IN } from "../../geometry/units.js";
-import { parseCsvLine } from "../io/csvLine.js";
+import { isBadRecord, readCsv, type CsvProgress, type CsvReader } from "../io/csv.js";
 import { InputError } from "../io/errors.js";
+import { parseDecimal } from "../io/numbers.js";
+import { formatOfPath, writesStraight } from "../io/outputPlan.js";
+import { quote } from "../io/quote.js";
 import { DEFAULT_EXPLAIN_GRID_DEG, DEFAULT_EXPLAIN_TOP, Explainer, type Explanation } from "../physics/explain.js";
 import type { Pitch } from "../screening/pitch.js";
 import type { PitchEcho } from "../screening/report.js";
 import { buildPitch, pitchesFromRequest, PITCH_FLAGS, type RawPitch } from "./request/pitch.js";
 import { airConditions } from "./request/settings.js";
-import { oneOf, parseInRange, parseIntegerInRange, parseNumber, type Request } from "./request/values.js";
+import { oneOf, optionPath, parseInRange, parseIntegerInRange, parseNumber, type Request } from "./request/values.js";
 
 const IN = (m: number) => m / M_PER_IN;
 const COLUMN_FIELDS: Record<string, string> = {
@@ -36,7 +41,8 @@ const COLUMN_FIELDS: Record<string, string> = {
   gyro_deg: "gyroDeg",
   efficiency_pct: "efficiencyPct",
 };
-const NUMERIC = new Set(["speed_mph", "spin_rpm", "gyro_deg", "efficiency_pct", "move_arm_in", "move_up_in"]);
+/** The numeric columns and the unit each is read in. */
+const NUMERIC: Record<string, string> = { speed_mph: "mph", spin_rpm: "rpm", gyro_deg: "degrees", efficiency_pct: "percent", move_arm_in: "inches", move_up_in: "inches" };
 const REQUIRED = ["hand", "speed_mph", "spin_rpm", "tilt", "move_arm_in", "move_up_in"];
 export const INPUT_COLUMNS = [...Object.keys(COLUMN_FIELDS), "move_arm_in", "move_up_in"];
 /** Largest observed movement accepted either way, inches. */
@@ -60,25 +66,51 @@ export interface ExplainOneJob extends ExplainSettings {
 export interface ExplainBatchJob extends ExplainSettings {
   readonly kind: "batch";
   readonly csvIn: string;
+  /** --out as typed (planned by the caller). */
+  readonly out: string;
   readonly format: "csv" | "json";
   readonly onBadRow: "skip" | "stop";
 }
 
+function isFolder(path: string): boolean {
+  try {
+    return statSync(path).isDirectory();
+  } catch {
+    return false;
+  }
+}
+
+/** Options that only a batch (--csv-in) reads. */
+const BATCH_ONLY = ["on-bad-row", "format"];
+/** Options that only one pitch reads (the CSV gives every pitch and its movement). */
+const ONE_ONLY = [...PITCH_FLAGS, "pitch", "pitch-name", "demo", "move-arm", "move-up", "json"];
+
 export function parseExplain(request: Request): ExplainOneJob | ExplainBatchJob {
-  const onBadRow = oneOf("on-bad-row", request["on-bad-row"] ?? "skip", ["skip", "stop"] as const);
+  const given = (k: string) => request[k] !== undefined && request[k] !== false;
   const gridDeg = parseInRange("grid", request.grid ?? DEFAULT_EXPLAIN_GRID_DEG, 1, 15, "deg");
   const top = parseIntegerInRange("top", request.top ?? DEFAULT_EXPLAIN_TOP, 1, 20);
   const make = () => new Explainer({ gridSpacingRad: gridDeg * DEG, top, air: airConditions(request) });
   if (request["csv-in"] !== undefined) {
-    const stray = [...PITCH_FLAGS, "pitch", "demo", "move-arm", "move-up"].find((k) => request[k] !== undefined && request[k] !== false);
-    if (stray) throw new InputError(`--${stray} cannot be combined with --csv-in; the CSV gives every pitch`);
-    const out = request.out;
-    if (typeof out !== "string") throw new InputError(`--csv-in needs --out FILE (.csv or .json) for the results`);
+    const stray = ONE_ONLY.find(given);
+    if (stray) throw new InputError(`--${stray} cannot be combined with --csv-in; the CSV gives every pitch and its movement`);
+    const onBadRow = oneOf("on-bad-row", request["on-bad-row"] ?? "skip", ["skip", "stop"] as const);
+    if (request.out === undefined) throw new InputError(`--csv-in needs --out FILE (.csv or .json, or - for standard output) for the results`);
+    const out = optionPath("out", request.out);
+    const named = formatOfPath(out);
     const format =
-      request.format !== undefined ? oneOf("format", request.format, ["csv", "json"] as const) : out.endsWith(".json") ? "json" : out.endsWith(".csv") ? "csv" : undefined;
-    if (!format) throw new InputError(`--out "${out}": give a .csv or .json file, or --format csv|json`);
-    return { kind: "batch", csvIn: String(request["csv-in"]), format, onBadRow, gridDeg, top, explainer: make() };
+      request.format !== undefined
+        ? oneOf("format", request.format, ["csv", "json"] as const)
+        : named === "csv" || named === "json"
+          ? named
+          : out !== "" && writesStraight(out)
+            ? "csv"
+            : undefined;
+    // an empty --out or a folder is the output plan's to refuse, in its own words
+    if (!format && out !== "" && !isFolder(out)) throw new InputError(`--out ${quote(out)} names no batch format; expected a .csv or .json file, or --format csv|json`);
+    return { kind: "batch", csvIn: optionPath("csv-in", request["csv-in"]), out, format: format ?? "csv", onBadRow, gridDeg, top, explainer: make() };
   }
+  const batchOnly = BATCH_ONLY.find(given);
+  if (batchOnly) throw new InputError(`--${batchOnly} goes with --csv-in FILE (a batch); leave it out for one pitch`);
   if (request["move-arm"] === undefined || request["move-up"] === undefined) {
     throw new InputError(`--move-arm and --move-up (observed movement, inches) are needed, or --csv-in FILE for a batch`);
   }
@@ -137,7 +169,8 @@ export interface ExplainedRow {
 export interface BatchEvents {
   row(r: ExplainedRow): Promise<void>;
   skipped(message: string): void;
-  progress(done: number): void;
+  /** Rows done so far and how much of the file has been read. */
+  progress(done: number, read: CsvProgress): void;
 }
 
 export interface BatchSummary {
@@ -147,78 +180,95 @@ export interface BatchSummary {
   readonly stoppedAt?: string;
 }
 
-function rowPitch(header: string[], cells: string[], lineNo: number, file: string): { pitch: Pitch; moveArmIn: number; moveUpIn: number; label: [string, string] } {
-  const where = (col: string) => `${file} line ${lineNo}, column ${col}`;
-  if (cells.length !== header.length) throw new InputError(`${file} line ${lineNo}: ${cells.length} cells, but the header has ${header.length}`);
-  const get = (col: string) => {
-    const i = header.indexOf(col);
-    return i < 0 ? "" : cells[i];
-  };
-  for (const col of REQUIRED) if (get(col) === "") throw new InputError(`${where(col)}: "${col}" is empty`);
+/** A column name that a byte-order mark got into, in words; "" if none did. */
+function bomInName(name: string): string {
+  if (name.includes("\ufeff")) return " (it holds a byte-order mark, U+FEFF, which is invisible)";
+  // EF BB BF read as Windows-1252 and saved again as UTF-8: the mark shows as three letters
+  if (name.includes("\u00ef\u00bb\u00bf")) return ` (it starts with a byte-order mark that was read as the letters "\u00ef\u00bb\u00bf" and saved again; expected the file saved once as UTF-8)`;
+  return "";
+}
+
+/** Checks the header's names: every required column there, no unknown one. */
+function checkHeader(names: readonly string[], label: string): void {
+  const expected = `expected the columns ${INPUT_COLUMNS.join(", ")}`;
+  const unknown = names.filter((c) => !INPUT_COLUMNS.includes(c));
+  // a byte-order mark in a name also hides a required column: name the mark first
+  const marked = unknown.find((c) => bomInName(c) !== "");
+  if (marked !== undefined) throw new InputError(`${label}: the header has the unknown column ${quote(marked)}${bomInName(marked)}; ${expected}`);
+  const missing = REQUIRED.filter((c) => !names.includes(c));
+  if (missing.length) throw new InputError(`${label}: the header lacks column "${missing[0]}"; ${expected}`);
+  if (unknown.length) throw new InputError(`${label}: the header has the unknown column ${quote(unknown[0])}; ${expected}`);
+}
+
+/** How messages name the batch's CSV. */
+function batchLabel(job: ExplainBatchJob): string {
+  return `--csv-in ${quote(job.csvIn)}`;
+}
+
+function rowPitch(cells: Readonly<Record<string, string>>, lineNo: number, label: string): { pitch: Pitch; moveArmIn: number; moveUpIn: number; label: [string, string] } {
+  const where = (col: string) => `${label} line ${lineNo}, column "${col}"`;
+  const get = (col: string) => cells[col] ?? "";
+  for (const col of REQUIRED) if (get(col) === "") throw new InputError(`${where(col)}: the cell is empty; expected ${NUMERIC[col] ? `a number of ${NUMERIC[col]}` : `a ${col}`}`);
+  const number = (col: string) => parseDecimal(get(col), `${where(col)}:`, `a number of ${NUMERIC[col]}`);
   const raw: RawPitch = {};
   for (const [col, field] of Object.entries(COLUMN_FIELDS)) {
-    const v = get(col);
-    if (v === "") continue;
-    if (NUMERIC.has(col)) {
-      const x = Number(v);
-      if (!Number.isFinite(x)) throw new InputError(`${where(col)}: "${v}" is not a number`);
-      raw[field] = x;
-    } else raw[field] = v;
+    if (get(col) === "") continue;
+    raw[field] = NUMERIC[col] ? number(col) : get(col);
   }
   const colOf: Record<string, string> = Object.fromEntries(Object.entries(COLUMN_FIELDS).map(([c, f]) => [f, c]));
   const { pitch } = buildPitch(raw, (field) => where(colOf[field] ?? field));
-  const moveArmIn = Number(get("move_arm_in"));
-  const moveUpIn = Number(get("move_up_in"));
+  const moveArmIn = number("move_arm_in");
+  const moveUpIn = number("move_up_in");
   const limit = MOVEMENT_LIMIT_IN;
-  if (!Number.isFinite(moveArmIn) || Math.abs(moveArmIn) > limit) throw new InputError(`${where("move_arm_in")}: "${get("move_arm_in")}" must be a number of inches, at most ${limit} either way`);
-  if (!Number.isFinite(moveUpIn) || Math.abs(moveUpIn) > limit) throw new InputError(`${where("move_up_in")}: "${get("move_up_in")}" must be a number of inches, at most ${limit} either way`);
+  for (const [col, x] of [["move_arm_in", moveArmIn], ["move_up_in", moveUpIn]] as const) {
+    if (Math.abs(x) > limit) throw new InputError(`${where(col)}: ${x} in is out of range; expected at most ${limit} inches either way`);
+  }
   return { pitch, moveArmIn, moveUpIn, label: [get("pitcher"), get("pitch")] };
 }
 
-/** Streams the batch: one row in, one row out through `events`. */
-export async function runExplainBatch(job: ExplainBatchJob, events: BatchEvents): Promise<BatchSummary> {
-  const file = job.csvIn;
-  if (!existsSync(file)) throw new InputError(`--csv-in "${file}": no such file`);
-  let header: string[] | undefined;
-  let lineNo = 0;
+/**
+ * Opens the batch's CSV and reads and checks its header, before any output is
+ * made: a missing file, a folder, an unreadable or empty file, a header that
+ * cannot be read or lacks a column is one InputError, and nothing is written.
+ */
+export async function openExplainBatch(job: ExplainBatchJob): Promise<CsvReader> {
+  const label = batchLabel(job);
+  const reader = readCsv(job.csvIn, { label });
+  try {
+    checkHeader(await reader.header(), label);
+  } catch (err) {
+    reader.close();
+    throw err;
+  }
+  return reader;
+}
+
+/** Streams the batch: one row in, one row out through `events`; a bad row is skipped or stops the run (job.onBadRow). */
+export async function runExplainBatch(job: ExplainBatchJob, reader: CsvReader, events: BatchEvents): Promise<BatchSummary> {
+  const label = batchLabel(job);
   let done = 0;
   let skipped = 0;
   let stoppedAt: string | undefined;
-  const rl = createInterface({ input: createReadStream(file, "utf8"), crlfDelay: Infinity });
-  try {
-    for await (const line of rl) {
-      lineNo++;
-      if (line.trim() === "") continue;
-      if (!header) {
-        header = parseCsvLine(line);
-        const missing = REQUIRED.filter((c) => !header!.includes(c));
-        const unknown = header.filter((c) => !INPUT_COLUMNS.includes(c));
-        if (missing.length) throw new InputError(`${file} line ${lineNo}: the header lacks column "${missing[0]}"; expected ${INPUT_COLUMNS.join(", ")}`);
-        if (unknown.length) throw new InputError(`${file} line ${lineNo}: unknown column "${unknown[0]}"; expected ${INPUT_COLUMNS.join(", ")}`);
-        continue;
+  for await (const item of reader) {
+    let row;
+    try {
+      if (isBadRecord(item)) throw new InputError(item.error);
+      row = rowPitch(item.cells, item.line, label);
+    } catch (err) {
+      if (!(err instanceof InputError || err instanceof RangeError)) throw err;
+      const message = err instanceof RangeError ? `${label} line ${item.line}: ${err.message}` : err.message;
+      if (job.onBadRow === "stop") {
+        stoppedAt = message;
+        break;
       }
-      let row;
-      try {
-        row = rowPitch(header, parseCsvLine(line), lineNo, file);
-      } catch (err) {
-        if (!(err instanceof InputError || err instanceof RangeError)) throw err;
-        const message = err.message.includes(`line ${lineNo}`) ? err.message : `${file} line ${lineNo}: ${err.message}`;
-        if (job.onBadRow === "stop") {
-          stoppedAt = message;
-          break;
-        }
-        skipped++;
-        events.skipped(message);
-        continue;
-      }
-      const e = job.explainer.explain({ pitch: row.pitch, observedArmSideM: row.moveArmIn * M_PER_IN, observedUpM: row.moveUpIn * M_PER_IN });
-      await events.row({ line: lineNo, pitcher: row.label[0], pitch: row.label[1], moveArmIn: row.moveArmIn, moveUpIn: row.moveUpIn, numbers: explanationNumbers(e) });
-      done++;
-      events.progress(done);
+      skipped++;
+      events.skipped(message);
+      continue;
     }
-  } finally {
-    rl.close();
+    const e = job.explainer.explain({ pitch: row.pitch, observedArmSideM: row.moveArmIn * M_PER_IN, observedUpM: row.moveUpIn * M_PER_IN });
+    await events.row({ line: item.line, pitcher: row.label[0], pitch: row.label[1], moveArmIn: row.moveArmIn, moveUpIn: row.moveUpIn, numbers: explanationNumbers(e) });
+    done++;
+    events.progress(done, reader.progress());
   }
-  if (!header && stoppedAt === undefined) throw new InputError(`${file}: no header line; expected columns ${INPUT_COLUMNS.join(", ")}`);
   return { done, skipped, stoppedAt };
 }

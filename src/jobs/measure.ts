@@ -8,6 +8,8 @@ import { join } from "node:path";
 import { findLandmarks, nearestLandmark } from "../../geometry/landmarks.js";
 import { DEG } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
+import { parseStrictJson } from "../io/json.js";
+import { quote } from "../io/quote.js";
 import { measureOrientation, type Measurement } from "../sampling/measure.js";
 import { projectRoot } from "../version.js";
 import { samplerSettings, type SamplerSettings } from "./request/settings.js";
@@ -50,8 +52,10 @@ interface DemoOrientation {
 export function parseMeasure(request: Request): MeasureJob {
   const settings = samplerSettings(request);
   if (request.demo) {
-    if (request.axis !== undefined) throw new InputError(`--demo measures the demo's own axes; leave out --axis "${String(request.axis)}"`);
-    const demo = JSON.parse(readFileSync(join(projectRoot(), "templates", "demo.json"), "utf8")) as { scenario: string; orientations: DemoOrientation[] };
+    if (request.axis !== undefined) throw new InputError(`--demo measures the demo's own axes; leave out --axis ${quote(String(request.axis))}`);
+    if (request.gyro !== undefined) throw new InputError(`--demo measures the demo's own gyro angles; leave out --gyro ${quote(String(request.gyro))}`);
+    const file = join(projectRoot(), "templates", "demo.json");
+    const demo = parseStrictJson(readFileSync(file), quote(file)).value as { scenario: string; orientations: DemoOrientation[] };
     const items = demo.orientations.map((o) => ({
       label: `${o.name} (${o.pitcher})`,
       note: o.note,

@@ -56,6 +56,7 @@ export function parseCard(request: Request): CardJob {
   const layout = layoutOf(String(request.layout ?? "index-card-4x6"), ["card", "sheet"]);
   const svg = request.svg === true;
   if (svg && layout.kind !== "card") throw new InputError(`--svg draws one card; --layout ${layout.name} is a sheet (leave out --svg for a PDF)`);
+  if (request.candidate !== undefined && request.reference !== undefined) throw new InputError(`give --candidate N or --reference four-seam|two-seam, not both`);
   const n = parseInteger("candidate", request.candidate ?? "1", "a candidate number, 1 or more");
   if (n < 1 || n > TOP_RANGE[1]) throw new InputError(`--candidate ${n} is out of range; expected 1 to ${TOP_RANGE[1]}`);
   let reference: CardJob["reference"];

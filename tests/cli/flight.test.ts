@@ -122,7 +122,7 @@ describe("seam-atlas explain", () => {
     const out = join(tmp, "session-out.csv");
     const r = runCli(["explain", "--csv-in", csv, "--out", out]);
     expect(r.code).toBe(0);
-    expect(r.stderr).toMatch(/line 3, column speed_mph: "fast" is not a number/);
+    expect(r.stderr).toMatch(/line 3, column "speed_mph": "fast" is not a decimal number; expected a number of mph/);
     const rows = readFileSync(out, "utf8").trim().split("\n");
     expect(rows).toHaveLength(3);
     expect(rows[0].split(",")).toContain("match1_fit_error_in");

@@ -1,5 +1,5 @@
 /** Runs the compiled CLI (npm test builds it first) and captures its output. */
-import { spawnSync } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { dirname, join } from "node:path";
@@ -11,4 +11,39 @@ export function runCli(args: string[], options: { cwd?: string } = {}): { code: 
   if (!existsSync(BIN)) throw new Error(`${BIN} is missing: run npm run build (npm test does it)`);
   const r = spawnSync(process.execPath, [BIN, ...args], { cwd: options.cwd ?? ROOT, encoding: "utf8", timeout: 120_000, env: { ...process.env, FORCE_COLOR: "0" } });
   return { code: r.status ?? -1, stdout: r.stdout, stderr: r.stderr };
+}
+
+/** What a run left: exit status (null when ended by a signal), the signal, and its output. */
+export interface CliRun {
+  readonly code: number | null;
+  readonly signal: NodeJS.Signals | null;
+  readonly timedOut: boolean;
+  readonly stdout: string;
+  readonly stderr: string;
+}
+
+/**
+ * Runs the compiled CLI without blocking the test (for runs side by side, or a run
+ * that writes into a pipe the test reads). A run still going after `timeoutMs` is
+ * killed and reported `timedOut`: a limit against hangs, not a speed check.
+ */
+export function runCliAsync(args: string[], options: { cwd?: string; timeoutMs?: number } = {}): Promise<CliRun> {
+  if (!existsSync(BIN)) throw new Error(`${BIN} is missing: run npm run build (npm test does it)`);
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, [BIN, ...args], { cwd: options.cwd ?? ROOT, env: { ...process.env, FORCE_COLOR: "0" }, stdio: ["ignore", "pipe", "pipe"] });
+    let stdout = "";
+    let stderr = "";
+    let timedOut = false;
+    child.stdout.setEncoding("utf8").on("data", (d: string) => (stdout += d));
+    child.stderr.setEncoding("utf8").on("data", (d: string) => (stderr += d));
+    const timer = setTimeout(() => {
+      timedOut = true;
+      child.kill("SIGKILL");
+    }, options.timeoutMs ?? 120_000);
+    child.on("error", reject);
+    child.on("close", (code, signal) => {
+      clearTimeout(timer);
+      resolve({ code, signal, timedOut, stdout, stderr });
+    });
+  });
 }

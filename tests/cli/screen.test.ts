@@ -44,13 +44,13 @@ describe("seam-atlas screen", () => {
     expect(table).toContain(j.candidates[0].seamMovement.clock);
   });
 
-  it("screens the demo staff from its file and writes the sphere maps, one per pitch", () => {
+  it("screens the demo staff from its file and writes the sphere maps, one per pitch, named PITCHER-PITCH", () => {
     const dir = join(tmp, "maps");
     const r = runCli(["screen", "--demo", "--grid", "6", "--top", "2", "--json", "--map", dir]);
     expect(r.code).toBe(0);
     const j = JSON.parse(r.stdout);
     expect(j.pitches.length).toBe(6);
-    const m = JSON.parse(readFileSync(join(dir, "iris-talvela-sinker.json"), "utf8"));
+    const m = JSON.parse(readFileSync(join(dir, "Iris-Talvela-sinker.json"), "utf8"));
     expect(m.cells.length).toBe(m.count);
     expect(m.columns).toContain("scoreIn");
     // the score of a wanted arm-side push is the cell's arm-side seam movement
@@ -73,7 +73,7 @@ describe("seam-atlas screen", () => {
   };
   const staff = (pitch: string) => `{\n  "pitchers": [\n    {\n      "name": "A. Tester",\n      "hand": "right",\n      "pitches": [\n        ${pitch}\n      ]\n    }\n  ]\n}\n`;
   const badFiles: [string, string, RegExp][] = [
-    ["malformed JSON", `{\n  "pitchers": [\n    { "name": "x", }\n  ]\n}`, /malformed JSON at line 3/],
+    ["malformed JSON", `{\n  "pitchers": [\n    { "name": "x", }\n  ]\n}`, /^seam-atlas: --pitch ".*" line 3: "}" where a key should be; expected a key in double quotes$/m],
     ["a missing field", staff(`{ "name": "sinker", "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedMph" is missing/],
     ["wrong units", staff(`{ "name": "sinker", "speedKph": 148, "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedKph" is not read; give speedMph \(mph\)/],
     ["a number as text", staff(`{ "name": "sinker", "speedMph": "92 mph", "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedMph" must be a number of mph/],
@@ -98,7 +98,7 @@ describe("seam-atlas screen", () => {
     ["gyro and efficiency together", [...SINKER, "--efficiency", "90"], /--gyro or --efficiency, not both/],
     ["an unknown pitch name", ["--demo", "--pitch-name", "knuckler"], /--pitch-name "knuckler" is not in .*expected one of/],
     ["a bad rank", [...SINKER, "--rank", "best"], /--rank "best" is not one of blend, strength, robust/],
-    ["a missing pitch file", ["--pitch", "/nonexistent/staff.json"], /cannot read the file \(ENOENT\)/],
+    ["a missing pitch file", ["--pitch", "/nonexistent/staff.json"], /--pitch "\/nonexistent\/staff.json": cannot read the file: no such file or folder/],
   ];
   for (const [what, args, message] of badFlags) {
     it(`rejects ${what}: one line, exit 2`, () => {

@@ -174,6 +174,11 @@ describe("readCsv reports a malformed record once, with its line, and reads on",
     ]);
   });
 
+  it("a UTF-16 file (byte-order mark FF FE, The Unicode Standard sec. 23.8) is refused at its header, naming the mark", async () => {
+    const m = await refusal(file(Buffer.from("\ufeffhand,x\r\nright,1\r\n", "utf16le")));
+    expect(m).toMatch(/^--csv-in "f.csv" line 1: the header cannot be read: the file starts with the UTF-16 byte-order mark FF FE, so it is saved as UTF-16; expected a file saved as UTF-8 text$/);
+  });
+
   it("the same items whatever the chunk size (1 to 7 bytes and 64 KiB)", async () => {
     const p = file(Buffer.concat([Buffer.from([0xef, 0xbb, 0xbf]), Buffer.from('a,b\r\n"x\r\ny",1\r\n1,"2\n3,4\n5,\xff\n,\n"q""r",\0\n7,"8', "latin1")]));
     const whole = compact((await readAll(p)).items);

@@ -142,8 +142,9 @@ describe("parseStrictJson on bytes (RFC 8259 sec. 8.1: UTF-8)", () => {
     bytes[bytes.indexOf("X")] = 0xff;
     expect(failure(bytes)).toMatch(/^--pitch "p.json" line 3: byte FF is not valid UTF-8; expected a file saved as UTF-8 text$/);
   });
-  it("a UTF-16 file (its BOM is FF FE) is not UTF-8, line 1", () => {
-    expect(failure(Buffer.from("\ufeff[1]", "utf16le"))).toMatch(/line 1: byte FF is not valid UTF-8/);
+  it("a UTF-16 file is named by its byte-order mark, FF FE or FE FF (The Unicode Standard, sec. 23.8), line 1", () => {
+    expect(failure(Buffer.from("\ufeff[1]", "utf16le"))).toMatch(/line 1: the file starts with the UTF-16 byte-order mark FF FE, so it is saved as UTF-16; expected a file saved as UTF-8 text$/);
+    expect(failure(Buffer.from("\ufeff[1]", "utf16le").swap16())).toMatch(/line 1: the file starts with the UTF-16 byte-order mark FE FF/);
   });
 });
 

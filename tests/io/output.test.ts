@@ -190,11 +190,13 @@ const cases: Case[] = [
     run(dir) {
       const victim = join(dir, "victim.txt");
       writeFileSync(victim, "secret");
+      // planned first (the plan makes and removes a probe file under a random name)
+      const target = plan(join(dir, "out.json"));
       rnd.fixed = Buffer.alloc(6, 0xab);
       try {
         const planted = join(dir, ".out.json.abababababab.tmp");
         symlinkSync(victim, planted);
-        const m = refusal(() => writeOutput(plan(join(dir, "out.json")), "data"));
+        const m = refusal(() => writeOutput(target, "data"));
         expect(m).toMatch(/^cannot write ".*out\.json": a file is in the way$/);
         expect(readFileSync(victim, "utf8")).toBe("secret");
         expect(lstatSync(planted).isSymbolicLink()).toBe(true);
@@ -315,6 +317,14 @@ const cases: Case[] = [
       expect(refusal(() => plan("/proc/seam-atlas-none/a/b.json"))).toMatch(/^--out ".*": cannot create the folder "\/proc\/seam-atlas-none": no such file or folder$/);
       writeFileSync(join(dir, "file"), "");
       expect(refusal(() => plan(join(dir, "file", "x.json")))).toMatch(/not a folder/);
+    },
+  },
+  {
+    name: "a folder that takes no new files even for root (Linux sysfs(5)) is refused at planning, and the probe leaves nothing behind",
+    run(dir) {
+      expect(refusal(() => plan("/sys/kernel/seam-atlas.json"))).toMatch(/^--out "\/sys\/kernel\/seam-atlas\.json": cannot write into the folder "\/sys\/kernel": (permission denied|operation not permitted|the file system is read-only)$/);
+      plan(join(dir, "fine.json"));
+      expect(readdirSync(dir)).toEqual([]);
     },
   },
   {

@@ -7,6 +7,10 @@ describe("quote keeps a message on one line", () => {
     expect(quote("x\u0085y\u2028z\u2029")).toBe('"x\\u0085y\\u2028z\\u2029"');
     expect(quote("")).toBe('""');
   });
+  it("shows invisible format characters as escapes (The Unicode Standard, ch. 23: U+FEFF byte-order mark, U+200B zero width space, U+202E and U+2066 bidirectional controls)", () => {
+    expect(quote("\ufeff1:45")).toBe('"\\ufeff1:45"');
+    expect(quote("a\u200bb\u202ec\u2066d")).toBe('"a\\u200bb\\u202ec\\u2066d"');
+  });
   it(`cuts text longer than ${MAX_QUOTED_CHARS} code points, never inside a character`, () => {
     const q = quote("\u{1F600}".repeat(100));
     expect(q).toBe(`"${"\u{1F600}".repeat(MAX_QUOTED_CHARS)}..."`);

@@ -35,8 +35,10 @@ describe("page layouts", () => {
     });
   }
 
-  it("rejects a file that is not JSON", () => {
+  it("rejects a file that is not JSON, and a key given twice (RFC 8259 sec. 4 leaves duplicates open; we refuse them), naming the line", () => {
     writeFileSync(join(dir, "bad-json.json"), "{ name: ");
-    expect(() => loadLayout(dir, "bad-json")).toThrow(/layout .*bad-json.json: not valid JSON/);
+    expect(() => loadLayout(dir, "bad-json")).toThrow(/^layout .*bad-json.json line 1: .* where a key should be/);
+    writeFileSync(join(dir, "twice.json"), '{\n  "name": "twice",\n  "name": "twice"\n}');
+    expect(() => loadLayout(dir, "twice")).toThrow(/^layout .*twice.json line 3: the key "name" appears again \(first on line 2\)/);
   });
 });

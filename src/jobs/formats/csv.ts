@@ -1,8 +1,11 @@
 /** Every CSV table the tool writes, built from job results (one row per record, a header first). */
 import { vectorToLatLon } from "../../../geometry/ballCoords.js";
-import { csvRow } from "../../io/csvLine.js";
+import { csvLine } from "../../io/csv.js";
 import type { ScreenReport } from "../../screening/report.js";
 import type { ExplainedRow } from "../explain.js";
+
+/** One RFC 4180 record without its line end (formula cells neutralised: io/csvWriter.ts). */
+const csvRow = (values: readonly unknown[]) => csvLine(values).slice(0, -1);
 
 const SCREEN_COLUMNS = [
   "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "scoreIn", "seamArmSideIn", "seamVerticalIn", "seamClock",

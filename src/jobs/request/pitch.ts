@@ -29,7 +29,9 @@ import {
 import type { PitchEcho } from "../../screening/report.js";
 import { InputError } from "../../io/errors.js";
 import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../../geometry/units.js";
-import { parseJsonWithLines, type LocatedJson } from "../../io/jsonLines.js";
+import { parseStrictJson, type LocatedJson } from "../../io/json.js";
+import { quote } from "../../io/quote.js";
+import { errnoWords } from "../../io/writeErrors.js";
 import { projectRoot } from "../../version.js";
 import { parseNumber, type Request } from "./values.js";
 
@@ -74,6 +76,8 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string): Pit
       throw new InputError(`${where(field)}: field "${field}" is missing`);
     }
     if (typeof v !== "string") throw new InputError(`${where(field)}: "${field}" must be text, got ${JSON.stringify(v)}`);
+    // invisible, and no reading or name holds one: it came along from another file
+    if (v.includes("\ufeff")) throw new InputError(`${where(field)}: "${field}" ${quote(v)} holds a byte-order mark (U+FEFF, invisible); expected the text without it`);
     return v;
   };
   const num = (field: string, unit: string, fallback?: number): number => {
@@ -183,18 +187,23 @@ export interface PitchFile {
   readonly pitches: PitchInput[];
 }
 
-/** All pitches of a pitch file (one pitch or a staff). */
-export function pitchesFromFile(path: string): PitchFile {
-  let text: string;
+/**
+ * All pitches of a pitch file (one pitch or a staff), read as bytes and parsed as
+ * strict JSON (io/json.ts): not UTF-8, a duplicate key or a number out of range is
+ * one message with its line.
+ * @param label names the file in messages, e.g. `--pitch "staff.json"`.
+ */
+export function pitchesFromFile(path: string, label = `--pitch ${quote(path)}`): PitchFile {
+  let bytes: Uint8Array;
   try {
-    text = readFileSync(path, "utf8");
+    bytes = readFileSync(path);
   } catch (err) {
-    throw new InputError(`--pitch ${path}: cannot read the file (${(err as NodeJS.ErrnoException).code ?? "error"})`);
+    throw new InputError(`${label}: cannot read the file: ${errnoWords(err)}; expected a pitch file (JSON)`);
   }
-  const doc: LocatedJson = parseJsonWithLines(text, path);
+  const doc: LocatedJson = parseStrictJson(bytes, label);
   const at = (p: string) => {
     const line = doc.lineOf(p);
-    return `${path}${line ? ` line ${line}` : ""} (${p || "top level"})`;
+    return `${label}${line ? ` line ${line}` : ""} (${p || "top level"})`;
   };
   const v = doc.value;
   if (typeof v !== "object" || v === null || Array.isArray(v)) throw new InputError(`${at("")}: expected a pitch or a staff object`);
@@ -231,7 +240,7 @@ export function selectPitches(file: PitchFile, selector: string | undefined, sou
   const label = (p: PitchInput) => (p.echo.pitcher ? `${p.echo.pitcher}/${p.echo.name}` : p.echo.name);
   const found = file.pitches.filter((p) => label(p).toLowerCase() === key || p.echo.name.toLowerCase() === key);
   if (found.length === 0) {
-    throw new InputError(`--pitch-name "${selector}" is not in ${source}; expected one of ${file.pitches.map(label).join(", ")}`);
+    throw new InputError(`--pitch-name ${quote(selector)} is not in ${quote(source)}; expected one of ${file.pitches.map(label).join(", ")}`);
   }
   return found;
 }
@@ -251,7 +260,7 @@ export function pitchesFromRequest(request: Request): { team?: string; source?: 
   const file = request.demo ? demoStaffPath() : (request.pitch as string | undefined);
   if (file !== undefined) {
     if (given.length) throw new InputError(`--${given[0]} cannot be combined with ${request.demo ? "--demo" : "--pitch"}; the file describes the pitches`);
-    const pf = pitchesFromFile(file);
+    const pf = pitchesFromFile(file, request.demo ? `--demo ${quote(file)}` : `--pitch ${quote(file)}`);
     return { team: pf.team, source: file, pitches: selectPitches(pf, request["pitch-name"] as string | undefined, file) };
   }
   if (request["pitch-name"] !== undefined) throw new InputError(`--pitch-name needs --pitch FILE or --demo`);

@@ -9,6 +9,8 @@ import { findLandmarks, landmarkByName, type Landmark } from "../../../geometry/
 import { DEG } from "../../../geometry/units.js";
 import { norm3, type Vec3 } from "../../../geometry/vec.js";
 import { InputError } from "../../io/errors.js";
+import { parseDecimal } from "../../io/numbers.js";
+import { quote } from "../../io/quote.js";
 
 /** The options of one run, as typed: option name (without dashes) to value. */
 export type Request = Readonly<Record<string, unknown>>;
@@ -19,13 +21,20 @@ export function optionText(option: string, value: unknown): string {
   return String(value ?? "").trim();
 }
 
-/** A finite number from an option's text. */
+/** A path option's one value, as typed (not trimmed: a file name may have spaces). */
+export function optionPath(option: string, value: unknown): string {
+  if (Array.isArray(value)) throw new InputError(`--${option} was given ${value.length} times; expected it once`);
+  return String(value ?? "");
+}
+
+/**
+ * A finite number from an option's text, in decimal notation only (io/numbers.ts:
+ * no hexadecimal or other bases, NaN and Infinity are not numbers, an overflow is
+ * "too large").
+ */
 export function parseNumber(option: string, value: unknown, expected: string): number {
   if (Array.isArray(value)) throw new InputError(`--${option} was given ${value.length} times; give it once (${expected})`);
-  const text = String(value ?? "").trim();
-  const x = text === "" ? NaN : Number(text);
-  if (!Number.isFinite(x)) throw new InputError(`--${option} "${text}" is not a number; expected ${expected}`);
-  return x;
+  return parseDecimal(String(value ?? ""), `--${option}`, expected);
 }
 
 /** A whole number from an option's text. */
@@ -79,6 +88,9 @@ export interface ParsedAxis {
   readonly landmark?: string;
 }
 
+/** Latitude/longitude written with a sign as well as a letter ("-30N,40E"). */
+const SIGNED_LAT_LON = /^\s*([+-]?)\s*(\d+(?:\.\d+)?)\s*([NSns])\s*,\s*([+-]?)\s*(\d+(?:\.\d+)?)\s*([EWew])\s*$/;
+
 /**
  * A spin axis in the ball frame: "X,Y,Z" (any non-zero length), a landmark name
  * (see `seam-atlas landmarks`), or latitude/longitude "12.5N,45E".
@@ -86,7 +98,16 @@ export interface ParsedAxis {
 export function parseAxis(option: string, value: unknown, seamShape: number): ParsedAxis {
   const text = optionText(option, value);
   const expected = `X,Y,Z (three numbers, not all zero), a landmark name such as waist-A, or latitude,longitude such as 12.5N,45E`;
+  const given = `--${option} ${quote(text)}`;
   if (text === "") throw new InputError(`--${option} is empty; expected ${expected}`);
+  const signed = SIGNED_LAT_LON.exec(text);
+  if (signed && (signed[1] !== "" || signed[4] !== "")) {
+    // the letter gives the side; a minus sign as well is ambiguous, so say which letter is meant
+    const flip = (sign: string, letter: string, a: string, b: string) => (sign === "-" ? (letter.toUpperCase() === a ? b : a) : letter.toUpperCase());
+    const fixed = `${signed[2]}${flip(signed[1], signed[3], "N", "S")},${signed[5]}${flip(signed[4], signed[6], "E", "W")}`;
+    const part = signed[1] !== "" ? `the latitude ${signed[1]}${signed[2]}${signed[3]}` : `the longitude ${signed[4]}${signed[5]}${signed[6]}`;
+    throw new InputError(`${given}: ${part} has a sign; expected the letter alone to give the side (S for south, W for west), as in ${fixed}`);
+  }
   const latLon = (() => {
     try {
       return parseLatLon(text);
@@ -95,19 +116,18 @@ export function parseAxis(option: string, value: unknown, seamShape: number): Pa
     }
   })();
   if (latLon) return { vector: latLonToVector(latLon.latDeg, latLon.lonDeg), given: text };
-  if (/^[a-z]/i.test(text)) {
-    const landmarks = findLandmarks(seamShape);
-    const lm: Landmark | undefined = landmarkByName(landmarks, text);
-    if (!lm) {
-      throw new InputError(`--${option} "${text}" is not a landmark; expected one of ${landmarks.map((l) => l.name).join(", ")}, or X,Y,Z, or 12.5N,45E`);
-    }
-    return { vector: [...lm.direction] as Vec3, given: text, landmark: lm.name };
+  if (text.includes(",")) {
+    const parts = text.split(",");
+    if (parts.length !== 3) throw new InputError(`${given} has ${parts.length} part(s); expected ${expected}`);
+    const v = parts.map((p, i) => parseDecimal(p, `${given}: part ${i + 1}`, "three decimal numbers X,Y,Z, not all zero"));
+    const vector: Vec3 = [v[0], v[1], v[2]];
+    if (norm3(vector) < 1e-12) throw new InputError(`${given} is a zero vector; expected a direction, not all zero`);
+    return { vector, given: text };
   }
-  const parts = text.split(",").map((p) => p.trim());
-  if (parts.length !== 3) throw new InputError(`--${option} "${text}" has ${parts.length} part(s); expected ${expected}`);
-  const v = parts.map((p) => (p === "" ? NaN : Number(p)));
-  if (v.some((x) => !Number.isFinite(x))) throw new InputError(`--${option} "${text}" has a part that is not a number; expected ${expected}`);
-  const vector: Vec3 = [v[0], v[1], v[2]];
-  if (norm3(vector) < 1e-12) throw new InputError(`--${option} "${text}" is a zero vector; expected a direction, not all zero`);
-  return { vector, given: text };
+  const landmarks = findLandmarks(seamShape);
+  const lm: Landmark | undefined = landmarkByName(landmarks, text);
+  if (!lm) {
+    throw new InputError(`${given} is not a landmark; expected one of ${landmarks.map((l) => l.name).join(", ")}, or X,Y,Z, or 12.5N,45E`);
+  }
+  return { vector: [...lm.direction] as Vec3, given: text, landmark: lm.name };
 }

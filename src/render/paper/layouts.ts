@@ -13,6 +13,8 @@
  */
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { basename, join } from "node:path";
+import { InputError } from "../../io/errors.js";
+import { parseStrictJson } from "../../io/json.js";
 
 export type LayoutKind = "card" | "sheet" | "atlas" | "handout";
 
@@ -153,11 +155,19 @@ export function loadLayout(dir: string, name: string, seen: readonly string[] = 
   const file = join(dir, `${name}.json`);
   if (!existsSync(file)) throw new LayoutError(`layout "${name}" not found in ${dir}; expected one of ${listLayouts(dir).join(", ")}`);
   if (seen.includes(name)) throw new LayoutError(`layout ${file}: refers back to itself through ${seen.join(" -> ")}`);
+  let bytes: Uint8Array;
+  try {
+    bytes = readFileSync(file);
+  } catch (err) {
+    throw new LayoutError(`layout ${file}: cannot read the file (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
+  }
   let raw: unknown;
   try {
-    raw = JSON.parse(readFileSync(file, "utf8"));
+    raw = parseStrictJson(bytes, `layout ${file}`).value;
   } catch (err) {
-    throw new LayoutError(`layout ${file}: not valid JSON (${(err as Error).message})`);
+    // strict JSON's message names the file and the line
+    if (err instanceof InputError) throw new LayoutError(err.message);
+    throw err;
   }
   const layout = validateLayout(raw, basename(file), (other) => loadLayout(dir, other, [...seen, name]));
   if (layout.name !== name) throw new LayoutError(`layout ${file}: "name" is "${layout.name}" but the file is ${name}.json`);
