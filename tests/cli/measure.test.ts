@@ -2,7 +2,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } fro
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { runCli } from "./run.js";
+import { runCli } from "../support/cli.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-measure-"));
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { ballToFlowAtPhase, ballToFlowQuaternionAtPhaseZero } from "../../geometry/flow.js";
 import { quat, vec3, newVec3 } from "../../geometry/vec.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { lcg, randomUnit } from "../support/random.js";
 
 const apply = (m: Float64Array, p: readonly number[]) => [
   m[0] * p[0] + m[3] * p[1] + m[6] * p[2],

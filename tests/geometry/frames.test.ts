@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { armSideDirection, spinAxisFromTilt, spinEfficiency, tiltFromSpinAxis, gyroFromEfficiency } from "../../geometry/frames.js";
 import { clockToAngle, formatClock, parseClock, angleToClock } from "../../geometry/clock.js";
 import { cross3 } from "../../geometry/vec.js";
-import { lcg } from "../helpers.js";
+import { lcg } from "../support/random.js";
 import { DEG } from "../../geometry/units.js";
 
 const close3 = (a: readonly number[], b: readonly number[], tol: number) => a.forEach((v, i) => expect(Math.abs(v - b[i])).toBeLessThan(tol));

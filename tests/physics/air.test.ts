@@ -9,7 +9,7 @@ import {
   sutherlandViscosity,
 } from "../../src/physics/air.js";
 import { M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 describe("U.S. Standard Atmosphere 1976, troposphere", () => {
   // U.S. Standard Atmosphere, 1976, tabulated density at geometric altitude.

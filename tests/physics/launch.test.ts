@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { PLATE_FRONT_Y_M, RUBBER_Y_M } from "../../src/physics/field.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { M_PER_FT, M_PER_IN, M_PER_S_PER_MPH, DEG } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 describe("field geometry (Official Baseball Rules 2.01, 2.02, 2.04)", () => {
   it("rubber to rear point of home plate is 60 ft 6 in = 18.4404 m within 1e-12 m", () => {

@@ -5,7 +5,7 @@ import { simulateFlight, type Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
 import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const MASS_KG = 0.145;
 const noSpin: Launch = {

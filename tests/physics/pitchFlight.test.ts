@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { clockToAngle, parseClock } from "../../geometry/clock.js";
 import { flyPitch, spinVector, ZONE_CENTRE_M } from "../../src/physics/pitchFlight.js";
 import type { Pitch } from "../../src/screening/pitch.js";
-import { sinkerPitch } from "../helpers.js";
+import { sinkerPitch } from "../support/pitches.js";
 import { DEG } from "../../geometry/units.js";
 
 const fastball: Pitch = sinkerPitch({ name: "four-seam", speedMPerS: 94 * 0.44704, spinRadPerS: (2350 * 2 * Math.PI) / 60, tiltRad: clockToAngle(parseClock("12:45")), gyroRad: 0, want: "any" });

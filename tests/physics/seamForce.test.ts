@@ -21,8 +21,8 @@ import {
   potentialPressureCoefficient,
   sideCoefficientFromSeparation,
 } from "../../src/physics/wakePressure.js";
-import { lcg, randomUnit } from "../helpers.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { lcg, randomUnit } from "../support/random.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 type V3 = [number, number, number];
 const model = seamForceModel();

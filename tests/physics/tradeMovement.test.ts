@@ -18,7 +18,7 @@ import {
 import { tradeMovementParts } from "../../src/physics/tradeMovementParts.js";
 import { recordFlight, type TrajectorySamples } from "../../src/physics/trajectory.js";
 import { DEG as RAD_PER_DEG, M_PER_FT, M_PER_IN, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const G = 9.80665;
 type V3 = [number, number, number];

@@ -6,7 +6,7 @@ import { bandFromDegrees, DEFAULT_BAND } from "../../src/sampling/band.js";
 import { bandAveragesBrute } from "../../src/sampling/brute.js";
 import { bandAveragesExact } from "../../src/sampling/exact.js";
 import { computeSphereMap } from "../../src/sampling/sphereMap.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { lcg, randomUnit } from "../support/random.js";
 import { DEG } from "../../geometry/units.js";
 
 const KEYS = ["seamInBand", "axisPlus", "axisMinus", "magnusPlus", "magnusMinus", "alongAxis", "alongMagnus", "magnitude"] as const;

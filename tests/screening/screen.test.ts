@@ -10,7 +10,7 @@ import { pitchFrame, pushInField, scoreFactor, type Pitch } from "../../src/scre
 import { robustness } from "../../src/screening/robustness.js";
 import { screenPitch, symmetricAngle } from "../../src/screening/screen.js";
 import { DEFAULT_BAND } from "../../src/sampling/band.js";
-import { sinkerPitch } from "../helpers.js";
+import { sinkerPitch } from "../support/pitches.js";
 import { DEG } from "../../geometry/units.js";
 
 const pitch = (over: Partial<Pitch> = {}): Pitch => sinkerPitch({ name: "test", ...over });

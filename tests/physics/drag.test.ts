@@ -8,7 +8,7 @@ import {
   parseLiftModelName,
 } from "../../src/physics/aero.js";
 import { crossSectionM2 } from "../../geometry/ball.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const sawicki = { name: "sawicki" } as const;
 const giordano = { name: "giordano" } as const;

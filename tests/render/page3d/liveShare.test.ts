@@ -1,15 +1,15 @@
 import { Quaternion, Vector3 } from "three";
 import { describe, expect, it } from "vitest";
-import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
-import { type Vec3 } from "../../geometry/vec.js";
-import { DEG } from "../../geometry/units.js";
-import { DEFAULT_BAND } from "../../src/sampling/band.js";
-import { SPLIT_TIE } from "../../src/sampling/exact.js";
-import { measureOrientation, seamFor, TIMELINE_STEPS } from "../../src/sampling/measure.js";
-import { pitchFrame } from "../../src/screening/pitch.js";
-import { LiveSeamShares, SEAM_IN_BAND_MINUS, SEAM_IN_BAND_ON_SPLIT, SEAM_IN_BAND_PLUS, SEAM_OUT_OF_BAND } from "../../src/render/page3d/liveShare.js";
-import { BallPose, fieldToWorld, FIELD_TO_WORLD, flowSpinAxis, flowToFieldQuaternion } from "../../src/render/page3d/sceneMath.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { DEFAULT_SEAM_SHAPE } from "../../../geometry/seamCurve.js";
+import { type Vec3 } from "../../../geometry/vec.js";
+import { DEG } from "../../../geometry/units.js";
+import { DEFAULT_BAND } from "../../../src/sampling/band.js";
+import { SPLIT_TIE } from "../../../src/sampling/exact.js";
+import { measureOrientation, seamFor, TIMELINE_STEPS } from "../../../src/sampling/measure.js";
+import { pitchFrame } from "../../../src/screening/pitch.js";
+import { LiveSeamShares, SEAM_IN_BAND_MINUS, SEAM_IN_BAND_ON_SPLIT, SEAM_IN_BAND_PLUS, SEAM_OUT_OF_BAND } from "../../../src/render/page3d/liveShare.js";
+import { BallPose, fieldToWorld, FIELD_TO_WORLD, flowSpinAxis, flowToFieldQuaternion } from "../../../src/render/page3d/sceneMath.js";
+import { lcg, randomUnit } from "../../support/random.js";
 
 const SEAM_POINTS = 1024;
 const seam = seamFor(DEFAULT_SEAM_SHAPE, SEAM_POINTS);

@@ -8,19 +8,19 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEG } from "../../geometry/units.js";
-import { formatScore as fmtScore, percent } from "../../src/render/numbers.js";
-import { parseScreen, runScreen } from "../../src/jobs/screen.js";
-import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, bandFromDegrees } from "../../src/sampling/band.js";
-import { measureOrientation } from "../../src/sampling/measure.js";
-import { DEFAULT_FINGER_SPACING_IN } from "../../src/screening/hand.js";
-import type { OrientationReport } from "../../src/screening/report.js";
-import { DEFAULT_SPREAD_DEG } from "../../src/screening/robustness.js";
-import { bundledPackages } from "../../src/build/licences.js";
-import { buildViewHtml, cspHash, viewData } from "../../src/render/page3d/build.js";
-import type { ViewData } from "../../src/render/page3d/data.js";
-import { CAUTION_TEXT, renderViewHtml } from "../../src/render/page3d/html.js";
-import { PAGE_CSS } from "../../src/render/page3d/styles.js";
+import { DEG } from "../../../geometry/units.js";
+import { formatScore as fmtScore, percent } from "../../../src/render/numbers.js";
+import { parseScreen, runScreen } from "../../../src/jobs/screen.js";
+import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, bandFromDegrees } from "../../../src/sampling/band.js";
+import { measureOrientation } from "../../../src/sampling/measure.js";
+import { DEFAULT_FINGER_SPACING_IN } from "../../../src/screening/hand.js";
+import type { OrientationReport } from "../../../src/screening/report.js";
+import { DEFAULT_SPREAD_DEG } from "../../../src/screening/robustness.js";
+import { bundledPackages } from "../../../src/build/licences.js";
+import { buildViewHtml, cspHash, viewData } from "../../../src/render/page3d/build.js";
+import type { ViewData } from "../../../src/render/page3d/data.js";
+import { CAUTION_TEXT, renderViewHtml } from "../../../src/render/page3d/html.js";
+import { PAGE_CSS } from "../../../src/render/page3d/styles.js";
 import {
   canvasPixels,
   CHROMIUM_PATH,
@@ -34,8 +34,8 @@ import {
   shownFigures,
   viewState,
   type OpenedPage,
-} from "./browser.js";
-import { ROOT } from "../cli/run.js";
+} from "../../support/browser.js";
+import { ROOT } from "../../support/cli.js";
 
 const BROWSER_TIMEOUT_MS = 120_000;
 /** The demo staff at a 6 deg grid, as `view --demo --grid 6` would screen it (yargs' defaults spelled out). */
