@@ -41,19 +41,6 @@ describe("arc-length samples", () => {
     }
   });
 
-  it("solid-angle routine gives 2 pi (1 - cos 30 deg) for a 30 deg cap (Archimedes), to 1e-6", () => {
-    const n = 4096;
-    const pts = new Float64Array(3 * n);
-    const r = Math.sin(Math.PI / 6);
-    for (let i = 0; i < n; i++) {
-      const phi = (2 * Math.PI * i) / n;
-      pts[3 * i] = r * Math.cos(phi);
-      pts[3 * i + 1] = r * Math.sin(phi);
-      pts[3 * i + 2] = Math.cos(Math.PI / 6);
-    }
-    expect(Math.abs(enclosedArea(pts, [0, 0, 1]) - 2 * Math.PI * (1 - Math.cos(Math.PI / 6)))).toBeLessThan(1e-6);
-  });
-
   it("reject counts that are not multiples of 4 or out of range", () => {
     for (const n of [63, 1022, 0, 1e7, 2.5]) expect(() => assertSeamPointCount(n)).toThrow(/seam points/);
     expect(() => assertSeamPointCount(2048)).not.toThrow();

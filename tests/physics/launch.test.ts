@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { M_PER_FT, M_PER_S_PER_MPH, DEG } from "../../geometry/units.js";
 import { expectAbsolute, expectRelative } from "../support/tolerance.js";
+import { uniform } from "../support/arbitraries.js";
 
 describe("release point", () => {
   it("defaults to 6 ft extension (y = 54.5 ft; a typical extension is about 6 to 6.3 ft, common practice, no source), 6 ft height, 1.5 ft toward a right-hander's arm side (x < 0) within 1e-12 m", () => {
@@ -34,9 +35,9 @@ describe("release velocity from speed and angles", () => {
   it("returns the speed and both angles for 300 random launches (speed 10-49 m/s, vertical -20 to 20 deg, horizontal -10 to 10 deg) within 1e-12 (spherical angles, closed form)", () => {
     fc.assert(
       fc.property(
-        fc.double({ min: 10, max: 49, noNaN: true }),
-        fc.double({ min: -20, max: 20, noNaN: true }),
-        fc.double({ min: -10, max: 10, noNaN: true }),
+        uniform(10, 49),
+        uniform(-20, 20),
+        uniform(-10, 10),
         (speed, upDeg, sideDeg) => {
           const [vx, vy, vz] = releaseVelocity(speed, upDeg * DEG, sideDeg * DEG);
           expectRelative(Math.hypot(vx, vy, vz), speed, 1e-12);
