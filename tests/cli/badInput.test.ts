@@ -11,7 +11,7 @@ import { linkSync, lstatSync, mkdirSync, mkdtempSync, readdirSync, readFileSync,
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { ROOT, runCli } from "./run.js";
+import { ROOT, runCli } from "../support/cli.js";
 
 const SINKER = ["--hand", "right", "--speed", "92", "--spin", "2150", "--tilt", "1:45", "--gyro", "10", "--want", "arm"];
 /** One pitch, one field a line (line 1 "{", line 2 "name", ... line 6 "tilt"). */

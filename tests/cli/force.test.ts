@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { runCli } from "./run.js";
+import { runCli } from "../support/cli.js";
 
 describe("seam-atlas force", () => {
   it("gives 360 phases of the side force in newtons and coefficients, the four separation angles, and the turn average with the same keys", () => {

@@ -10,9 +10,9 @@ import { mkdtempSync, readdirSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { lcg } from "../helpers.js";
+import { lcg } from "../support/random.js";
 import { mutant } from "../mutate.js";
-import { runCliAsync, type CliRun } from "./run.js";
+import { runCliAsync, type CliRun } from "../support/cli.js";
 
 /** Mutants per input. */
 const CASES = 150;

@@ -10,7 +10,7 @@ import { execFileSync, spawn } from "node:child_process";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { BIN, runCli, runCliAsync } from "./run.js";
+import { BIN, runCli, runCliAsync } from "../support/cli.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-output-"));
 const MEASURE = ["measure", "--axis", "lobe-B1"];

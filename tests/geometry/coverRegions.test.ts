@@ -3,7 +3,7 @@ import { coverHalf, coverModel, coverRegion } from "../../geometry/coverRegions.
 import { findLandmarks } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE, seamPoint } from "../../geometry/seamCurve.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { lcg, randomUnit } from "../support/random.js";
 
 const model = coverModel(DEFAULT_SEAM_SHAPE);
 

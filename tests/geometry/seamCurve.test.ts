@@ -4,6 +4,18 @@ import { BALL_CIRCUMFERENCE_IN, COVER_WAIST_ARC_IN } from "../../geometry/ball.j
 import { sampleSeam, seamLength } from "../../geometry/seamSamples.js";
 import { DEG } from "../../geometry/units.js";
 
+// The published two-harmonic seam curve (mathcurve.com, "seam line of a tennis ball";
+// Allison, Diaz & Miller, "Generalized Baseball Curves", MAA Loci, 2008):
+//   x = a cos t + b cos 3t,  y = a sin t - b sin 3t,  z = 2 sqrt(ab) sin 2t,  a + b = 1.
+
+/** |c'(t)| written out from the published parametrisation, independently of geometry/seamCurve.ts. */
+function publishedSpeed(b: number, t: number): number {
+  const a = 1 - b;
+  const dx = -a * Math.sin(t) - 3 * b * Math.sin(3 * t);
+  const dy = a * Math.cos(t) - 3 * b * Math.cos(3 * t);
+  const dz = 4 * Math.sqrt(a * b) * Math.cos(2 * t);
+  return Math.hypot(dx, dy, dz);
+}
 
 describe("seam curve", () => {
   it("lies on the unit sphere for every b (published identity x^2 + y^2 + z^2 = (a + b)^2), to 1e-15", () => {
@@ -24,17 +36,28 @@ describe("seam curve", () => {
     }
   });
 
-  it("has unit-sphere length 10.166876 at b = 1/4 and 10.832930 at b = 0.3 (REFERENCES.md, derived by quadrature), to 1e-6", () => {
+  it("has unit-sphere length 10.166876 at b = 1/4 and 10.832930 at b = 0.3 (derived: quadrature of the published curve's speed), to 1e-6", () => {
     expect(seamLength(0.25)).toBeCloseTo(10.166876, 6);
     expect(seamLength(0.3)).toBeCloseTo(10.83293, 6);
   });
 
-  it("speed closed form matches the tangent's length to 1e-14", () => {
+  it("has the length a periodic trapezoid rule on the published parametrisation gives (4096 nodes, spectrally accurate for a smooth periodic speed), for b from 0.05 to 0.45, to 1e-12 relative", () => {
+    for (const b of [0.05, 0.25, DEFAULT_SEAM_SHAPE, 0.45]) {
+      const n = 4096;
+      let sum = 0;
+      for (let i = 0; i < n; i++) sum += publishedSpeed(b, (2 * Math.PI * i) / n);
+      const trapezoid = (2 * Math.PI * sum) / n;
+      expect(Math.abs(seamLength(b) - trapezoid) / trapezoid).toBeLessThan(1e-12);
+    }
+  });
+
+  it("speed closed form |c'|^2 = a^2 + 9b^2 - 6ab cos 4t + 16ab cos^2 2t matches the tangent's length and the published parametrisation's speed to 1e-14", () => {
     const d = [0, 0, 0];
     for (let i = 0; i < 100; i++) {
       const t = i * 0.0731;
       seamTangent(0.3, t, d);
       expect(Math.abs(Math.hypot(d[0], d[1], d[2]) - seamSpeed(0.3, t))).toBeLessThan(1e-14);
+      expect(Math.abs(publishedSpeed(0.3, t) - seamSpeed(0.3, t))).toBeLessThan(1e-14);
     }
   });
 
@@ -52,11 +75,11 @@ describe("seam curve", () => {
     }
   });
 
-  it("tip-to-tip angle across the waist is 60 deg at b = 1/4 (REFERENCES.md: 2 arccos(2 sqrt(ab)), derived)", () => {
+  it("tip-to-tip angle across the waist is 60 deg at b = 1/4 (derived from the published curve: tips at height 2 sqrt(ab), so the angle is 2 arccos(2 sqrt(ab)))", () => {
     expect(waistTipAngleRad(0.25) / DEG).toBeCloseTo(60, 10);
   });
 
-  it("default b reproduces Thompson's 1 3/16 in waist arc on a 9 1/8 in ball (Thompson, College Math. J. 1998) and is about 0.301 (REFERENCES.md)", () => {
+  it("default b reproduces Thompson's 1 3/16 in waist arc on a 9 1/8 in ball (R. B. Thompson, \"Designing a Baseball Cover\", College Math. J. 29(1), 1998) and is about 0.301 (derived from that arc), to 1e-12 in", () => {
     const radiusIn = BALL_CIRCUMFERENCE_IN / (2 * Math.PI);
     expect(waistTipAngleRad(DEFAULT_SEAM_SHAPE) * radiusIn).toBeCloseTo(COVER_WAIST_ARC_IN, 12);
     expect(DEFAULT_SEAM_SHAPE).toBeCloseTo(0.301, 3);

@@ -4,6 +4,11 @@ import { sampleSeam } from "../../geometry/seamSamples.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../geometry/symmetry.js";
 import { angleToSeam } from "../../geometry/landmarks.js";
 
+// The published two-harmonic seam curve and its symmetries (mathcurve.com, "seam line of a
+// tennis ball"; Allison, Diaz & Miller, "Generalized Baseball Curves", MAA Loci, 2008): the
+// half-turns about x, y and z map the curve to itself, only those about x and y swap its two
+// congruent halves, and with the rotoreflection (x, y, z) -> (-y, x, -z) the group has order 8.
+
 const mul = (p: readonly number[], q: readonly number[]) => {
   const r: number[] = [];
   for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) r.push(p[3 * i] * q[j] + p[3 * i + 1] * q[3 + j] + p[3 * i + 2] * q[6 + j]);

@@ -14,7 +14,7 @@ import { isBadRecord, readCsv } from "../../src/io/csv.js";
 import { InputError } from "../../src/io/errors.js";
 import { parseStrictJson } from "../../src/io/json.js";
 import { parseDecimal } from "../../src/io/numbers.js";
-import { lcg } from "../helpers.js";
+import { lcg } from "../support/random.js";
 import { mutant } from "../mutate.js";
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");

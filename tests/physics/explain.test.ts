@@ -6,7 +6,7 @@ import { releasePosition } from "../../src/physics/launch.js";
 import { flyPitch } from "../../src/physics/pitchFlight.js";
 import { toArmSide } from "../../geometry/frames.js";
 import { symmetricAngle } from "../../src/screening/screen.js";
-import { sinkerPitch } from "../helpers.js";
+import { sinkerPitch } from "../support/pitches.js";
 import { DEG } from "../../geometry/units.js";
 
 const sinker = sinkerPitch();

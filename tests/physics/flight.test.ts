@@ -5,7 +5,7 @@ import { PLATE_FRONT_Y_M } from "../../src/physics/field.js";
 import { simulateFlight, type Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const G = 9.80665;
 const seaLevel = airState();

@@ -5,7 +5,7 @@ import { simulateFlight, type Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
 import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const MASS_KG = 0.145;
 const noSpin: Launch = {
@@ -69,25 +69,5 @@ describe("movement split into Magnus and seam parts", () => {
     expectAbsolute(plain.seamBreakM.xM, 0, 1e-15);
     expectAbsolute(plain.seamBreakM.zM, 0, 1e-15);
     expectAbsolute(plain.breakM.zM, plain.magnusBreakM.zM, 1e-15);
-  });
-});
-
-describe("exponential spin decay (off by default)", () => {
-  const launch: Launch = { ...noSpin, spinRadPerS: [-2300 * RAD_PER_S_PER_RPM, 0, 0] };
-
-  it("spin at the plate is omega0 exp(-t / tau) for tau = 2 s within 1e-12 relative (closed form)", () => {
-    const r = simulateFlight(launch, { spinDecayTimeConstantS: 2 });
-    expectRelative(r.spinAtPlateRadPerS[0], launch.spinRadPerS[0] * Math.exp(-r.timeToPlateS / 2), 1e-12);
-  });
-
-  it("decaying spin gives less backspin rise than constant spin", () => {
-    const steady = movementVersusSpinless(launch).breakM.zM;
-    const decaying = movementVersusSpinless(launch, { spinDecayTimeConstantS: 2 }).breakM.zM;
-    expect(decaying).toBeLessThan(steady);
-    expect(decaying).toBeGreaterThan(0);
-  });
-
-  it("rejects a time constant of 0 s", () => {
-    expect(() => simulateFlight(launch, { spinDecayTimeConstantS: 0 })).toThrow(/spin decay time constant 0 s/);
   });
 });

@@ -4,7 +4,7 @@ import { flyPitch, spinVector, ZONE_CENTRE_M } from "../../src/physics/pitchFlig
 import { seamModel } from "../../src/physics/seamModel/model.js";
 import { resolveProfile } from "../../src/physics/seamModel/parameters.js";
 import type { Pitch } from "../../src/screening/pitch.js";
-import { sinkerPitch } from "../helpers.js";
+import { sinkerPitch } from "../support/pitches.js";
 import { DEG } from "../../geometry/units.js";
 
 const model = seamModel();

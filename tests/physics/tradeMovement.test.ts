@@ -6,7 +6,6 @@ import { PLATE_FRONT_Y_M } from "../../src/physics/field.js";
 import type { Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
-import { compareMovementDirections } from "../../src/physics/movementDirection.js";
 import { aimLaunch } from "../../src/physics/pitchFlight.js";
 import {
   armSideBreakM,
@@ -18,7 +17,7 @@ import {
 import { tradeMovementParts } from "../../src/physics/tradeMovementParts.js";
 import { recordFlight, type TrajectorySamples } from "../../src/physics/trajectory.js";
 import { DEG as RAD_PER_DEG, M_PER_FT, M_PER_IN, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const G = 9.80665;
 type V3 = [number, number, number];
@@ -63,7 +62,7 @@ describe("constant-acceleration flight: the fit gives the closed-form break exac
   // Closed form x = x0 + v t + a t^2 / 2, so over the window [t_w, t_p] the break is a T^2 / 2 (T = t_p - t_w).
   // The definition (quadratic fit over the window, break a T^2 / 2, gravity removed from z) is A. M. Nathan's
   // notes on determining pitch movement from tracking data (from memory); the 50 ft and 40 ft window starts
-  // are common practice (from memory). REFERENCES.md "Movement as the trade reads it".
+  // are common practice (from memory).
   const p0: V3 = [-0.55, 55 * M_PER_FT, 1.85];
   const v: V3 = [1.2, -41.5, -1.4];
   const cases: { name: string; a: V3 }[] = [
@@ -123,9 +122,8 @@ describe("constant-acceleration flight: the fit gives the closed-form break exac
   });
 });
 
-// A typical four-seam fastball (REFERENCES.md "The field": 92-96 mph, 2200-2400 rpm;
-// common practice, from memory): 95 mph, 2400 rpm, tilt 12:00, spin efficiency 90 %
-// (four-seamers usually run about 85-95 %: common practice, no source; gyro +25.8 deg),
+// A typical four-seam fastball (92-96 mph, 2200-2400 rpm: common practice, from memory):
+// 95 mph, 2400 rpm, tilt 12:00, spin efficiency 90 % (four-seamers usually run about 85-95 %: common practice, no source; gyro +25.8 deg),
 // a right-hander's default release, aimed at the middle of the zone.
 const FASTBALL_SPEED_M_PER_S = 95 * M_PER_S_PER_MPH;
 function pitchLaunch(hand: Hand, tilt: string, view: ClockView, rpm: number, speedMPerS = FASTBALL_SPEED_M_PER_S, gyroRad = 0): Launch {
@@ -145,7 +143,8 @@ describe("a 95 mph, 2400 rpm four-seam fastball, tilt 12:00 (gravity, Giordano d
   const typical = tradeMovement(recordFlight(pitchLaunch("right", "12:00", "pitcher", 2400, FASTBALL_SPEED_M_PER_S, Math.acos(0.9))).samples);
 
   it("at 90 % efficiency has an induced vertical break in the trade's four-seam range, 14-19 in at the 50 ft window, and under 1 in of horizontal break", () => {
-    // REFERENCES.md "Movement as the trade reads it": four-seam about 14-19 in (common practice, from memory).
+    // Typical induced vertical break of a right-hander's four-seam fastball over the 50 ft window:
+    // about 14-19 in (common practice, from memory).
     // Tolerance: the range itself. The lift law (Sawicki et al. 2003, from memory) is uncertain by
     // more than the range's width, so a tighter claim would test the recalled numbers, not the code;
     // 2400 rpm at 90 % efficiency is near the top of the usual spin, so the upper half is expected.
@@ -260,91 +259,4 @@ describe("drag and gravity on their own", () => {
     expect(m.inducedVerticalBreakM).toBeGreaterThan(0);
   });
 
-  it("a constant 0.05 N seam force with drag off has the closed-form seam part (F / m) T^2 / 2 within 1e-9 relative", () => {
-    // Closed form: without drag and Magnus the seamOnly flight is the spinless one plus a constant F/m
-    // along +x; the force does not touch y, so the two share the window time T.
-    const hook = (_input: unknown, forceN: Float64Array) => void (forceN[0] = 0.05);
-    const parts = tradeMovementParts(straight, { seamForce: hook, drag: { name: "constant", dragCoefficient: 0 } });
-    const T = parts.spinless.windowTimeS;
-    expectRelative(parts.seamM.horizontalBreakM, (0.05 / BALL_MASS_KG) * 0.5 * T * T, 1e-9);
-    expectAbsolute(parts.seamM.inducedVerticalBreakM, 0, 1e-12);
-    expectAbsolute(parts.dragM.horizontalBreakM, 0, 1e-12);
-    expectAbsolute(parts.dragM.inducedVerticalBreakM, 0, 1e-9);
-  });
-
-  it("with drag, Magnus and a seam force, the parts add up to the whole: interaction under 1 % of the break (small-perturbation superposition)", () => {
-    const hook = (_input: unknown, forceN: Float64Array) => void (forceN[0] = 0.05);
-    const parts = tradeMovementParts(straight, { seamForce: hook });
-    const total = Math.hypot(parts.total.horizontalBreakM, parts.total.inducedVerticalBreakM);
-    expect(Math.hypot(parts.interactionM.horizontalBreakM, parts.interactionM.inducedVerticalBreakM)).toBeLessThan(0.01 * total);
-    // the drag part is the spinless flight's own trade break, on the same window
-    const spinless = tradeMovement(recordFlight(straight, { magnus: false }).samples);
-    expect(parts.dragM.horizontalBreakM).toBe(spinless.horizontalBreakM);
-    expect(parts.dragM.inducedVerticalBreakM).toBe(spinless.inducedVerticalBreakM);
-    expect(parts.seamM.horizontalBreakM).toBeGreaterThan(0.5 * M_PER_IN);
-    expect(parts.magnusM.inducedVerticalBreakM).toBeGreaterThan(10 * M_PER_IN);
-    // without a hook: no seam part, no interaction, two flights
-    const plain = tradeMovementParts(straight);
-    expect(plain.seamM).toEqual({ horizontalBreakM: 0, inducedVerticalBreakM: 0 });
-    expect(plain.interactionM).toEqual({ horizontalBreakM: 0, inducedVerticalBreakM: 0 });
-    expect(plain.flights.magnusOnly).toBe(plain.flights.full);
-  });
-});
-
-describe("spin-based against observed direction on the clock (geometry/frames.ts: 12:00 up, 3:00 the viewer's right)", () => {
-  const up = { horizontalM: 0, verticalM: 0.4 };
-  const plusX = { horizontalM: 0.3, verticalM: 0 };
-  const minusX = { horizontalM: -0.3, verticalM: 0 };
-  const down = { horizontalM: 0, verticalM: -0.1 };
-
-  it("reads 12:00 up and 6:00 down in both views; -x is 3:00 from behind the pitcher, +x from behind the catcher", () => {
-    const p = compareMovementDirections(up, minusX, "pitcher");
-    expect(p.spinBased).toEqual({ minutes: 0, text: "12:00" });
-    expect(p.observed).toEqual({ minutes: 180, text: "3:00" });
-    expect(compareMovementDirections(plusX, down, "pitcher").spinBased?.text).toBe("9:00");
-    const c = compareMovementDirections(down, plusX, "catcher");
-    expect(c.spinBased?.text).toBe("6:00");
-    expect(c.observed?.text).toBe("3:00");
-    // up and to -x (a right-hander's arm side) at 45 deg: 1:30 from behind the pitcher, 10:30 from behind the catcher
-    const armSideUp = { horizontalM: -0.2, verticalM: 0.2 };
-    expect(compareMovementDirections(armSideUp, up, "pitcher").spinBased).toEqual({ minutes: 90, text: "1:30" });
-    expect(compareMovementDirections(armSideUp, up, "catcher").spinBased).toEqual({ minutes: 630, text: "10:30" });
-  });
-
-  it("gives the signed gap across 12:00: 11:50 to 12:10 is +20 min (+10 deg) clockwise, the reverse -20 min, mirrored in the other view", () => {
-    // 10 minutes of clock is 5 deg from 12:00: from behind the pitcher 11:50 leans to +x, 12:10 to -x
-    const tilt = (minutes: number, view: ClockView) => {
-      const a = clockToAngle(minutes);
-      const right = view === "pitcher" ? -1 : 1;
-      return { horizontalM: right * 0.3 * Math.sin(a), verticalM: 0.3 * Math.cos(a) };
-    };
-    const spin = tilt(710, "pitcher");
-    const observed = tilt(10, "pitcher");
-    const p = compareMovementDirections(spin, observed, "pitcher");
-    expect(p.spinBased?.text).toBe("11:50");
-    expect(p.observed?.text).toBe("12:10");
-    expectAbsolute(p.differenceMinutes!, 20, 1e-9);
-    expectAbsolute(p.differenceDeg!, 10, 1e-9);
-    expectAbsolute(compareMovementDirections(observed, spin, "pitcher").differenceMinutes!, -20, 1e-9);
-    const c = compareMovementDirections(spin, observed, "catcher");
-    expect(c.spinBased?.text).toBe("12:10");
-    expect(c.observed?.text).toBe("11:50");
-    expectAbsolute(c.differenceMinutes!, -20, 1e-9);
-  });
-
-  it("puts opposite directions 360 minutes (180 deg) apart, and a (near) zero vector has no direction", () => {
-    const opposite = compareMovementDirections(up, down, "pitcher");
-    expect(opposite.differenceMinutes).toBe(360);
-    expect(opposite.differenceDeg).toBe(180);
-    const none = compareMovementDirections({ horizontalM: 1e-8, verticalM: 0 }, up, "catcher");
-    expect(none.spinBased).toBeNull();
-    expect(none.observed?.text).toBe("12:00");
-    expect(none.differenceMinutes).toBeNull();
-    expect(none.differenceDeg).toBeNull();
-  });
-
-  it("rejects an unknown view and a non-finite movement (one-line RangeError)", () => {
-    expect(() => compareMovementDirections(up, down, "umpire" as ClockView)).toThrow(/^clock view "umpire"/);
-    expect(() => compareMovementDirections(up, { horizontalM: NaN, verticalM: 0 }, "pitcher")).toThrow(/^observed movement \(NaN, 0\) m/);
-  });
 });

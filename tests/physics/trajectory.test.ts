@@ -5,7 +5,7 @@ import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
 import { recordFlight, TrajectoryRecorder } from "../../src/physics/trajectory.js";
 import { DEG as RAD_PER_DEG, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const G = 9.80665;
 const launch: Launch = {

@@ -11,7 +11,7 @@ import { DEFAULT_BAND } from "../../src/sampling/band.js";
 import { renderBallSvg, type BallModel } from "../../src/render/ballDrawing.js";
 import { SEAM_HALF_WIDTH_RAD } from "../../src/render/ballSeam.js";
 import { projectPoint, viewFromDirections, viewLookingAlong, type View } from "../../src/render/projection.js";
-import { elements, shoelaceArea, subpaths, texts, xmlProblems } from "./svgCheck.js";
+import { elements, shoelaceArea, subpaths, texts, xmlProblems } from "../support/svgCheck.js";
 
 const b = DEFAULT_SEAM_SHAPE;
 const SIZE_PX = 360;

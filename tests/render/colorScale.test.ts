@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { hexToOklab, oklabToHex, rampColor, VERDIGRIS_ANCHORS } from "../../src/render/colorScale.js";
-import { lcg } from "../helpers.js";
+import { lcg } from "../support/random.js";
 
 describe("the verdigris colour scale in OKLab", () => {
   it("maps sRGB white to L = 1, a = b = 0 and black to 0 (Ottosson 2020: OKLab is normalised so), to 1e-6", () => {

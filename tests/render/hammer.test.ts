@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "../../src/render/hammer.js";
-import { shoelaceArea } from "./svgCheck.js";
+import { shoelaceArea } from "../support/svgCheck.js";
 import { DEG } from "../../geometry/units.js";
 
 

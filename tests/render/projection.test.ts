@@ -6,7 +6,7 @@ import { cross3, dot3, mat3, newQuat, quat, type Vec3 } from "../../geometry/vec
 import {
   depthRuns, projectPoint, projectPoints, viewFromDirections, viewFromRotation, viewLookingAlong, type DiscPlacement,
 } from "../../src/render/projection.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { lcg, randomUnit } from "../support/random.js";
 
 const lm = findLandmarks(DEFAULT_SEAM_SHAPE);
 const dir = (name: string) => landmarkByName(lm, name)!.direction;

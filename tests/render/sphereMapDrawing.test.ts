@@ -3,7 +3,7 @@ import { equalAreaGrid } from "../../geometry/sphereGrid.js";
 import { rampColor } from "../../src/render/colorScale.js";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject } from "../../src/render/hammer.js";
 import { renderSphereMapSvg } from "../../src/render/sphereMapDrawing.js";
-import { elements, shoelaceArea, subpaths, texts, xmlProblems } from "./svgCheck.js";
+import { elements, shoelaceArea, subpaths, texts, xmlProblems } from "../support/svgCheck.js";
 import { DEG } from "../../geometry/units.js";
 
 const grid = equalAreaGrid(4 * DEG);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { createSvgCanvas, formatNumber, serializeSvg } from "../../src/render/svgContext.js";
-import { xmlProblems } from "./svgCheck.js";
+import { xmlProblems } from "../support/svgCheck.js";
 
 describe("svg canvas and deterministic serialisation", () => {
   it("gives every drawing its own document: shapes never leak from one canvas into another", () => {

@@ -3,7 +3,7 @@ import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEFAULT_SEAM_POINTS, sampleSeam } from "../../geometry/seamSamples.js";
 import { DEFAULT_BAND } from "../../src/sampling/band.js";
 import { bandAveragesExact } from "../../src/sampling/exact.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { lcg, randomUnit } from "../support/random.js";
 
 describe("convergence in seam resolution", () => {
   const rnd = lcg(4242);

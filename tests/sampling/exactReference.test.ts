@@ -3,7 +3,7 @@ import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { sampleSeam, type SeamSamples } from "../../geometry/seamSamples.js";
 import { bandFromDegrees, type Band } from "../../src/sampling/band.js";
 import { bandAveragesExact } from "../../src/sampling/exact.js";
-import { lcg, randomUnit } from "../helpers.js";
+import { lcg, randomUnit } from "../support/random.js";
 
 /**
  * The closed form of src/sampling/exact.ts's header written the plain way (two

@@ -11,7 +11,7 @@ import { turnAverage } from "../../src/physics/seamModel/turn.js";
 import { pitchFrame, type Pitch } from "../../src/screening/pitch.js";
 import { robustness } from "../../src/screening/robustness.js";
 import { DEFAULT_SCREEN_OPTIONS, scoreOf, screenPitch, symmetricAngle, type ScreenSettings } from "../../src/screening/screen.js";
-import { sinkerPitch } from "../helpers.js";
+import { sinkerPitch } from "../support/pitches.js";
 
 const pitch = (over: Partial<Pitch> = {}): Pitch => sinkerPitch({ name: "test", ...over });
 const model = seamModel();

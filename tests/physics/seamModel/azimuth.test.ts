@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { azimuthBins, meridiansUpTo, pseudoAngle } from "../../../src/physics/seamModel/azimuth.js";
-import { lcg } from "../../helpers.js";
+import { lcg } from "../../support/random.js";
 
 describe("meridians and the pseudo-angle (src/physics/seamModel/azimuth.ts)", () => {
   it("the pseudo-angle is 0, 1, 2, 3 on the axes and strictly increasing in the azimuth over 100,000 steps of a turn (so it orders points as atan2 does)", () => {

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { DEFAULT_RESOLUTION, defaultProfile, forceTimeline, seamModel, turnAverage } from "../../../src/physics/seamModel/index.js";
-import { lcg, randomUnit } from "../../helpers.js";
+import { lcg, randomUnit } from "../../support/random.js";
 import { DEG } from "./helpers.js";
 
 describe("numerical resolution", () => {

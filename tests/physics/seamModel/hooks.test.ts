@@ -12,7 +12,7 @@ import {
   turnAverage,
 } from "../../../src/physics/seamModel/index.js";
 import { M_PER_IN, M_PER_S_PER_MPH, RAD_PER_S_PER_RPM } from "../../../geometry/units.js";
-import { expectAbsolute, expectRelative } from "../tolerance.js";
+import { expectAbsolute, expectRelative } from "../../support/tolerance.js";
 import { DEG } from "./helpers.js";
 
 const AXIS_BALL: [number, number, number] = [0.35, 0.25, 0.9];

@@ -11,8 +11,8 @@ import {
   type SeamModelProfile,
 } from "../../../src/physics/seamModel/index.js";
 import { seamModelOnSamples } from "../../../src/physics/seamModel/model.js";
-import { lcg, randomUnit } from "../../helpers.js";
-import { expectAbsolute, expectRelative } from "../tolerance.js";
+import { lcg, randomUnit } from "../../support/random.js";
+import { expectAbsolute, expectRelative } from "../../support/tolerance.js";
 import { arcPoints, DEG, meridianPoints, outAndBack, rotationTaking, samplesFrom } from "./helpers.js";
 
 const IDENTITY = Float64Array.of(1, 0, 0, 0, 1, 0, 0, 0, 1);

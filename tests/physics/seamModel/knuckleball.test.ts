@@ -17,7 +17,7 @@ import { airState } from "../../../src/physics/air.js";
 import { BALL_MASS_KG, BALL_RADIUS_M } from "../../../geometry/ball.js";
 import { forceTimeline, seamForceNewtons, seamModel } from "../../../src/physics/seamModel/index.js";
 import { M_PER_S_PER_MPH } from "../../../geometry/units.js";
-import { expectAbsolute } from "../tolerance.js";
+import { expectAbsolute } from "../../support/tolerance.js";
 import { harmonic, turningPoints } from "./helpers.js";
 
 const PHASES = 360;

@@ -5,7 +5,7 @@ import {
   pressureIntegralFromTable,
   pressureTable,
 } from "../../../src/physics/seamModel/pressure.js";
-import { expectAbsolute, expectRelative } from "../tolerance.js";
+import { expectAbsolute, expectRelative } from "../../support/tolerance.js";
 
 import { DEG } from "../../../geometry/units.js";
 

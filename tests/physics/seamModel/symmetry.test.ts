@@ -2,8 +2,8 @@ import { describe, expect, it } from "vitest";
 import { equalAreaGrid } from "../../../geometry/sphereGrid.js";
 import { applySymmetry, SEAM_SYMMETRIES } from "../../../geometry/symmetry.js";
 import { coefficientMap, forceTimeline, seamModel, turnAverage } from "../../../src/physics/seamModel/index.js";
-import { lcg, randomUnit } from "../../helpers.js";
-import { expectAbsolute } from "../tolerance.js";
+import { lcg, randomUnit } from "../../support/random.js";
+import { expectAbsolute } from "../../support/tolerance.js";
 import { DEG } from "./helpers.js";
 
 const model = seamModel();

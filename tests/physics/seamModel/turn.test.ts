@@ -9,8 +9,8 @@ import {
   seamModel,
   turnAverage,
 } from "../../../src/physics/seamModel/index.js";
-import { lcg, randomUnit } from "../../helpers.js";
-import { expectAbsolute, expectRelative } from "../tolerance.js";
+import { lcg, randomUnit } from "../../support/random.js";
+import { expectAbsolute, expectRelative } from "../../support/tolerance.js";
 import { DEG } from "./helpers.js";
 
 describe("through the turn (phase convention of geometry/flow.ts)", () => {

@@ -8,7 +8,7 @@ import { releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
 import { M_PER_S_PER_MPH, DEG, RAD_PER_S_PER_RPM } from "../../geometry/units.js";
 import type { Vec3 } from "../../geometry/vec.js";
-import { expectAbsolute, expectRelative } from "./tolerance.js";
+import { expectAbsolute, expectRelative } from "../support/tolerance.js";
 
 const air = airState();
 const MASS_KG = 0.145;

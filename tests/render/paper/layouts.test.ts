@@ -2,8 +2,8 @@ import { mkdtempSync, writeFileSync, copyFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { listLayouts, loadLayout, LayoutError } from "../../src/render/paper/layouts.js";
-import { ROOT } from "../cli/run.js";
+import { listLayouts, loadLayout, LayoutError } from "../../../src/render/paper/layouts.js";
+import { ROOT } from "../../support/cli.js";
 
 const shipped = join(ROOT, "templates", "layouts");
 

@@ -3,8 +3,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { formatMovementIn as inches } from "../../src/render/numbers.js";
-import { runCli, ROOT } from "../cli/run.js";
-import { inkSpread, itWithPoppler, pdfPages, pdfPageSizePt, pdfText, renderGray } from "./tools.js";
+import { runCli, ROOT } from "../support/cli.js";
+import { inkSpread, itWithPoppler, pdfPages, pdfPageSizePt, pdfText, renderGray } from "../support/poppler.js";
 import { loadLayout } from "../../src/render/paper/layouts.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-paper-"));

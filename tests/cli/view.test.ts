@@ -11,8 +11,8 @@ import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { formatMovementIn as inches } from "../../src/render/numbers.js";
 import type { ViewData } from "../../src/render/page3d/data.js";
-import { runCli } from "../cli/run.js";
-import { canvasPixels, launchChromium, openPage, pauseAt, RUN_BROWSER_TESTS, shownFigures, viewState } from "./browser.js";
+import { runCli } from "../support/cli.js";
+import { canvasPixels, launchChromium, openPage, pauseAt, RUN_BROWSER_TESTS, shownFigures, viewState } from "../support/browser.js";
 
 const TIMEOUT_MS = 120_000;
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-view-cli-"));

@@ -1,27 +1,17 @@
 /**
- * The 3-D page built by calling the builder directly (src/render/page3d/build.ts),
- * checked as a file and in a real browser (Debian's chromium, software WebGL).
+ * The 3-D page (src/render/page3d/main.ts, the script the builder bundles) in a real
+ * browser: Debian's chromium with software WebGL, opened from file://.
  */
-import { mkdirSync, mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { mkdirSync } from "node:fs";
 import { join } from "node:path";
-import { pathToFileURL } from "node:url";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEG } from "../../geometry/units.js";
-import { formatMovementIn as inches, percent } from "../../src/render/numbers.js";
-import { movementClock, type ClockView } from "../../geometry/frames.js";
-import { parseScreen, runScreen } from "../../src/jobs/screen.js";
-import { DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, bandFromDegrees } from "../../src/sampling/band.js";
-import { measureOrientation } from "../../src/sampling/measure.js";
-import { DEFAULT_FINGER_SPACING_IN } from "../../src/screening/hand.js";
-import type { OrientationReport } from "../../src/screening/report.js";
-import { DEFAULT_SPREAD_DEG } from "../../src/screening/robustness.js";
-import { bundledPackages } from "../../src/build/licences.js";
-import { buildViewHtml, cspHash, viewData } from "../../src/render/page3d/build.js";
-import type { ViewData } from "../../src/render/page3d/data.js";
-import { CAUTION_TEXT, renderViewHtml } from "../../src/render/page3d/html.js";
-import { PAGE_CSS } from "../../src/render/page3d/styles.js";
+import { DEG } from "../../../geometry/units.js";
+import { percent } from "../../../src/render/numbers.js";
+import { bandFromDegrees } from "../../../src/sampling/band.js";
+import { measureOrientation } from "../../../src/sampling/measure.js";
+import type { ViewData } from "../../../src/render/page3d/data.js";
+import { movementClock, type ClockView } from "../../../geometry/frames.js";
 import {
   canvasPixels,
   CHROMIUM_PATH,
@@ -35,111 +25,16 @@ import {
   shownFigures,
   viewState,
   type OpenedPage,
-} from "./browser.js";
-import { ROOT } from "../cli/run.js";
+} from "../../support/browser.js";
+import { ROOT } from "../../support/cli.js";
+import { buildDemoPage, expectedFigures, PAGE_TIMEOUT_MS } from "../../support/viewPage.js";
 
-const BROWSER_TIMEOUT_MS = 120_000;
-/** The demo staff at a 6 deg grid, as `view --demo --grid 6` would screen it (yargs' defaults spelled out). */
-const ARGV = {
-  demo: true,
-  grid: "6",
-  spread: String(DEFAULT_SPREAD_DEG),
-  rank: "blend",
-  "finger-spacing": String(DEFAULT_FINGER_SPACING_IN),
-  "band-center": String(DEFAULT_BAND_CENTER_DEG),
-  "band-width": String(DEFAULT_BAND_WIDTH_DEG),
-  "seam-points": "2048",
-};
-const TOP = 3;
-
-const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-page3d-"));
 let data: ViewData;
-let html: string;
 let pageUrl: string;
 
 beforeAll(async () => {
-  const outcome = runScreen(parseScreen({ ...ARGV, top: String(TOP) }));
-  data = viewData(outcome.job.team, outcome.screened);
-  html = await buildViewHtml(data);
-  const file = join(tmp, "view.html");
-  writeFileSync(file, html);
-  pageUrl = pathToFileURL(file).href;
-}, BROWSER_TIMEOUT_MS);
-
-/** The figures the page must show for `o`, in the terminal's formatting (the shared formatting of src/render/numbers.ts). */
-function expectedFigures(o: OrientationReport): Record<string, string> {
-  return {
-    score: inches(o.score),
-    "push-clock": o.seamMovement.clock ?? "-",
-    "arm-side": inches(o.seamMovement.armSideIn),
-    up: inches(o.seamMovement.verticalIn),
-    crossings: String(o.crossingsPerRevolution),
-    "robust-mean": inches(o.robustness.meanIn),
-    "robust-p10": inches(o.robustness.p10In),
-    axis: o.latLon.text,
-    "seam-in-band": percent(o.occupancy.seamInBand),
-  };
-}
-
-describe("the 3-D page as a file", () => {
-  it("is one self-contained HTML file: one inline script, one JSON block, nothing loaded by src or href but data:", () => {
-    const scripts = [...html.matchAll(/<script\b([^>]*)>/g)].map((m) => m[1].trim());
-    expect(scripts).toEqual(['type="application/json" id="seam-atlas-view-data"', ""]);
-    const refs = [...html.matchAll(/\b(?:src|href)\s*=\s*"([^"]*)"/g)].map((m) => m[1]);
-    expect(refs.every((r) => r.startsWith("data:"))).toBe(true);
-    expect(html).not.toMatch(/<link\b(?![^>]*rel="icon")/);
-    expect(html).not.toMatch(/@import|url\(\s*['"]?https?:/);
-  });
-
-  it("allows only its own script and style by hash, and no network, in its Content-Security-Policy", () => {
-    const csp = /<meta http-equiv="Content-Security-Policy" content="([^"]*)">/.exec(html)?.[1] ?? "";
-    const script = /<script>([\s\S]*)<\/script>\s*<\/body>/.exec(html)?.[1] ?? "";
-    const style = /<style>([\s\S]*?)<\/style>/.exec(html)?.[1] ?? "";
-    expect(csp).toContain("default-src 'none'");
-    expect(csp).toContain(`script-src ${cspHash(script)}`);
-    expect(csp).toContain(`style-src ${cspHash(style)}`);
-    expect(csp).not.toMatch(/https?:|'unsafe-inline'|'unsafe-eval'|\*/);
-    expect(script.length).toBeGreaterThan(100_000);
-  });
-
-  it("embeds every pitch's screen report exactly as screen builds it, and the pitch's field frame", () => {
-    const block = /<script type="application\/json" id="seam-atlas-view-data">([\s\S]*?)<\/script>/.exec(html)?.[1] ?? "";
-    const embedded = JSON.parse(block) as ViewData;
-    const results = runScreen(parseScreen({ ...ARGV, top: String(TOP) })).screened;
-    expect(embedded.pitches).toHaveLength(6);
-    expect(embedded.pitches.map((p) => p.report)).toEqual(JSON.parse(JSON.stringify(results.map((r) => r.report))));
-    expect(embedded.pitches[1].frame.pushLine).toEqual(results[1].result.frame.pushLine);
-    expect(embedded.team).toMatch(/invented club/);
-  });
-
-  it("carries the caution line, and the same data gives the same bytes", async () => {
-    expect(html).toContain(CAUTION_TEXT.replace(/'/g, "&#39;"));
-    expect(CAUTION_TEXT).toMatch(/can injure/);
-    expect(CAUTION_TEXT).toMatch(/gradually/);
-    expect(CAUTION_TEXT).toMatch(/never alter/);
-    expect(await buildViewHtml(data)).toBe(html);
-  }, BROWSER_TIMEOUT_MS);
-
-  it("carries the licence of every package bundled into the script (three.js and gl-matrix)", () => {
-    expect(html).toContain("/*! Licences of the bundled packages");
-    expect(html).toMatch(/\ngl-matrix:\nCopyright \(c\) 2015-\d{4}, Brandon Jones/);
-    expect(html).toMatch(/\nthree:\n[^]*?Permission is hereby granted/);
-    expect(bundledPackages(["src/x.ts", "node_modules/three/build/three.core.js", "node_modules\\gl-matrix\\esm\\vec3.js", "a/node_modules/@scope/pkg/i.js", "node_modules/three/build/three.module.js"])).toEqual([
-      { name: "@scope/pkg", dir: "a/node_modules/@scope/pkg" },
-      { name: "gl-matrix", dir: "node_modules/gl-matrix" },
-      { name: "three", dir: "node_modules/three" },
-    ]);
-  });
-
-  it("keeps a hostile team or pitcher name inside its JSON block (no '</script>' breaks out)", () => {
-    const hostile = `</script><script>alert(1)</script><!--`;
-    const doc = { ...data, team: hostile };
-    const out = renderViewHtml({ data: doc, script: "void 0", css: PAGE_CSS, scriptHash: cspHash("void 0"), styleHash: cspHash(PAGE_CSS) });
-    expect(out.match(/<script\b/g)).toHaveLength(2);
-    const block = /<script type="application\/json" id="seam-atlas-view-data">([\s\S]*?)<\/script>/.exec(out)?.[1] ?? "";
-    expect(JSON.parse(block).team).toBe(hostile);
-  });
-});
+  ({ data, pageUrl } = await buildDemoPage());
+}, PAGE_TIMEOUT_MS);
 
 describe.runIf(RUN_BROWSER_TESTS)("the browser the page tests drive", () => {
   it("is Debian's chromium at /usr/bin/chromium (with CI=true a missing one fails here rather than skipping)", () => {
@@ -154,7 +49,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
   beforeAll(async () => {
     browser = await launchChromium();
     opened = await openPage(browser, pageUrl);
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
   afterAll(async () => {
     await browser?.close();
   });
@@ -166,14 +61,14 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     expect(opened.requests.filter((u) => /^https?:/i.test(u))).toEqual([]);
     expect(opened.requests.every((u) => u === pageUrl || u.startsWith("data:") || u.startsWith("blob:"))).toBe(true);
     expect(await opened.page.locator(".caution").textContent()).toContain("Pitching can injure");
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("draws a picture that is not blank (grey-level spread above 10 of 255, over 30 distinct colours)", async () => {
     await pauseAt(opened.page, 0);
     const px = await canvasPixels(opened.page);
     expect(px.standardDeviation).toBeGreaterThan(10);
     expect(px.distinctColours).toBeGreaterThan(30);
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("shows each candidate's and reference hold's numbers exactly as the terminal prints them (Next steps through all)", async () => {
     const { page } = opened;
@@ -190,7 +85,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     await page.click("#previous-orientation");
     expect((await viewState(page)).label).toBe("two-seam hold");
     expect(opened.errors).toEqual([]);
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("changes the picture and the numbers when another candidate is chosen, and gives the first picture back on return", async () => {
     const { page } = opened;
@@ -217,7 +112,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     expect(firstFigures).toMatchObject(expectedFigures(report.candidates[0]));
     expect(secondFigures).toMatchObject(expectedFigures(report.candidates[1]));
     expect(await page.locator("#orientation-list button").nth(0).getAttribute("aria-pressed")).toBe("true");
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("computes the live in-band share on each side at the scrubbed phase as measure's timeline has it, beside the report's turn average", async () => {
     const { page } = opened;
@@ -254,7 +149,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     expect(seen.size).toBeGreaterThan(1);
     const a = data.pitches[1].frame.pushLine;
     expect(await page.locator("#side-plus-label").textContent()).toBe(`+ side (toward ${movementClock(a[0], a[2], p.input.pitch.view as ClockView)})`);
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("plays and pauses the turn, at the speed the slider sets", async () => {
     const { page } = opened;
@@ -273,7 +168,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     const c = await viewState(page);
     await page.waitForTimeout(300);
     expect((await viewState(page)).phaseDeg).toBe(c.phaseDeg);
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("reaches every control from the keyboard, labels every input, and turns the view with the arrow keys", async () => {
     const { page } = opened;
@@ -300,16 +195,13 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     await pauseAt(page, 0);
     const home = await canvasPixels(page);
     await page.focus("#ball-canvas");
-    let before = (await viewState(page)).frames;
     for (let i = 0; i < 6; i++) await page.keyboard.press("ArrowLeft");
-    await nextFrame(page, before);
-    const turned = await canvasPixels(page);
-    expect(pixelDifference(home, turned).changedShare).toBeGreaterThan(0.01);
-    before = (await viewState(page)).frames;
+    // a key press may land between frames: poll the picture (the page draws only when something
+    // changed, so a frame counter alone cannot say whether the last press has been drawn yet)
+    await expect.poll(async () => pixelDifference(home, await canvasPixels(page)).changedShare, { timeout: 10_000, interval: 100 }).toBeGreaterThan(0.01);
     await page.keyboard.press("Home");
-    await nextFrame(page, before);
-    expect(pixelDifference(home, await canvasPixels(page)).meanAbs).toBeLessThan(0.5);
-  }, BROWSER_TIMEOUT_MS);
+    await expect.poll(async () => pixelDifference(home, await canvasPixels(page)).meanAbs, { timeout: 10_000, interval: 100 }).toBeLessThan(0.5);
+  }, PAGE_TIMEOUT_MS);
 
   it("switches pitch from the list and shows that pitch's numbers", async () => {
     const { page } = opened;
@@ -318,7 +210,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     expect(await page.locator("#pitch-summary").textContent()).toContain("LHP");
     expect(await page.locator("#orientation-list button").count()).toBe(report.candidates.length + report.references.length);
     expect(await shownFigures(page)).toMatchObject(expectedFigures(report.candidates[0]));
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("writes a screenshot to out/view-screenshot.png", async () => {
     const { page } = opened;
@@ -329,7 +221,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     const png = await page.screenshot({ path: join(ROOT, "out", "view-screenshot.png"), fullPage: true });
     expect(png.subarray(1, 4).toString("latin1")).toBe("PNG");
     expect(opened.errors).toEqual([]);
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 
   it("says plainly when the browser has no WebGL, and still shows the numbers and the live share", async () => {
     const noGl = await openPage(browser, pageUrl, () => {
@@ -349,5 +241,5 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
     expect(await page.locator("#live-plus").textContent()).not.toBe("-");
     expect(noGl.errors).toEqual([]);
     await page.context().close();
-  }, BROWSER_TIMEOUT_MS);
+  }, PAGE_TIMEOUT_MS);
 });
