@@ -50,9 +50,9 @@ export function measureText(r: MeasureResult): string {
       ["seam in band, turn average", percent(m.seamInBand)],
       ["  axis side +  /  -", `${percent(m.axisPlus)}  /  ${percent(m.axisMinus)}`],
       ["  Magnus side +  /  -", `${percent(m.magnusPlus)}  /  ${percent(m.magnusMinus)}`],
-      ["asymmetry along axis", `${signed(m.alongAxis)}   (+ pushes toward the axis's positive end)`],
-      ["asymmetry along Magnus", signed(m.alongMagnus)],
-      ["asymmetry magnitude", fixed(m.magnitude, 5)],
+      ["occupancy lever, axis", `${signed(m.alongAxis)}   (seam occupancy's side, not the push: see force or screen)`],
+      ["occupancy lever, Magnus", signed(m.alongMagnus)],
+      ["occupancy lever size", fixed(m.magnitude, 5)],
       ["crossings per revolution", String(m.crossingsPerRevolution)],
     ];
     let plot = "";

@@ -17,7 +17,7 @@
  * F = 1/2 rho pi R^2 v^2 C (the coefficients already carry the profile's scale).
  *
  * How the defaults were chosen, the published checks' results, the convergence study
- * and speed figures: MODEL.md in this folder.
+ * and speed figures: DEVELOPERS.md in this folder.
  *
  * For a calibration (lab rows of axis, gyro, phase, speed, spin, forces along m and a):
  * a row with a phase is instantAtPhase(model, axis, gyro, phase); a turn-averaged row is

@@ -38,7 +38,7 @@
  * wholly inside the trip zone trips every meridian it crosses without interpolating.
  * Between samples the chord cuts inside the curve by at most (spacing)^2 / 8 (9e-4 at
  * the default 128 samples); the staircase of the meridian grid (steps of order 1/B in C)
- * is the larger error, see MODEL.md's convergence study. Sharp zone edges: a crossing
+ * is the larger error, see DEVELOPERS.md's convergence study. Sharp zone edges: a crossing
  * exactly on an edge counts by rounding, so symmetric attitudes that put a sample on an
  * edge (e.g. whole-degree phases about the ball's z axis) can break a symmetry by one
  * meridian's step.

@@ -59,7 +59,7 @@ export type SeamModelParameterName = (typeof SEAM_MODEL_PARAMETER_NAMES)[number]
 /** Resolved values, one per parameter, in the units of the table. */
 export type SeamModelValues = { readonly [K in SeamModelParameterName]: number };
 
-/** The parameter table. Defaults chosen as each row says; how they were fitted: MODEL.md in this folder. */
+/** The parameter table. Defaults chosen as each row says; how they were fitted: DEVELOPERS.md in this folder. */
 export const SEAM_MODEL_PARAMETERS: readonly SeamModelParameter[] = [
   {
     name: "laminarSeparationDeg",
@@ -68,7 +68,7 @@ export const SEAM_MODEL_PARAMETERS: readonly SeamModelParameter[] = [
     min: 75,
     max: 90,
     source:
-      "E. Achenbach, J. Fluid Mech. 54(3), 565-575 (1972): laminar separation of a smooth sphere at subcritical Reynolds numbers about 80-85 deg (from memory); default 80, the low end, chosen with the trip zone and wake pressure against Watts & Sawyer's knuckleball (MODEL.md)",
+      "E. Achenbach, J. Fluid Mech. 54(3), 565-575 (1972): laminar separation of a smooth sphere at subcritical Reynolds numbers about 80-85 deg (from memory); default 80, the low end, chosen with the trip zone and wake pressure against Watts & Sawyer's knuckleball (DEVELOPERS.md)",
     calibratable: true,
     description: "where an untripped (laminar) boundary layer separates, from the front stagnation point",
   },
@@ -90,7 +90,7 @@ export const SEAM_MODEL_PARAMETERS: readonly SeamModelParameter[] = [
     min: 0,
     max: 60,
     source:
-      "R. D. Mehta, Annu. Rev. Fluid Mech. 17, 151-189 (1985): a cricket ball's side force grows from zero at zero seam angle to its largest near 20 deg (from memory); nearer the stagnation point the layer is too thin and slow for a seam to trip it; default 10 deg chosen by a grid search against Watts & Sawyer (MODEL.md)",
+      "R. D. Mehta, Annu. Rev. Fluid Mech. 17, 151-189 (1985): a cricket ball's side force grows from zero at zero seam angle to its largest near 20 deg (from memory); nearer the stagnation point the layer is too thin and slow for a seam to trip it; default 10 deg chosen by a grid search against Watts & Sawyer (DEVELOPERS.md)",
     calibratable: true,
     description: "start of the trip zone: a seam crossed between tripStartDeg and tripEndDeg trips the laminar boundary layer turbulent",
   },
@@ -101,7 +101,7 @@ export const SEAM_MODEL_PARAMETERS: readonly SeamModelParameter[] = [
     min: 10,
     max: 90,
     source:
-      "R. D. Mehta, Annu. Rev. Fluid Mech. 17, 151-189 (1985): the side force falls away at large seam angles, where the seam sits too close to laminar separation for the tripped layer to matter (from memory); default 50 deg chosen by a grid search against Watts & Sawyer (MODEL.md)",
+      "R. D. Mehta, Annu. Rev. Fluid Mech. 17, 151-189 (1985): the side force falls away at large seam angles, where the seam sits too close to laminar separation for the tripped layer to matter (from memory); default 50 deg chosen by a grid search against Watts & Sawyer (DEVELOPERS.md)",
     calibratable: true,
     description: "end of the trip zone; at most laminarSeparationDeg and the fixation band's near edge",
   },
@@ -132,7 +132,7 @@ export const SEAM_MODEL_PARAMETERS: readonly SeamModelParameter[] = [
     min: -0.8,
     max: 0,
     source:
-      "E. Achenbach, J. Fluid Mech. 54(3), 565-575 (1972): base pressure of a subcritical sphere about -0.4, weaker behind a supercritical one (about -0.2) (both from memory); default -0.3 between them, a ball with tripped meridians having a partly turbulent wake, chosen against Watts & Sawyer (at -0.4 the knuckleball peak is 26 % low; MODEL.md)",
+      "E. Achenbach, J. Fluid Mech. 54(3), 565-575 (1972): base pressure of a subcritical sphere about -0.4, weaker behind a supercritical one (about -0.2) (both from memory); default -0.3 between them, a ball with tripped meridians having a partly turbulent wake, chosen against Watts & Sawyer (at -0.4 the knuckleball peak is 26 % low; DEVELOPERS.md)",
     calibratable: true,
     description: "constant pressure coefficient Cp_b behind separation",
   },

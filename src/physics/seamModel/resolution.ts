@@ -2,7 +2,7 @@
  * Numerical resolution of the seam-force model, separate from its physical profile:
  * seam points (the polyline), azimuth bins (meridians per turn about the flow axis)
  * and phases (instants per turn of the ball in the turn average). Defaults were set by
- * the convergence study in MODEL.md (kept true by tests/physics/seamModel/convergence.test.ts).
+ * the convergence study in DEVELOPERS.md ("The seam-force model") (kept true by tests/physics/seamModel/convergence.test.ts).
  */
 import { DEFAULT_SEAM_SHAPE } from "../../../geometry/seamCurve.js";
 import { assertSeamPointCount } from "../../../geometry/seamSamples.js";
