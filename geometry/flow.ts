@@ -24,6 +24,8 @@ import { mat3, newQuat, quat, unit3, type Vec3 } from "./vec.js";
 
 /** Below this, a spin axis counts as lying along the ball's z axis (the pole falls back to +x). */
 const POLE_TOLERANCE = 1e-9;
+/** Scratch for ballToFlowAtPhase (read at once, never kept). */
+const BASIS = new Float64Array(6);
 
 /**
  * The ball-to-flow rotation at phase `phaseRad`, written into `out` as a column-major
@@ -31,17 +33,13 @@ const POLE_TOLERANCE = 1e-9;
  * @param wx,wy,wz the spin axis in the ball frame, unit length (the caller normalises)
  * @param gyroRad gyro angle, rad, |gyro| < pi/2
  */
-export function ballToFlowAtPhase(
-  wx: number,
-  wy: number,
-  wz: number,
-  gyroRad: number,
-  phaseRad: number,
-  out: Float64Array = new Float64Array(9),
-): Float64Array {
-  const s = Math.sin(gyroRad);
-  const k = Math.cos(gyroRad);
-  // e1: the +z pole's part across w (or +x's when w is along z)
+/**
+ * The ball-frame basis across the spin axis that fixes phase 0: e1 = unit(pole - (pole . w) w)
+ * with pole = +z (or +x when w lies along z), e2 = w x e1. Writes [e1x, e1y, e1z, e2x, e2y, e2z]
+ * into `out` and returns it.
+ * @param wx,wy,wz the spin axis in the ball frame, unit length
+ */
+export function phaseBasis(wx: number, wy: number, wz: number, out: Float64Array = new Float64Array(6)): Float64Array {
   let px = 0;
   let pz = 1;
   if (!(Math.abs(wz) < 1 - POLE_TOLERANCE)) {
@@ -56,9 +54,27 @@ export function ballToFlowAtPhase(
   e1x /= n;
   e1y /= n;
   e1z /= n;
-  const e2x = wy * e1z - wz * e1y;
-  const e2y = wz * e1x - wx * e1z;
-  const e2z = wx * e1y - wy * e1x;
+  out[0] = e1x;
+  out[1] = e1y;
+  out[2] = e1z;
+  out[3] = wy * e1z - wz * e1y;
+  out[4] = wz * e1x - wx * e1z;
+  out[5] = wx * e1y - wy * e1x;
+  return out;
+}
+
+export function ballToFlowAtPhase(
+  wx: number,
+  wy: number,
+  wz: number,
+  gyroRad: number,
+  phaseRad: number,
+  out: Float64Array = new Float64Array(9),
+): Float64Array {
+  const s = Math.sin(gyroRad);
+  const k = Math.cos(gyroRad);
+  const b = phaseBasis(wx, wy, wz, BASIS);
+  const e1x = b[0], e1y = b[1], e1z = b[2], e2x = b[3], e2y = b[4], e2z = b[5];
   const c = Math.cos(phaseRad);
   const sn = Math.sin(phaseRad);
   // flow images: w -> (k, 0, s); e1 -> c u0 + sn u1 = (-s c, -sn, k c); e2 -> -sn u0 + c u1 = (s sn, -c, -k sn)

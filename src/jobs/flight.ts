@@ -23,8 +23,6 @@ import { oneOf, parseAxis, parseInteger, parseNumber, type Request } from "./req
 export interface FlightJob {
   readonly pitch: Pitch;
   readonly echo: PitchEcho;
-  /** The files read (pitch file, model profile). */
-  readonly inputs: readonly { option: string; path: string }[];
   readonly sampler: SamplerSettings;
   readonly model: SeamModel;
   /** How the orientation was given: an --axis text, "candidate N" or "four-seam reference". */
@@ -51,7 +49,7 @@ export interface FlightOutcome {
 export function parseFlight(request: Request): FlightJob {
   const choice = modelChoice(request);
   const sampler = samplerSettings(request, choice.profile);
-  const { pitches, source } = pitchesFromRequest(request);
+  const { pitches } = pitchesFromRequest(request);
   if (pitches.length !== 1) throw new InputError(`flight takes one pitch; the file has ${pitches.length} (choose one with --pitch-name)`);
   const { pitch, echo } = pitches[0];
   const sources = ["axis", "candidate", "reference"].filter((k) => request[k] !== undefined);
@@ -72,11 +70,9 @@ export function parseFlight(request: Request): FlightJob {
     axisRequest = { kind: "reference", name };
     axisGiven = `${name} reference`;
   }
-  const inputs = [...(source !== undefined && !request.demo ? [{ option: "pitch", path: source }] : []), ...(choice.source !== undefined ? [{ option: "model", path: choice.source }] : [])];
   return {
     pitch,
     echo,
-    inputs,
     sampler,
     model: buildModel(choice.profile, sampler.seamShape),
     axisGiven,

@@ -29,7 +29,6 @@ export interface ForceJob {
   readonly spinRpm: number;
   readonly air: AirState;
   readonly model: SeamModel;
-  readonly inputs: readonly { option: string; path: string }[];
 }
 
 export interface ForceResult {
@@ -55,7 +54,6 @@ export function parseForce(request: Request): ForceJob {
     spinRpm: parseInRange("spin", request.spin ?? "0", SPIN_RANGE_RPM[0], SPIN_RANGE_RPM[1], "rpm"),
     air: airState(airConditions(request)),
     model: buildModel(choice.profile, sampler.seamShape),
-    inputs: choice.source !== undefined ? [{ option: "model", path: choice.source }] : [],
   };
 }
 

@@ -16,8 +16,6 @@ import type { Request } from "./request/values.js";
 
 export interface ScreenJob {
   readonly team?: string;
-  /** The files read (pitch file, model profile): inputs the outputs must not replace. */
-  readonly inputs: readonly { option: string; path: string }[];
   readonly pitches: readonly PitchInput[];
   readonly sampler: SamplerSettings;
   readonly options: ScreenOptions;
@@ -43,13 +41,11 @@ export interface ScreenOutcome {
 
 export function parseScreen(request: Request, top: { fallback?: number; range?: readonly [number, number]; atLeast?: number } = {}): ScreenJob {
   const chosen = topOption(request, top.fallback, top.range);
-  const { team, source, pitches } = pitchesFromRequest(request);
+  const { team, pitches } = pitchesFromRequest(request);
   const model = modelChoice(request);
   const sampler = samplerSettings(request, model.profile);
-  const inputs = [...(source !== undefined && !request.demo ? [{ option: "pitch", path: source }] : []), ...(model.source !== undefined ? [{ option: "model", path: model.source }] : [])];
   return {
     team,
-    inputs,
     pitches,
     sampler,
     options: screenOptions(request),

@@ -14,20 +14,29 @@ import type { MeasureResult } from "../measure.js";
 
 const BARS = " ▁▂▃▄▅▆▇█";
 
-/** One row of bar characters for values in [0, max], averaged over `columns` equal bins. */
-export function sparkline(values: ArrayLike<number>, max: number, columns: number): string {
+/** The mean of `values` in each of `columns` equal bins (a series squeezed to the width of a line). */
+function binMeans(values: ArrayLike<number>, columns: number): number[] {
   const n = values.length;
-  let out = "";
+  const out: number[] = [];
   for (let c = 0; c < columns; c++) {
     const i0 = Math.floor((c * n) / columns);
     const i1 = Math.max(i0 + 1, Math.floor(((c + 1) * n) / columns));
     let sum = 0;
     for (let i = i0; i < i1; i++) sum += values[i];
-    const mean = sum / (i1 - i0);
-    const level = max > 0 ? Math.round((mean / max) * (BARS.length - 1)) : 0;
-    out += BARS[Math.max(0, Math.min(BARS.length - 1, level))];
+    out.push(sum / (i1 - i0));
   }
   return out;
+}
+
+/** The bar character for |value| on a scale of max. */
+function bar(value: number, max: number): string {
+  const level = max > 0 ? Math.round((Math.abs(value) / max) * (BARS.length - 1)) : 0;
+  return BARS[Math.max(0, Math.min(BARS.length - 1, level))];
+}
+
+/** One row of bar characters for values in [0, max], averaged over `columns` equal bins. */
+export function sparkline(values: ArrayLike<number>, max: number, columns: number): string {
+  return binMeans(values, columns).map((v) => bar(v, max)).join("");
 }
 
 /** Left-aligned two-column table with a fixed label width. */
@@ -166,22 +175,10 @@ export function explainText(job: ExplainOneJob, n: ExplanationNumbers): string {
   return lines.join("\n") + "\n";
 }
 
-/** A signed series as one row of characters: bars up for positive, down for negative, 5 deg a column. */
+/** A signed series as two rows of characters: bars for positive values, and below them for negative ones. */
 function signedPlot(values: ArrayLike<number>, max: number, columns: number): [string, string] {
-  const n = values.length;
-  let up = "";
-  let down = "";
-  for (let c = 0; c < columns; c++) {
-    const i0 = Math.floor((c * n) / columns);
-    const i1 = Math.max(i0 + 1, Math.floor(((c + 1) * n) / columns));
-    let sum = 0;
-    for (let i = i0; i < i1; i++) sum += values[i];
-    const mean = sum / (i1 - i0);
-    const level = max > 0 ? Math.round((Math.abs(mean) / max) * (BARS.length - 1)) : 0;
-    up += mean > 0 ? BARS[level] : " ";
-    down += mean < 0 ? BARS[level] : " ";
-  }
-  return [up, down];
+  const means = binMeans(values, columns);
+  return [means.map((v) => (v > 0 ? bar(v, max) : " ")).join(""), means.map((v) => (v < 0 ? bar(v, max) : " ")).join("")];
 }
 
 export function forceText(r: ForceResult): string {

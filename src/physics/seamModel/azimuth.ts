@@ -14,6 +14,7 @@
  * width 1/B holds at most one threshold per cell: counting the meridians at or below
  * a pseudo-angle takes one table read and one comparison.
  */
+import { BoundedCache } from "../../../geometry/cache.js";
 
 export interface AzimuthBins {
   /** B, a multiple of 4. */
@@ -27,7 +28,7 @@ export interface AzimuthBins {
   readonly cellCount: Int32Array;
 }
 
-/** Pseudo-angle of (x, y) in [0, 4); (0, 0) gives 0. (instant.ts inlines the same arithmetic.) */
+/** Pseudo-angle of (x, y) in [0, 4); (0, 0) gives 0. */
 export function pseudoAngle(x: number, y: number): number {
   const ax = x < 0 ? -x : x;
   const ay = y < 0 ? -y : y;
@@ -40,12 +41,14 @@ export function pseudoAngle(x: number, y: number): number {
   return p >= 4 ? 0 : p;
 }
 
-const cache = new Map<number, AzimuthBins>();
+const cache = new BoundedCache<number, AzimuthBins>("azimuth bins per count", 8);
 
 /** The bins for B azimuths (memoised; B validated by resolution.ts). */
 export function azimuthBins(count: number): AzimuthBins {
-  const hit = cache.get(count);
-  if (hit) return hit;
+  return cache.get(count, () => buildBins(count));
+}
+
+function buildBins(count: number): AzimuthBins {
   const cos = new Float64Array(count);
   const sin = new Float64Array(count);
   fillUnitCircle(cos, sin);
@@ -58,10 +61,7 @@ export function azimuthBins(count: number): AzimuthBins {
     while (j < count && threshold[j] < c / count) j++;
     cellCount[c] = j;
   }
-  const bins = { count, cos, sin, threshold, cellCount };
-  if (cache.size > 16) cache.clear();
-  cache.set(count, bins);
-  return bins;
+  return { count, cos, sin, threshold, cellCount };
 }
 
 /** Number of meridians with p_j <= p, for p in [0, 4). */

@@ -43,6 +43,7 @@
  * edge (e.g. whole-degree phases about the ball's z axis) can break a symmetry by one
  * meridian's step.
  */
+import { pseudoAngle } from "./azimuth.js";
 import type { SeamModel } from "./model.js";
 import { pressureIntegralFromTable } from "./pressure.js";
 
@@ -126,8 +127,8 @@ export function evaluateFlowPoints(model: SeamModel, cosPhi: number, sinPhi: num
     const zLo = z < pz ? z : pz;
     const zHi = z < pz ? pz : z;
     if ((zHi >= tripLo && zLo <= tripHi) || (zHi >= bandLo && zLo <= bandHi)) {
-      if (!pHave) pp = pseudo(px, py);
-      const p = pseudo(x, y);
+      if (!pHave) pp = pseudoAngle(px, py);
+      const p = pseudoAngle(x, y);
       // Rare cases (the wrap past p = 4, meridian indices past B) take the same arithmetic
       // as the common ones with a selected constant, so the optimiser sees every operation
       // from the first calls and never deoptimises on a path met late (a deoptimised loop
@@ -194,19 +195,6 @@ export function evaluateFlowPoints(model: SeamModel, cosPhi: number, sinPhi: num
     const b = bandCos[j];
     r[2 + s] = b > base ? b : base;
   }
-}
-
-/** Pseudo-angle of azimuth.ts, inlined here for the hot loop: one arithmetic path, selected constants. */
-function pseudo(x: number, y: number): number {
-  const ax = x < 0 ? -x : x;
-  const ay = y < 0 ? -y : y;
-  const d = ax + ay;
-  const r = d > 0 ? ay / d : 0;
-  // quadrants: r, 2 - r, 2 + r, 4 - r
-  const base = y >= 0 ? (x >= 0 ? 0 : 2) : x < 0 ? 2 : 4;
-  const sign = (x >= 0) === (y >= 0) ? 1 : -1;
-  const p = base + sign * r;
-  return p >= 4 ? 0 : p;
 }
 
 /** Copies the scratch result into `out` (angles by arccos of the stored cosines). */

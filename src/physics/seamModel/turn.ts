@@ -25,6 +25,7 @@
  * at 60 deg, too few to pay for the bookkeeping, so every segment meets the instant's
  * own polar test (a few operations) at every phase.
  */
+import { phaseBasis } from "../../../geometry/flow.js";
 import { unit3, type Vec3 } from "../../../geometry/vec.js";
 import { assertGyro } from "../../sampling/band.js";
 import { fillUnitCircle } from "./azimuth.js";
@@ -32,8 +33,8 @@ import { emptyInstant, evaluateFlowPoints, readInstant, type InstantCoefficient 
 import type { SeamModel } from "./model.js";
 import { assertMultipleOfFour, PHASES_RANGE } from "./resolution.js";
 
-/** Below this, a spin axis counts as lying along the ball's z axis (as geometry/flow.ts). */
-const POLE_TOLERANCE = 1e-9;
+/** Scratch for the phase basis. */
+const BASIS = new Float64Array(6);
 
 /** Turn-averaged coefficients, dimensionless, scale applied. */
 export interface TurnAverage {
@@ -66,24 +67,9 @@ export function prepareOrientation(model: SeamModel, axisBall: Readonly<Vec3>, g
   const wx = w[0], wy = w[1], wz = w[2];
   const s = Math.sin(gyroRad);
   const k = Math.cos(gyroRad);
-  // e1, e2 exactly as geometry/flow.ts builds them
-  let px = 0;
-  let pz = 1;
-  if (!(Math.abs(wz) < 1 - POLE_TOLERANCE)) {
-    px = 1;
-    pz = 0;
-  }
-  const d = px * wx + pz * wz;
-  let e1x = px - d * wx;
-  let e1y = -d * wy;
-  let e1z = pz - d * wz;
-  const nrm = Math.hypot(e1x, e1y, e1z);
-  e1x /= nrm;
-  e1y /= nrm;
-  e1z /= nrm;
-  const e2x = wy * e1z - wz * e1y;
-  const e2y = wz * e1x - wx * e1z;
-  const e2z = wx * e1y - wy * e1x;
+  // e1, e2: geometry/flow.ts's phase basis
+  const b = phaseBasis(wx, wy, wz, BASIS);
+  const e1x = b[0], e1y = b[1], e1z = b[2], e2x = b[3], e2y = b[4], e2z = b[5];
   const sc = model.scratch;
   const pts = model.seam.points;
   const n = model.seam.count;
