@@ -6,7 +6,7 @@ import { planRun, print, writeOutput } from "./output.js";
 export function registerFlight(y: Argv): Argv {
   return y.command(
     "flight",
-    "fly a pitch with a seam orientation to the plate: plate location, time, approach angles, movement split into Magnus and seam parts",
+    "fly a pitch with a seam orientation to the plate: plate location, time, approach angles, movement as the trade reads it (induced vertical and horizontal break) and from release, split into Magnus, seam and drag parts",
     (c) =>
       withAirOptions(
         withSamplerOptions(

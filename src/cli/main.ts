@@ -24,7 +24,7 @@ export async function main(args: string[]): Promise<void> {
   if (command !== undefined && !command.startsWith("-") && !(COMMANDS as readonly string[]).includes(command)) throw unknownCommand(command);
   let cli = yargs(args)
     .scriptName("seam-atlas")
-    .usage("$0 <command> [options]\n\nSeam-orientation geometry: where the spin axis pierces the ball, how much seam sits in the separation band through a turn, and the seam-shifted-wake push that follows.")
+    .usage("$0 <command> [options]\n\nSeam orientation: where the spin axis pierces the ball, and the seam-shifted wake it makes. One seam-force model gives every push: its direction, the inches it adds at the plate, and the ranking of grips.")
     .version(TOOL_VERSION)
     .strict()
     .demandCommand(1, `give a command: ${COMMANDS.slice(0, -1).join(", ")} or ${COMMANDS.at(-1)} (see --help)`)

@@ -23,7 +23,7 @@ export function withPitchOptions<T>(y: Argv<T>) {
     .option("view", text("whose view the clock is read from: pitcher (behind the pitcher) or catcher"))
     .option("gyro", text("gyro angle, deg (positive: the axis's positive end leans toward the plate) [default: 0]"))
     .option("efficiency", text("spin efficiency, percent (instead of --gyro; gyro taken positive)"))
-    .option("want", text("wanted direction of the seam push: arm, glove, up, down or any [default: any]"))
+    .option("want", text("wanted direction of the seam movement: arm, glove, up, down or any (its size) [default: any]"))
     .option("name", text("a label for the pitch"))
     .option("pitch", text("a pitch file (one pitch or a staff; see README)"))
     .option("pitch-name", text("only this pitch of the file: NAME or PITCHER/NAME"))

@@ -27,7 +27,7 @@ export function registerPaper(y: Argv): Argv {
   return y
     .command(
       "card",
-      "print a grip card (PDF, or SVG with --svg): the pitch, two ball drawings, finger placement in words, score, robustness, push and seam movement",
+      "print a grip card (PDF, or SVG with --svg): the pitch, two ball drawings, finger placement in words, seam movement in inches and where it points, robustness",
       (c) =>
         withAirOptions(withScreenOptions(
           withSamplerOptions(

@@ -13,7 +13,7 @@ import { planRun, print, refuseSecondStdout, toStdout, wroteLines, writeOutput, 
 export function registerScreen(y: Argv): Argv {
   return y.command(
     "screen",
-    "screen every spin-axis position on the ball for a pitch: best distinct grips, robustness, the two- and four-seam holds, finger placement",
+    "screen every spin-axis position on the ball for a pitch by the seam movement it adds (inches at the plate): best distinct grips, robustness, the two- and four-seam holds, finger placement",
     (c) =>
       withAirOptions(withScreenOptions(
         withSamplerOptions(
