@@ -20,7 +20,7 @@
  * literature, recalled, with no primary source read (/work/shared/REFERENCES.md,
  * "Seam forces"), so the model has no spin dependence beyond the turning itself.
  */
-import { createHash } from "node:crypto";
+import { sha256Hex } from "../../../geometry/sha256.js";
 import { bandFromDegrees, DEFAULT_BAND_CENTER_DEG, DEFAULT_BAND_WIDTH_DEG, type Band } from "../../sampling/band.js";
 import { attachedPressureCoefficient } from "./pressure.js";
 
@@ -188,7 +188,7 @@ export function canonicalValuesJson(values: SeamModelValues): string {
 
 /** The profile hash of `values` (8 hex digits). */
 export function profileHash(values: SeamModelValues): string {
-  return createHash("sha256").update(canonicalValuesJson(values)).digest("hex").slice(0, 8);
+  return sha256Hex(canonicalValuesJson(values)).slice(0, 8);
 }
 
 function isRecord(x: unknown): x is Record<string, unknown> {
