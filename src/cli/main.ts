@@ -12,6 +12,7 @@ import { registerExplain } from "./explain.js";
 import { registerPaper } from "./paper.js";
 import { registerView } from "./view.js";
 import { registerForce } from "./force.js";
+import { registerCalibrate } from "./calibrate.js";
 
 export async function main(args: string[]): Promise<void> {
   let cli = yargs(args)
@@ -35,6 +36,7 @@ export async function main(args: string[]): Promise<void> {
   cli = registerView(cli);
   cli = registerForce(cli);
   cli = registerLandmarks(cli);
+  cli = registerCalibrate(cli);
   await cli.parseAsync();
 }
 

@@ -58,7 +58,7 @@ import { seamModel } from "../seamModel/model.js";
 import type { SeamModelResolution } from "../seamModel/resolution.js";
 import { M_PER_IN } from "../../../geometry/units.js";
 import { boundedLevenbergMarquardt, finiteDifferenceJacobian, type LeastSquaresProblem, type StopReason } from "./leastSquares.js";
-import { singularValues } from "./linearAlgebra.js";
+import { gaussNewtonCovariance } from "./covariance.js";
 import { crossLimits } from "./limits.js";
 import { compileObservations, predict, predictionScratch, type LabObservation, type ObservationSet, type TrackedObservation } from "./observations.js";
 
@@ -338,7 +338,7 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
       stopReason = result.stopReason;
       if (pass === REFINE_PASSES) break;
       // difference steps of REFINE_SIGMAS standard deviations (within their floor and default) for the next pass
-      const sigma = searchSigmas({ ...problem, step: steps }, current, result.residuals, m - fit.length);
+      const sigma = searchSigmas({ ...problem, step: steps }, current, result.residuals);
       const next = nonlinear.map((name, j) => {
         const sj = sigma[j];
         return Number.isFinite(sj) ? Math.min(defaults[j], Math.max(STEP_FLOORS[name], REFINE_SIGMAS * sj)) : defaults[j];
@@ -383,22 +383,10 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
     jac.set(k < 0 ? u : fd.subarray(m * k, m * (k + 1)), m * j);
   });
   const ranges = fit.map((name) => TABLE.get(name)!.max - TABLE.get(name)!.min);
-  const scaled = new Float64Array(m * n);
-  for (let j = 0; j < n; j++) for (let i = 0; i < m; i++) scaled[m * j + i] = jac[m * j + i] * ranges[j];
-  const svd = singularValues(scaled, m, n);
-  const largest = svd.values[0];
-  const isNull = Array.from(svd.values, (s) => !(largest > 0) || s <= NULL_RELATIVE * largest);
-  let rss = 0;
-  for (let i = 0; i < m; i++) rss += r[i] * r[i];
-  const dof = m - n;
-  const s2 = rss / dof;
-  // covariance on the directions the data see (scaled coordinates), then back to the parameters' units
-  const cov = new Float64Array(n * n);
-  for (let k = 0; k < n; k++) {
-    if (isNull[k]) continue;
-    const w = s2 / (svd.values[k] * svd.values[k]);
-    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) cov[n * i + j] += w * svd.vectors[n * i + k] * svd.vectors[n * j + k] * ranges[i] * ranges[j];
-  }
+  const gn = gaussNewtonCovariance(jac, r, m, n, { columnScales: ranges, nullRelative: NULL_RELATIVE, nullLoading: NULL_LOADING });
+  const cov = gn.covariance;
+  const s2 = gn.residualVariance;
+  const dof = gn.degreesOfFreedom;
   const unseen = new Set<number>();
   const notIdentified: NotIdentified[] = [];
   const reasons = new Map<SeamModelParameterName, string>();
@@ -412,10 +400,9 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
       );
     }
   }
-  for (let k = 0; k < n; k++) {
-    if (!isNull[k]) continue;
-    const members = fit.filter((name, i) => Math.abs(svd.vectors[n * i + k]) >= NULL_LOADING && !(tripleFitted && TRIPLE.includes(name)));
-    const ratio = largest > 0 ? svd.values[k] / largest : 0;
+  for (const direction of gn.nullDirections) {
+    const members = direction.members.map((i) => fit[i]).filter((name) => !(tripleFitted && TRIPLE.includes(name)));
+    const ratio = direction.relative;
     for (const name of members) {
       unseen.add(fit.indexOf(name));
       if (reasons.has(name)) continue;
@@ -487,7 +474,7 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
       stopReason,
       residualVariance: s2,
       degreesOfFreedom: dof,
-      relativeSingularValues: Array.from(svd.values, (s) => (largest > 0 ? s / largest : 0)),
+      relativeSingularValues: gn.relativeSingularValues,
       correlation,
     },
   };
@@ -498,36 +485,13 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
  * of its residuals (variable projection's: the scale profiled out), s^2 = |r|^2 / dof,
  * on the directions the data see; NaN for an unknown on a direction they do not.
  */
-function searchSigmas(problem: LeastSquaresProblem, x: Float64Array, r: Float64Array, dof: number): number[] {
+function searchSigmas(problem: LeastSquaresProblem, x: Float64Array, r: Float64Array): number[] {
   const n = problem.size;
   const m = problem.residualCount;
   const { jacobian } = finiteDifferenceJacobian(problem, x, r, true);
-  let rss = 0;
-  for (let i = 0; i < m; i++) rss += r[i] * r[i];
-  const s2 = rss / Math.max(1, dof);
-  // scale columns to unit norm before the decomposition, undo after
-  const norms = new Float64Array(n);
-  for (let j = 0; j < n; j++) {
-    let t = 0;
-    for (let i = 0; i < m; i++) t += jacobian[m * j + i] ** 2;
-    norms[j] = Math.sqrt(t);
-    if (norms[j] > 0) for (let i = 0; i < m; i++) jacobian[m * j + i] /= norms[j];
-  }
-  const svd = singularValues(jacobian, m, n);
-  const largest = svd.values[0];
-  return Array.from({ length: n }, (_, j) => {
-    if (!(norms[j] > 0)) return NaN;
-    let v = 0;
-    for (let k = 0; k < n; k++) {
-      const load = svd.vectors[n * j + k];
-      if (svd.values[k] <= NULL_RELATIVE * largest) {
-        if (Math.abs(load) >= NULL_LOADING) return NaN;
-        continue;
-      }
-      v += (load * load) / (svd.values[k] * svd.values[k]);
-    }
-    return Math.sqrt(s2 * v) / norms[j];
-  });
+  const gn = gaussNewtonCovariance(jacobian, r, m, n, { columnScales: problem.step, nullRelative: NULL_RELATIVE, nullLoading: NULL_LOADING });
+  const unseen = new Set(gn.nullDirections.flatMap((d) => d.members));
+  return Array.from({ length: n }, (_, j) => (unseen.has(j) ? NaN : Math.sqrt(gn.covariance[n * j + j])));
 }
 
 /** The values of a profile as a plain record (for writing a profile file). */

@@ -7,6 +7,7 @@
  * fit.ts           the fit: variable projection on scale, bounded Levenberg-Marquardt,
  *                  Gauss-Newton covariance, what the data cannot pin down
  * leastSquares.ts  bounded Levenberg-Marquardt with constraints beyond the box
+ * covariance.ts    Gauss-Newton covariance s^2 (J^T J)^-1 with rank decisions
  * linearAlgebra.ts Cholesky solve, one-sided Jacobi SVD
  * limits.ts        the model's cross-parameter checks as named margins
  * synthetic.ts     noisy lab rows from a planted profile (tests, benchmark)
@@ -33,6 +34,8 @@ export type { LabObservation, ObservationSet, TrackedObservation, UnitMovement }
 export { unitSeamMovementArmSide } from "./unitMovement.js";
 export { boundedLevenbergMarquardt, finiteDifferenceJacobian } from "./leastSquares.js";
 export type { LeastSquaresOptions, LeastSquaresProblem, LeastSquaresResult, StopReason } from "./leastSquares.js";
+export { gaussNewtonCovariance } from "./covariance.js";
+export type { GaussNewtonCovariance, NullDirection } from "./covariance.js";
 export { choleskySolve, singularValues } from "./linearAlgebra.js";
 export { crossLimits } from "./limits.js";
 export type { CrossLimit } from "./limits.js";

@@ -13,20 +13,23 @@
  * O. Tingleff, Methods for Non-Linear Least Squares Problems, 2nd ed., 2004, eq. 3.16
  * and Algorithm 3.16).
  *
- * Constraints, by an active set (e.g. J. Nocedal and S. J. Wright, Numerical
- * Optimization, 2nd ed., 2006, ch. 16):
- *   - box: an unknown at a bound whose step points outward is held there;
+ * Constraints, by an active set of linearised ones (e.g. J. Nocedal and S. J. Wright,
+ * Numerical Optimization, 2nd ed., 2006, ch. 16 and 18): the step is solved with the
+ * equalities of every constraint it would otherwise cross,
+ *   - box: e_j . d = bound - x_j (it stops at the bound; one already there stays);
  *   - beyond the box (`margins`: functions of x that must stay positive; here the seam
- *     model's cross-parameter checks): one at its edge (margin within ACTIVE_MARGIN of
- *     one difference step's effect) that the step would cross is linearised there,
- *     grad(margin) . d = 0, so the step slides along the edge instead of stopping at it.
- * The damped system is solved on the null space of the active constraints (an
- * orthonormal basis by Gram-Schmidt), constraints being added while the step breaks
- * one. A step is then clipped into the box; if r is not defined there (a constraint
- * crossed, or a curved one left), the step is cut back along itself by bisection to
- * the farthest defined point (BISECTIONS halvings), so every iterate is feasible.
+ *     model's cross-parameter checks), linearised at x: grad(g) . d = -g (it stops on
+ *     the edge and slides along it instead of stopping at it),
+ * on the null space of those rows (Gram-Schmidt), rows being added while the step
+ * crosses one. The step is then clipped into the box; if r is not defined there (a
+ * curved edge left by the linearisation's error), the point is moved back inside the
+ * broken margins by the shortest move (`restore`: a second-order correction, e.g.
+ * Nocedal and Wright, sec. 15.4; the gain ratio then uses the linear model's reduction
+ * for the step before the correction), and failing that the step is cut back along
+ * itself by bisection to the farthest defined point (BISECTIONS halvings), so every
+ * iterate is feasible.
  *
- * The Jacobian is by forward differences with a step per unknown (given: the model
+ * The Jacobian is by forward (or, with `central`, central) differences with a step per unknown (given: the model
  * this serves is a staircase at fine scales, so the steps are chosen, not derived from
  * machine precision); where x + h leaves the box or the feasible set, the backward
  * difference is taken instead, and a column is zero when neither is possible.
@@ -51,8 +54,9 @@ const DECREMENT_DAMPING = 1e-10;
 const DIAGONAL_FLOOR = 1e-12;
 /** Halvings of a step that leaves the feasible set. */
 const BISECTIONS = 30;
-/** A margin is at its edge when below this fraction of the change one difference step in every unknown makes in it. */
-const ACTIVE_MARGIN = 1e-6;
+/** Passes of the restoration onto a curved edge, and how far inside it aims (fraction of one step's effect). */
+const RESTORATIONS = 8;
+const RESTORE_INSIDE = 1e-9;
 /** Difference step for a margin's gradient, as a fraction of the unknowns' steps (margins are cheap closed forms). */
 const MARGIN_STEP = 1e-4;
 /** Basis vectors shorter than this after orthogonalising are dropped (unit-length inputs). */
@@ -153,19 +157,18 @@ export function finiteDifferenceJacobian(problem: LeastSquaresProblem, x: Float6
   return { jacobian: jac, evaluations };
 }
 
-/** The edges a step must respect at x: box-held unknowns and margins at their edge, with gradients. */
-interface Edges {
-  /** Gradients (length n each) of the margins at their edge. */
-  readonly active: Float64Array[];
+/** The margins at x and their gradients (central differences; margins are cheap closed forms). */
+interface Linearised {
+  readonly values: number[];
+  readonly grads: Float64Array[];
 }
 
-function edgesAt(problem: LeastSquaresProblem, x: Float64Array): Edges {
-  const active: Float64Array[] = [];
-  if (!problem.margins) return { active };
+function linearise(problem: LeastSquaresProblem, x: Float64Array): Linearised {
+  if (!problem.margins) return { values: [], grads: [] };
   const n = problem.size;
-  const m0 = Array.from(problem.margins(x));
+  const values = Array.from(problem.margins(x));
   const xp = Float64Array.from(x);
-  const grads = m0.map(() => new Float64Array(n));
+  const grads = values.map(() => new Float64Array(n));
   for (let j = 0; j < n; j++) {
     const h = MARGIN_STEP * problem.step[j];
     xp[j] = x[j] + h;
@@ -173,14 +176,9 @@ function edgesAt(problem: LeastSquaresProblem, x: Float64Array): Edges {
     xp[j] = x[j] - h;
     const mm = problem.margins(xp);
     xp[j] = x[j];
-    for (let c = 0; c < m0.length; c++) grads[c][j] = (mp[c] - mm[c]) / (2 * h);
+    for (let c = 0; c < values.length; c++) grads[c][j] = (mp[c] - mm[c]) / (2 * h);
   }
-  m0.forEach((margin, c) => {
-    let reach = 0;
-    for (let j = 0; j < n; j++) reach += Math.abs(grads[c][j]) * problem.step[j];
-    if (reach > 0 && margin <= ACTIVE_MARGIN * reach) active.push(grads[c]);
-  });
-  return { active };
+  return { values, grads };
 }
 
 /**
@@ -208,7 +206,7 @@ export function boundedLevenbergMarquardt(problem: LeastSquaresProblem, x0: Arra
   let nu = 2;
   let stopReason: StopReason = "iterations";
   let iterations = 0;
-  let edges: Edges = { active: [] };
+  let linear: Linearised = { values: [], grads: [] };
   let fresh = true;
   const clipped = (t: number) => {
     for (let j = 0; j < n; j++) xTrial[j] = Math.min(problem.upper[j], Math.max(problem.lower[j], x[j] + t * d[j]));
@@ -235,7 +233,7 @@ export function boundedLevenbergMarquardt(problem: LeastSquaresProblem, x0: Arra
         }
       }
       fresh = false;
-      edges = edgesAt(problem, x);
+      linear = linearise(problem, x);
       // gradient test: cosine of each column with r, box-held columns pointing outward excluded
       const rNorm = Math.sqrt(2 * cost);
       let worst = 0;
@@ -249,7 +247,7 @@ export function boundedLevenbergMarquardt(problem: LeastSquaresProblem, x0: Arra
         break;
       }
       if (options.costResolution) {
-        constrainedStep(problem, x, edges, a, g, DECREMENT_DAMPING, d);
+        constrainedStep(problem, x, linear, a, g, DECREMENT_DAMPING, d);
         let decrement = 0;
         for (let j = 0; j < n; j++) decrement -= 0.5 * d[j] * g[j];
         if (decrement <= options.costResolution(cost)) {
@@ -266,15 +264,24 @@ export function boundedLevenbergMarquardt(problem: LeastSquaresProblem, x0: Arra
       stopReason = "damping";
       break;
     }
-    constrainedStep(problem, x, edges, a, g, mu, d);
+    constrainedStep(problem, x, linear, a, g, mu, d);
     if (options.costResolution && 0.5 * quadraticForm(a, d, n) <= options.costResolution(cost)) {
       stopReason = "step";
       break;
     }
     iterations++;
     clipped(1);
+    // the linear model's reduction for the step the model chose (clipped into the box);
+    // a restoration's move back inside a curved edge is judged by the actual cost alone
+    const modelled = linearReduction(a, g, x, xTrial, n);
     evaluations++;
     let feasible = problem.residuals(xTrial, rTrial);
+    let restored = false;
+    if (!feasible && problem.margins && restore(problem, xTrial)) {
+      evaluations++;
+      feasible = problem.residuals(xTrial, rTrial);
+      restored = feasible;
+    }
     if (!feasible) {
       // bisect along the step for the farthest feasible point
       let lo = 0;
@@ -295,15 +302,8 @@ export function boundedLevenbergMarquardt(problem: LeastSquaresProblem, x0: Arra
     let accepted = false;
     let smallStep = true;
     if (feasible) {
-      // the step actually taken, and the linear model's reduction for it
-      let predicted = 0;
-      for (let p = 0; p < n; p++) {
-        const dp = xTrial[p] - x[p];
-        let ad = 0;
-        for (let q = 0; q < n; q++) ad += a[n * p + q] * (xTrial[q] - x[q]);
-        predicted -= dp * g[p] + 0.5 * dp * ad;
-        if (Math.abs(dp) > STEP_TOLERANCE * problem.step[p]) smallStep = false;
-      }
+      const predicted = restored ? modelled : linearReduction(a, g, x, xTrial, n);
+      for (let p = 0; p < n; p++) if (Math.abs(xTrial[p] - x[p]) > STEP_TOLERANCE * problem.step[p]) smallStep = false;
       const trialCost = 0.5 * sumSquares(rTrial);
       const actual = cost - trialCost;
       const rho = predicted > 0 ? actual / predicted : -1;
@@ -336,6 +336,57 @@ export function boundedLevenbergMarquardt(problem: LeastSquaresProblem, x0: Arra
   return { x, residuals: r, cost, iterations, evaluations, converged: stopReason !== "iterations", stopReason };
 }
 
+/**
+ * Moves x back inside the margins it breaks (a second-order correction for curved
+ * constraints: the linearised step leaves a curved edge by its curvature times the step
+ * squared). Each pass takes the most broken margin g to a hair inside by the shortest
+ * move in the metric of the difference steps S, x -= (g - target) S^2 grad g / |S grad g|^2,
+ * then clips x into the box. Returns whether x ends inside every margin.
+ */
+function restore(problem: LeastSquaresProblem, x: Float64Array): boolean {
+  const n = problem.size;
+  const xp = new Float64Array(n);
+  for (let pass = 0; pass < RESTORATIONS; pass++) {
+    const margins = Array.from(problem.margins!(x));
+    let worst = -1;
+    for (let c = 0; c < margins.length; c++) if (margins[c] <= 0 && (worst < 0 || margins[c] < margins[worst])) worst = c;
+    if (worst < 0) return true;
+    const grad = new Float64Array(n);
+    xp.set(x);
+    for (let j = 0; j < n; j++) {
+      const h = MARGIN_STEP * problem.step[j];
+      xp[j] = x[j] + h;
+      const gp = problem.margins!(xp)[worst];
+      xp[j] = x[j] - h;
+      const gm = problem.margins!(xp)[worst];
+      xp[j] = x[j];
+      grad[j] = (gp - gm) / (2 * h);
+    }
+    let reach = 0;
+    let norm2 = 0;
+    for (let j = 0; j < n; j++) {
+      reach += Math.abs(grad[j]) * problem.step[j];
+      norm2 += (grad[j] * problem.step[j]) ** 2;
+    }
+    if (!(norm2 > 0)) return false;
+    const shift = (margins[worst] - RESTORE_INSIDE * reach) / norm2;
+    for (let j = 0; j < n; j++) x[j] = Math.min(problem.upper[j], Math.max(problem.lower[j], x[j] - shift * problem.step[j] * problem.step[j] * grad[j]));
+  }
+  return Array.from(problem.margins!(x)).every((g) => g > 0);
+}
+
+/** The linear model's cost reduction for the move x -> y: -(g.d + 1/2 d^T A d), d = y - x. */
+function linearReduction(a: Float64Array, g: Float64Array, x: Float64Array, y: Float64Array, n: number): number {
+  let predicted = 0;
+  for (let p = 0; p < n; p++) {
+    const dp = y[p] - x[p];
+    let ad = 0;
+    for (let q = 0; q < n; q++) ad += a[n * p + q] * (y[q] - x[q]);
+    predicted -= dp * g[p] + 0.5 * dp * ad;
+  }
+  return predicted;
+}
+
 /** d^T A d for n x n row-major A. */
 function quadraticForm(a: Float64Array, d: Float64Array, n: number): number {
   let s = 0;
@@ -352,42 +403,16 @@ function heldAtBound(problem: LeastSquaresProblem, x: Float64Array, j: number, d
   return (x[j] <= problem.lower[j] && direction < 0) || (x[j] >= problem.upper[j] && direction > 0);
 }
 
-/** An orthonormal basis (rows) of the vectors orthogonal to every row of `rows`. */
-function nullSpaceBasis(rows: readonly Float64Array[], n: number): Float64Array[] {
-  const span: Float64Array[] = [];
-  const orthogonalise = (v: Float64Array, against: Float64Array[]): boolean => {
-    for (let pass = 0; pass < 2; pass++) {
-      for (const q of against) {
-        let dot = 0;
-        for (let i = 0; i < n; i++) dot += v[i] * q[i];
-        for (let i = 0; i < n; i++) v[i] -= dot * q[i];
-      }
-    }
-    const len = Math.hypot(...v);
-    if (!(len > BASIS_TOLERANCE)) return false;
-    for (let i = 0; i < n; i++) v[i] /= len;
-    return true;
-  };
-  for (const row of rows) {
-    const len = Math.hypot(...row);
-    if (!(len > 0)) continue;
-    const v = Float64Array.from(row, (c) => c / len);
-    if (orthogonalise(v, span)) span.push(v);
-  }
-  const basis: Float64Array[] = [];
-  for (let j = 0; j < n && span.length + basis.length < n; j++) {
-    const v = new Float64Array(n);
-    v[j] = 1;
-    if (orthogonalise(v, [...span, ...basis])) basis.push(v);
-  }
-  return basis;
-}
-
 /**
- * The damped step on the null space of the active constraints (module header): box-held
- * unknowns and margins at their edge that the step would cross are added until none is.
+ * The damped step subject to linear equalities C d = b (module header): the rows are
+ * orthonormalised by Gram-Schmidt, C = R Q with R lower triangular (a row that depends
+ * on earlier ones is dropped); the particular solution d_p = Q^T y, R y = b, is the
+ * shortest one; the rest lies in the null space Z (orthonormal, completing Q), where
+ * (Z^T H Z) c = -Z^T (g + H d_p), d = d_p + Z c. Rows are added while the step crosses a
+ * box bound (row e_j, b = bound - x_j: stop at it) or a linearised margin
+ * (row grad, b = -margin: stop on its edge).
  */
-function constrainedStep(problem: LeastSquaresProblem, x: Float64Array, edges: Edges, a: Float64Array, g: Float64Array, mu: number, d: Float64Array): void {
+function constrainedStep(problem: LeastSquaresProblem, x: Float64Array, linear: Linearised, a: Float64Array, g: Float64Array, mu: number, d: Float64Array): void {
   const n = problem.size;
   let maxDiag = 0;
   for (let j = 0; j < n; j++) maxDiag = Math.max(maxDiag, a[n * j + j]);
@@ -395,59 +420,111 @@ function constrainedStep(problem: LeastSquaresProblem, x: Float64Array, edges: E
   // H = A + mu diag(A) (floored)
   const h = Float64Array.from(a);
   for (let j = 0; j < n; j++) h[n * j + j] += mu * Math.max(a[n * j + j], floor);
-  const rows: Float64Array[] = [];
-  const held = new Set<number>();
-  const used = new Set<number>();
-  for (let round = 0; round <= n + edges.active.length; round++) {
-    const z = nullSpaceBasis(rows, n);
-    const k = z.length;
+  const q: Float64Array[] = []; // orthonormal rows
+  const y: number[] = []; // d_p = sum y_i q_i
+  const boxRow = new Set<number>();
+  const marginRow = new Set<number>();
+  const addRow = (row: Float64Array, rhs: number): void => {
+    // row = sum_i r_i q_i + r_new q_new; the constraint row . d = rhs fixes y_new
+    const v = Float64Array.from(row);
+    const len0 = Math.hypot(...v);
+    if (!(len0 > 0)) return;
+    let known = 0;
+    for (let pass = 0; pass < 2; pass++) {
+      for (let i = 0; i < q.length; i++) {
+        let dot = 0;
+        for (let k = 0; k < n; k++) dot += v[k] * q[i][k];
+        for (let k = 0; k < n; k++) v[k] -= dot * q[i][k];
+      }
+    }
+    for (let i = 0; i < q.length; i++) {
+      let r = 0;
+      for (let k = 0; k < n; k++) r += row[k] * q[i][k];
+      known += r * y[i];
+    }
+    const len = Math.hypot(...v);
+    if (!(len > BASIS_TOLERANCE * len0)) return; // depends on the rows already there
+    for (let k = 0; k < n; k++) v[k] /= len;
+    q.push(v);
+    y.push((rhs - known) / len);
+  };
+  for (let round = 0; round <= n + linear.values.length; round++) {
+    // the null space of the rows so far
+    const z: Float64Array[] = [];
+    for (let j = 0; j < n && q.length + z.length < n; j++) {
+      const v = new Float64Array(n);
+      v[j] = 1;
+      for (let pass = 0; pass < 2; pass++) {
+        for (const b of [...q, ...z]) {
+          let dot = 0;
+          for (let k = 0; k < n; k++) dot += v[k] * b[k];
+          for (let k = 0; k < n; k++) v[k] -= dot * b[k];
+        }
+      }
+      const len = Math.hypot(...v);
+      if (len > BASIS_TOLERANCE) {
+        for (let k = 0; k < n; k++) v[k] /= len;
+        z.push(v);
+      }
+    }
     d.fill(0);
-    if (k === 0) return;
-    // (Z^T H Z) c = -Z^T g, d = Z c
-    const sub = new Float64Array(k * k);
-    const rhs = new Float64Array(k);
-    const c = new Float64Array(k);
-    const hz = z.map((zv) => {
-      const out = new Float64Array(n);
+    for (let i = 0; i < q.length; i++) for (let k = 0; k < n; k++) d[k] += y[i] * q[i][k];
+    const kz = z.length;
+    if (kz > 0) {
+      // rhs = -Z^T (g + H d_p)
+      const hdp = new Float64Array(n);
       for (let i = 0; i < n; i++) {
-        let s = 0;
-        for (let l = 0; l < n; l++) s += h[n * i + l] * zv[l];
-        out[i] = s;
+        let t = g[i];
+        for (let k = 0; k < n; k++) t += h[n * i + k] * d[k];
+        hdp[i] = t;
       }
-      return out;
-    });
-    for (let p = 0; p < k; p++) {
-      let s = 0;
-      for (let i = 0; i < n; i++) s += z[p][i] * g[i];
-      rhs[p] = -s;
-      for (let q = 0; q < k; q++) {
+      const sub = new Float64Array(kz * kz);
+      const rhs = new Float64Array(kz);
+      const c = new Float64Array(kz);
+      const hz = z.map((zv) => {
+        const out = new Float64Array(n);
+        for (let i = 0; i < n; i++) {
+          let t = 0;
+          for (let k = 0; k < n; k++) t += h[n * i + k] * zv[k];
+          out[i] = t;
+        }
+        return out;
+      });
+      for (let p = 0; p < kz; p++) {
         let t = 0;
-        for (let i = 0; i < n; i++) t += z[p][i] * hz[q][i];
-        sub[k * p + q] = t;
+        for (let i = 0; i < n; i++) t += z[p][i] * hdp[i];
+        rhs[p] = -t;
+        for (let r = 0; r < kz; r++) {
+          let u = 0;
+          for (let i = 0; i < n; i++) u += z[p][i] * hz[r][i];
+          sub[kz * p + r] = u;
+        }
       }
+      if (!choleskySolve(sub, rhs, kz, c)) {
+        // not positive definite (rounding in a near-zero block): a scaled gradient step instead
+        for (let p = 0; p < kz; p++) c[p] = rhs[p] / Math.max(sub[kz * p + p], floor);
+      }
+      for (let p = 0; p < kz; p++) for (let i = 0; i < n; i++) d[i] += c[p] * z[p][i];
     }
-    if (!choleskySolve(sub, rhs, k, c)) {
-      // not positive definite (rounding in a near-zero block): a scaled gradient step instead
-      for (let p = 0; p < k; p++) c[p] = rhs[p] / Math.max(sub[k * p + p], floor);
-    }
-    for (let p = 0; p < k; p++) for (let i = 0; i < n; i++) d[i] += c[p] * z[p][i];
     let added = false;
     for (let j = 0; j < n; j++) {
-      if (!held.has(j) && heldAtBound(problem, x, j, d[j])) {
-        held.add(j);
+      if (boxRow.has(j)) continue;
+      const lo = problem.lower[j] - x[j], hi = problem.upper[j] - x[j];
+      if (d[j] < lo || d[j] > hi) {
+        boxRow.add(j);
         const e = new Float64Array(n);
         e[j] = 1;
-        rows.push(e);
+        addRow(e, d[j] < lo ? lo : hi);
         added = true;
       }
     }
-    edges.active.forEach((grad, idx) => {
-      if (used.has(idx)) return;
-      let s = 0;
-      for (let i = 0; i < n; i++) s += grad[i] * d[i];
-      if (s < 0) {
-        used.add(idx);
-        rows.push(grad);
+    linear.grads.forEach((grad, c) => {
+      if (marginRow.has(c)) return;
+      let t = linear.values[c];
+      for (let i = 0; i < n; i++) t += grad[i] * d[i];
+      if (t < 0) {
+        marginRow.add(c);
+        addRow(grad, -linear.values[c]);
         added = true;
       }
     });
