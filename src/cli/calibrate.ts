@@ -23,7 +23,7 @@ export function registerCalibrate(y: Argv): Argv {
           .option("json", { type: "boolean", default: false, describe: "print the report as JSON" })
           .example("$0 calibrate --lab tunnel.csv --out out/my-lab.json", "fit every calibratable parameter to a lab's forces")
           .example("$0 calibrate --lab tunnel.csv --fit scale,laminarSeparationDeg --json", "fit two, print JSON")
-          .example("$0 flight --demo --model out/my-lab.json", "use the fitted profile"),
+          .example("$0 flight --demo --pitch-name 'Iris Talvela/sinker' --axis 20N,45E --model out/my-lab.json", "use the fitted profile"),
       ),
     async (argv) => {
       const jobs = await import("../jobs/calibrate.js");

@@ -392,11 +392,14 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
   const reasons = new Map<SeamModelParameterName, string>();
   if (tripleFitted) {
     // exact, whatever the data (the module header): name all three whichever way the singular vector leans
+    const why = `the force depends on scale * (1 - wakePressureCoefficient) and scale * suctionFactor only, so no data fix all three (fit at most two of them)`;
     for (const name of TRIPLE) {
       unseen.add(fit.indexOf(name));
       reasons.set(
         name,
-        `scale, wakePressureCoefficient and suctionFactor enter the force only as scale * (1 - wakePressureCoefficient) and scale * suctionFactor, so no data can fix all three: suctionFactor was held at its start value ${start.values.suctionFactor} and the other two fitted with it (fit at most two of them)`,
+        name === "suctionFactor"
+          ? `held at its start value ${start.values.suctionFactor}: ${why}`
+          : `fitted with suctionFactor held at ${start.values.suctionFactor}, so its value rests on that choice: ${why}`,
       );
     }
   }
