@@ -217,14 +217,15 @@ export function calibrateText(o: CalibrateOutcome): string {
   const r = o.result;
   const rows = r.rows;
   const value = (x: number, unit: string) => (unit === "deg" ? fixed(x, 2) : fixed(x, 4));
-  const sigma = (x: number | undefined, unit: string) => (x === undefined ? "-" : unit === "deg" ? fixed(x, 2) : fixed(x, 4));
+  const sigma = (x: number | undefined, unit: string) => (x === undefined ? "-" : x >= 1000 ? x.toExponential(1) : unit === "deg" ? fixed(x, 2) : fixed(x, 4));
+  const plural = (k: number, word: string) => `${k} ${word}${k === 1 ? "" : "s"}`;
   const width = Math.max(...r.parameters.map((p) => p.name.length), 9);
   const kinds = [
     ...(rows.lab ? [`${rows.lab} lab (${rows.labTurnAveraged} turn-averaged)`] : []),
     ...(rows.tracked ? [`${rows.tracked} tracked`] : []),
   ].join(", ");
   const lines = [
-    `profile "${r.profile.name}" (${r.profile.hash}) fitted from "${r.start.name}" (${r.start.hash}) to ${rows.lab + rows.tracked} rows: ${kinds}${o.rows.skipped ? `; ${o.rows.skipped} bad row(s) skipped` : ""}`,
+    `profile "${r.profile.name}" (${r.profile.hash}) fitted from "${r.start.name}" (${r.start.hash}) to ${plural(rows.lab + rows.tracked, "row")}: ${kinds}${o.rows.skipped ? `; ${plural(o.rows.skipped, "bad row")} skipped` : ""}`,
     "",
     `  ${"parameter".padEnd(width)}  ${"start".padStart(9)}  ${"fitted".padStart(9)}  ${"1 sigma".padStart(8)}  unit`,
     ...r.parameters.map(
