@@ -71,3 +71,8 @@ export {
   type SeamModel, type SeamModelProfile, type TurnAverage,
 } from "./physics/seamModel/index.js";
 export { InputError } from "./io/errors.js";
+// calibrate: fit the seam-force model's parameters to a lab's forces and tracked seam movement
+export {
+  calibratableNames, calibrateSeamModel, syntheticLabRows, unitSeamMovementArmSide,
+  type CalibrationOptions, type CalibrationResult, type LabObservation, type TrackedObservation,
+} from "./physics/calibrate/index.js";

@@ -26,6 +26,8 @@ import { spinVector } from "../physics/pitchFlight.js";
 import { seamHookTimeResolved, seamHookTurnAverage } from "../physics/seamModel/hooks.js";
 import { seamModel } from "../physics/seamModel/model.js";
 import { turnAverage } from "../physics/seamModel/turn.js";
+import { calibratableNames, calibrateSeamModel, syntheticLabRows } from "../physics/calibrate/index.js";
+import { defaultProfile, resolveProfile } from "../physics/seamModel/parameters.js";
 
 const BRUTE_STEPS = 720;
 
@@ -188,6 +190,16 @@ async function main(): Promise<void> {
   const tAtlas = performance.now();
   const atlas = await runAtlas(parseAtlas({ demo: true }));
   const atlasSeconds = (performance.now() - tAtlas) / 1000;
+  // calibrate: 1,000 lab rows made by the model from a planted profile (a quarter turn-averaged, 0.01 N of noise),
+  // every calibratable parameter fitted from the defaults, as `seam-atlas calibrate --lab FILE` does
+  const planted = resolveProfile(
+    { name: "planted", parameters: { scale: 0.6, wakePressureCoefficient: -0.35, laminarSeparationDeg: 82, turbulentSeparationDeg: 115, tripStartDeg: 13.3, tripEndDeg: 44.6 } },
+    "bench",
+  );
+  const calibrationRows = syntheticLabRows({ profile: planted, count: 1000, seed: 1, noiseN: 0.01, turnAveragedShare: 0.25 }).map((x) => x.observation);
+  const tCal = performance.now();
+  const calibration = calibrateSeamModel({ start: defaultProfile(), fit: calibratableNames(), lab: calibrationRows, sigmaN: 0.01 });
+  const calibrateSeconds = (performance.now() - tCal) / 1000;
   const mem = process.memoryUsage();
   const result = {
     tool: "seam-atlas",
@@ -215,6 +227,14 @@ async function main(): Promise<void> {
     seamModel: { turnAveragesPerSecond: Math.round(turnAveragesPerSecond), profileHash: model.profile.hash },
     atlas: { seconds: Math.round(atlasSeconds * 100) / 100, pages: atlas.pages, bytes: atlas.bytes.length },
     explain: { rowsPerSecond: Math.round(explainRowsPerSecond), rows },
+    calibrate: {
+      seconds: Math.round(calibrateSeconds * 10) / 10,
+      rows: calibrationRows.length,
+      turnAveraged: calibration.rows.labTurnAveraged,
+      parameters: calibration.parameters.length,
+      iterations: calibration.method.iterations,
+      modelEvaluations: calibration.method.evaluations,
+    },
     startup: start,
     memory: { rssMB: Math.round(mem.rss / 1e5) / 10, heapUsedMB: Math.round(mem.heapUsed / 1e5) / 10 },
   };
@@ -239,6 +259,7 @@ async function main(): Promise<void> {
       `  time-resolved flight ${result.flight.timeResolvedPerSecond.toLocaleString("en-US")} pitches/s (a new 360-phase timeline each; target >= 500)`,
       `  explain              ${result.explain.rowsPerSecond} rows/s over ${rows} rows with varied gyro (target >= 200)`,
       `  atlas, demo staff    ${result.atlas.seconds} s, ${result.atlas.pages} pages (target <= 15 s)`,
+      `  calibrate            ${result.calibrate.seconds} s for ${result.calibrate.rows.toLocaleString("en-US")} lab rows (${result.calibrate.turnAveraged} turn-averaged), ${result.calibrate.parameters} parameters, ${result.calibrate.modelEvaluations} evaluations (target <= 30 s)`,
       `  start, --help        ${start.helpSeconds} s, ${start.helpOverNode}x node -e 0 (${start.nodeSeconds} s; target <= 3x; best of 7 processes)`,
       `  start, measure       ${start.measureSeconds} s for measure --axis waist-A, ${start.measureOverNode}x node -e 0 (target <= 5x)`,
       `  memory               ${result.memory.rssMB} MB resident`,

@@ -14,9 +14,10 @@ import { registerExplain } from "./explain.js";
 import { registerPaper } from "./paper.js";
 import { registerView } from "./view.js";
 import { registerForce } from "./force.js";
+import { registerCalibrate } from "./calibrate.js";
 
 /** The commands, in the order --help lists them in words. */
-export const COMMANDS = ["atlas", "card", "handout", "view", "screen", "measure", "flight", "force", "explain", "landmarks"] as const;
+export const COMMANDS = ["atlas", "card", "handout", "view", "screen", "measure", "flight", "force", "explain", "calibrate", "landmarks"] as const;
 
 export async function main(args: string[]): Promise<void> {
   refuseByteOrderMarks(args);
@@ -42,6 +43,7 @@ export async function main(args: string[]): Promise<void> {
   cli = registerView(cli);
   cli = registerForce(cli);
   cli = registerLandmarks(cli);
+  cli = registerCalibrate(cli);
   await cli.parseAsync();
 }
 

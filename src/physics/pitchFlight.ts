@@ -36,7 +36,7 @@ import { seamHookTimeResolved, seamHookTurnAverage } from "./seamModel/hooks.js"
 import type { SeamModel } from "./seamModel/model.js";
 import { turnAverage, type TurnAverage } from "./seamModel/turn.js";
 import type { SeamForceHook } from "./forces.js";
-import { TRADE_WINDOW_START_M, tradeMovement, type TradeBreak } from "./tradeMovement.js";
+import { TRADE_WINDOW_START_M, tradeMovement, type TradeBreak, type TradeMovement } from "./tradeMovement.js";
 import { tradeMovementParts, type TradeMovementParts } from "./tradeMovementParts.js";
 import { recordFlight } from "./trajectory.js";
 
@@ -259,12 +259,17 @@ export function tradeArmSide(b: TradeBreak, hand: Pitch["hand"]): { armSideM: nu
   return { armSideM: toArmSide(b.horizontalBreakM, b.inducedVerticalBreakM, hand).armSideM, verticalM: b.inducedVerticalBreakM };
 }
 
+/** The coefficient of the probe flights that measure the seam movement per unit coefficient (central differences). */
+export const UNIT_PROBE_COEFFICIENT = 0.05;
+
 /**
- * Seam movement per unit coefficient for a pitch (trade basis, m): the seam part of a
- * flight whose seam force has the constant coefficient (1, 0) along a, and (0, 1)
- * along m. The seam force is small beside gravity and drag, so the seam part is close
- * to linear in the coefficient: S(c) ~ c_a J_a + c_m J_m (the screen's map uses this;
- * the listed grips are flown in full).
+ * Seam movement per unit coefficient for a pitch (trade basis, m): the slope of the
+ * seam part of the flight in a constant coefficient along a, and along m, by central
+ * differences at +-UNIT_PROBE_COEFFICIENT (a realistic size: a whole unit would be a
+ * force of several newtons and bend the path, 10-15 % off linear). The seam force is
+ * small beside gravity and drag, so the seam part is close to linear in the
+ * coefficient: S(c) ~ c_a J_a + c_m J_m (the screen's map uses this; the listed grips
+ * are flown in full).
  */
 export function unitSeamMovement(
   pitch: Pitch,
@@ -275,11 +280,14 @@ export function unitSeamMovement(
   const base: FlightOptions = { air, ...(options.drag ? { drag: options.drag } : {}) };
   const { launch } = pitchLaunch({ pitch, release: options.release }, base);
   const fit = { windowStartM: options.windowStartM ?? TRADE_WINDOW_START_M };
-  const spinless = tradeMovement(recordFlight(launch, { ...base, magnus: false }).samples, fit);
-  const unit = (across: number, alongMagnus: number): TradeBreak => {
+  const seamPart = (across: number, alongMagnus: number): TradeMovement => {
     const hook = seamHookTurnAverage(model, [0, 0, 1], pitch.gyroRad, { across, alongMagnus });
-    const t = tradeMovement(recordFlight(launch, { ...base, magnus: false, seamForce: hook }).samples, fit);
-    return { horizontalBreakM: t.horizontalBreakM - spinless.horizontalBreakM, inducedVerticalBreakM: t.inducedVerticalBreakM - spinless.inducedVerticalBreakM };
+    return tradeMovement(recordFlight(launch, { ...base, magnus: false, seamForce: hook }).samples, fit);
   };
-  return { across: unit(1, 0), alongMagnus: unit(0, 1), launch };
+  const d = UNIT_PROBE_COEFFICIENT;
+  const slope = (plus: TradeMovement, minus: TradeMovement): TradeBreak => ({
+    horizontalBreakM: (plus.horizontalBreakM - minus.horizontalBreakM) / (2 * d),
+    inducedVerticalBreakM: (plus.inducedVerticalBreakM - minus.inducedVerticalBreakM) / (2 * d),
+  });
+  return { across: slope(seamPart(d, 0), seamPart(-d, 0)), alongMagnus: slope(seamPart(0, d), seamPart(0, -d)), launch };
 }

@@ -49,3 +49,24 @@ export function explainCsvRow(r: ExplainedRow): string {
     ]) + "\n"
   );
 }
+
+// ---- calibrate (a self-contained block, its imports here rather than at the top, for easy merges) ----
+
+import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
+
+const CALIBRATE_RESIDUAL_COLUMNS = [
+  "kind", "line", "label",
+  "measured_magnus_n", "measured_across_n", "start_magnus_n", "start_across_n", "fitted_magnus_n", "fitted_across_n",
+  "measured_arm_in", "measured_up_in", "start_arm_in", "start_up_in", "fitted_arm_in", "fitted_up_in",
+];
+
+/** Each row's measured, start and fitted values (newtons for lab rows, inches for tracked ones), in file order. */
+export function calibrateResidualsCsv(o: CalibrateOutcome): string {
+  const out = [csvRow(CALIBRATE_RESIDUAL_COLUMNS)];
+  for (const row of calibrationNumbers(o).rows) {
+    const values = [...row.measured, ...row.start, ...row.fitted];
+    const blank = ["", "", "", "", "", ""];
+    out.push(csvRow([row.kind, row.line, row.label, ...(row.kind === "lab" ? [...values, ...blank] : [...blank, ...values])]));
+  }
+  return out.join("\n") + "\n";
+}

@@ -186,3 +186,64 @@ export function forceDocument(r: ForceResult) {
     })),
   };
 }
+
+// ---- calibrate (a self-contained block, its imports here rather than at the top, for easy merges) ----
+
+import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
+import { profileParameters } from "../../physics/calibrate/fit.js";
+
+/** The fitted profile as a --model file: { "name": ..., "parameters": { every parameter, table order } }. */
+export function calibratedProfileDocument(o: CalibrateOutcome) {
+  const p = o.result.profile;
+  return { name: p.name, parameters: profileParameters(p.values) };
+}
+
+/** The calibration report (README, "Calibrating the model to your lab"). */
+export function calibrateDocument(o: CalibrateOutcome) {
+  const r = o.result;
+  const j = o.job;
+  const numbers = calibrationNumbers(o);
+  return {
+    ...head("calibrate"),
+    input: {
+      lab: j.labPath ?? null,
+      tracked: j.trackedPath ?? null,
+      fit: j.fit,
+      start: { name: r.start.name, hash: r.start.hash, file: j.start.source ?? null },
+      sigmaN: j.sigmaN,
+      sigmaIn: j.sigmaIn,
+      densityKgM3: j.air.densityKgM3,
+      windowFt: numbers.windowFt,
+    },
+    parameters: r.parameters.map((p) => ({
+      name: p.name,
+      value: p.value,
+      uncertainty: p.uncertainty ?? null,
+      unit: p.unit,
+      atBound: p.atBound !== undefined,
+      bound: p.atBound ?? null,
+      start: p.start,
+    })),
+    notIdentified: r.notIdentified.map((n) => ({ name: n.name, reason: n.reason })),
+    rmsBeforeN: numbers.rmsBeforeN ?? null,
+    rmsAfterN: numbers.rmsAfterN ?? null,
+    rmsBeforeIn: numbers.rmsBeforeIn ?? null,
+    rmsAfterIn: numbers.rmsAfterIn ?? null,
+    rows: r.rows.lab + r.rows.tracked,
+    rowsByKind: { lab: r.rows.lab, labTurnAveraged: r.rows.labTurnAveraged, tracked: r.rows.tracked },
+    skippedRows: o.rows.skipped,
+    method: {
+      search: r.method.search,
+      iterations: r.method.iterations,
+      modelEvaluations: r.method.evaluations,
+      converged: r.method.converged,
+      stopReason: r.method.stopReason,
+      uncertainty: "1-sigma from the Gauss-Newton covariance s^2 (J^T J)^-1 at the optimum, s^2 the residual variance of the weighted residuals",
+      residualVariance: r.method.residualVariance,
+      degreesOfFreedom: r.method.degreesOfFreedom,
+      relativeSingularValues: r.method.relativeSingularValues,
+      correlation: r.method.correlation.map((row) => row.map((c) => (Number.isFinite(c) ? c : null))),
+    },
+    profile: { name: r.profile.name, hash: r.profile.hash },
+  };
+}

@@ -204,3 +204,44 @@ export function forceText(r: ForceResult): string {
     `    along Magnus  + |${mu}|\n                  - |${md}|\n`
   );
 }
+
+// ---- calibrate (a self-contained block, its imports here rather than at the top, for easy merges) ----
+
+import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
+
+/** The calibration as a short table: parameters, rms before and after, what the data cannot pin down. */
+export function calibrateText(o: CalibrateOutcome): string {
+  const r = o.result;
+  const rows = r.rows;
+  const value = (x: number, unit: string) => (unit === "deg" ? fixed(x, 2) : fixed(x, 4));
+  const sigma = (x: number | undefined, unit: string) => (x === undefined ? "-" : x >= 1000 ? x.toExponential(1) : unit === "deg" ? fixed(x, 2) : fixed(x, 4));
+  const plural = (k: number, word: string) => `${k} ${word}${k === 1 ? "" : "s"}`;
+  const width = Math.max(...r.parameters.map((p) => p.name.length), 9);
+  const kinds = [
+    ...(rows.lab ? [`${rows.lab} lab (${rows.labTurnAveraged} turn-averaged)`] : []),
+    ...(rows.tracked ? [`${rows.tracked} tracked`] : []),
+  ].join(", ");
+  const lines = [
+    `profile "${r.profile.name}" (${r.profile.hash}) fitted from "${r.start.name}" (${r.start.hash}) to ${plural(rows.lab + rows.tracked, "row")}: ${kinds}${o.rows.skipped ? `; ${plural(o.rows.skipped, "bad row")} skipped` : ""}`,
+    "",
+    `  ${"parameter".padEnd(width)}  ${"start".padStart(9)}  ${"fitted".padStart(9)}  ${"1 sigma".padStart(8)}  unit`,
+    ...r.parameters.map(
+      (p) =>
+        `  ${p.name.padEnd(width)}  ${value(p.start, p.unit).padStart(9)}  ${value(p.value, p.unit).padStart(9)}  ${sigma(p.uncertainty, p.unit).padStart(8)}  ${p.unit}${p.atBound !== undefined ? "   at a limit" : ""}`,
+    ),
+    "",
+  ];
+  const numbers = calibrationNumbers(o);
+  if (numbers.rmsBeforeN !== undefined) lines.push(`  rms force        ${fixed(numbers.rmsBeforeN, 4)} N before, ${fixed(numbers.rmsAfterN!, 4)} N after (sigma ${o.job.sigmaN} N)`);
+  if (numbers.rmsBeforeIn !== undefined) lines.push(`  rms movement     ${fixed(numbers.rmsBeforeIn, 2)} in before, ${fixed(numbers.rmsAfterIn!, 2)} in after (sigma ${o.job.sigmaIn} in)`);
+  const m = r.method;
+  lines.push(
+    `  search           ${m.search}${m.search === "closed form" ? "" : `, ${m.iterations} iterations, ${m.converged ? `stopped: ${m.stopReason}` : "NOT converged (iteration cap)"}`}; residual variance ${fixed(m.residualVariance, 3)} (about 1 when the sigmas match the scatter)`,
+    `  uncertainties    1 sigma from the Gauss-Newton covariance s^2 (J^T J)^-1 at the optimum`,
+  );
+  if (r.notIdentified.length) {
+    lines.push("", "  not pinned down by these data:");
+    for (const n of r.notIdentified) lines.push(`    ${n.name}: ${n.reason}`);
+  }
+  return lines.join("\n") + "\n";
+}

@@ -143,8 +143,8 @@ export const SEAM_MODEL_PARAMETERS: readonly SeamModelParameter[] = [
     min: 0.5,
     max: 1,
     source:
-      "potential flow past a sphere, Cp = 1 - (9/4) sin^2 theta (e.g. J. Katz, Automotive Aerodynamics, Wiley 2016, eq. 6.75) at 1; measured sphere pressures have weaker suction (common practice, no source)",
-    calibratable: true,
+      "potential flow past a sphere, Cp = 1 - (9/4) sin^2 theta (e.g. J. Katz, Automotive Aerodynamics, Wiley 2016, eq. 6.75) at 1; measured sphere pressures have weaker suction (common practice, no source). Not fitted by calibrate: with scale and the wake pressure it enters the force only through two combinations, scale (1 - Cp_b) and scale lambda, so the three cannot be told apart (DEVELOPERS.md, Calibration)",
+    calibratable: false,
     description: "lambda in Cp = 1 - lambda (9/4) sin^2 theta ahead of separation",
   },
   {
