@@ -4,7 +4,6 @@
  * Frames: the ball frame of geometry/seamCurve.ts; the view of projection.ts.
  * Visual language: ballStyle.ts.
  */
-import type { Container, G } from "@svgdotjs/svg.js";
 import { assertSeamPointCount } from "../../geometry/seamSamples.js";
 import type { Vec3 } from "../../geometry/vec.js";
 import { seamPaths, SEAM_HALF_WIDTH_RAD, stitchMarks } from "./ballSeam.js";
@@ -14,8 +13,7 @@ import {
 } from "./ballOverlays.js";
 import { BALL_STYLE as S } from "./ballStyle.js";
 import type { DiscPlacement, View } from "./projection.js";
-import { createSvgCanvas, DEFAULT_SVG_DIGITS, serializeSvg } from "./svgContext.js";
-import { addText } from "./svgText.js";
+import { addText, createScene, DEFAULT_SCENE_DIGITS, serializeScene, type SceneNode } from "./scene.js";
 
 export interface BallOverlays {
   /** Spin axis, ball frame, pointing at the positive end (right-hand rule). */
@@ -85,7 +83,7 @@ function layoutLegend(kinds: readonly LegendKind[], widthPx: number): { kind: Le
   return out;
 }
 
-function drawLegendSwatch(g: Container, kind: LegendKind, x: number, y: number): void {
+function drawLegendSwatch(g: SceneNode, kind: LegendKind, x: number, y: number): void {
   const line = (attrs: Record<string, string | number>) => g.path().attr({ d: `M${x} ${y}L${x + 18} ${y}`, fill: "none", ...attrs });
   if (kind === "seam") {
     line({ stroke: S.seamBand, "stroke-width": 6 });
@@ -109,9 +107,14 @@ function drawLegendSwatch(g: Container, kind: LegendKind, x: number, y: number):
  * Throws RangeError for an invalid seam shape, option or overlay.
  */
 export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}): string {
+  return serializeScene(ballScene(model, options), options.digits ?? DEFAULT_SCENE_DIGITS, options.idPrefix ?? "sa");
+}
+
+/** The ball drawing as drawing commands (render/scene.ts), for SVG, PDF and PNG alike; see renderBallSvg. */
+export function ballScene(model: BallModel, options: BallDrawingOptions = {}): SceneNode {
   const sizePx = options.sizePx ?? 360;
   if (!(sizePx >= 120 && sizePx <= 4000)) throw new RangeError(`drawing size ${sizePx} px must be from 120 to 4000 px`);
-  const digits = options.digits ?? DEFAULT_SVG_DIGITS;
+  const digits = options.digits ?? DEFAULT_SCENE_DIGITS;
   const seamPoints = options.seamPoints ?? 1024;
   assertSeamPointCount(seamPoints);
   const prefix = options.idPrefix ?? "sa";
@@ -132,7 +135,7 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
   const heightPx = titlePx + sizePx + captionPx + legendPx;
   const disc: DiscPlacement = { radiusPx: 0.36 * sizePx, centerXPx: sizePx / 2, centerYPx: titlePx + sizePx / 2 };
 
-  const draw = createSvgCanvas(sizePx, heightPx).attr({ "font-family": S.font });
+  const draw = createScene(sizePx, heightPx).attr({ "font-family": S.font });
   if (model.title) draw.element("title").words(model.title);
   const shade = draw
     .gradient("radial", (add) => {
@@ -144,7 +147,7 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
     // light from the upper left: the highlight sits up and left of the centre
     .attr({ cx: "40%", cy: "36%", r: "70%", fx: "34%", fy: "28%" });
 
-  const under: G = draw.group().attr({ class: "sa-under" });
+  const under: SceneNode = draw.group().attr({ class: "sa-under" });
   draw.circle().attr({ cx: disc.centerXPx, cy: disc.centerYPx, r: disc.radiusPx, fill: `url(#${shade.id()})`, class: "sa-cover" });
   const surface = draw.group().attr({ class: "sa-surface" });
   if (ov.flowBand) drawFlowBand(surface, model.view, disc, ov.flowBand, digits);
@@ -174,7 +177,7 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
 
   if (model.title) addText(draw, sizePx / 2, 21, model.title, { sizePx: 15, fill: S.ink, anchor: "middle", weight: "bold", className: "sa-title" });
   if (model.caption) {
-    addText(draw, sizePx / 2, titlePx + sizePx + 14, model.caption, { sizePx: 11, fill: S.ink, anchor: "middle", italic: true, className: "sa-caption" });
+    addText(draw, sizePx / 2, titlePx + sizePx + 14, model.caption, { sizePx: 11, fill: S.ink, anchor: "middle", className: "sa-caption" });
   }
   if (legend.length) {
     const g = draw.group().attr({ class: "sa-legend" });
@@ -185,5 +188,5 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
       addText(g, item.x + 24, y + 3.5, LEGEND_TEXT[item.kind], { sizePx: LEGEND_FONT_PX, fill: S.ink });
     }
   }
-  return serializeSvg(draw, digits, prefix);
+  return draw;
 }

@@ -2,7 +2,6 @@
  * Overlays on a ball drawing (ball frame; view and disc as in projection.ts; marks
  * and colours as in ballStyle.ts). Each function adds its marks to an svg.js group.
  */
-import type { G } from "@svgdotjs/svg.js";
 import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import { findLandmarks } from "../../geometry/landmarks.js";
 import { cross3, dot3, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
@@ -10,9 +9,8 @@ import type { Band } from "../sampling/band.js";
 import { BALL_STYLE as S } from "./ballStyle.js";
 import { depthRuns, projectPoint, projectPoints, runsWhere, type DiscPlacement, type View } from "./projection.js";
 import { smallCirclePoints } from "./sphereCircle.js";
-import { formatNumber } from "./svgContext.js";
+import { addText, formatNumber, type SceneNode as G } from "./scene.js";
 import { pointsAttribute, polylinePath } from "./svgPath.js";
-import { addText } from "./svgText.js";
 
 /** How far the spin-axis stubs reach beyond the surface, ball radii. */
 const AXIS_STUB_RADII = 0.3;

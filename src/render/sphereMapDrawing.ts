@@ -15,16 +15,14 @@
  * 1 deg spacing (41,240 cells) about 1.3 MB; 2 deg (10,328 cells) about 460 kB, the
  * recommended spacing for print; 3 deg (4,584 cells) about 300 kB, enough on screen.
  */
-import type { G, Svg } from "@svgdotjs/svg.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { sampleSeam } from "../../geometry/seamSamples.js";
 import type { SphereGrid } from "../../geometry/sphereGrid.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
 import { rampColor, VERDIGRIS_NAME } from "./colorScale.js";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "./hammer.js";
-import { createSvgCanvas, serializeSvg } from "./svgContext.js";
+import { addText, createScene, serializeScene, type SceneNode } from "./scene.js";
 import { pointsAttribute, polylinePath, relativePolygonPath } from "./svgPath.js";
-import { addText } from "./svgText.js";
 import { DEG } from "../../geometry/units.js";
 
 export interface MapMarker {
@@ -69,6 +67,11 @@ const SEAM_MAP_POINTS = 1024;
  * Throws RangeError when the lengths differ or an option is out of range.
  */
 export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, options: SphereMapOptions = {}): string {
+  return serializeScene(sphereMapScene(values, grid, options), options.digits ?? 1, options.idPrefix ?? "sa");
+}
+
+/** The sphere map as drawing commands (render/scene.ts), for SVG, PDF and PNG alike; see renderSphereMapSvg. */
+export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: SphereMapOptions = {}): SceneNode {
   if (values.length !== grid.count) throw new RangeError(`${values.length} values for a grid of ${grid.count} cells`);
   const widthPx = options.widthPx ?? 720;
   if (!(widthPx >= 240 && widthPx <= 4000)) throw new RangeError(`map width ${widthPx} px must be from 240 to 4000 px`);
@@ -93,7 +96,7 @@ export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, optio
     out.push(cx + scale * xy[0], cy - scale * xy[1]);
   };
 
-  const draw = createSvgCanvas(widthPx, heightPx).attr({ "font-family": "DejaVu Sans, Verdana, sans-serif" });
+  const draw = createScene(widthPx, heightPx).attr({ "font-family": "DejaVu Sans, Verdana, sans-serif" });
   if (options.title) draw.element("title").words(options.title);
 
   // cells: runs of equal colour step within a ring, grouped by step
@@ -179,7 +182,7 @@ export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, optio
 
   if (options.title) addText(draw, widthPx / 2, 21, options.title, { sizePx: 15, fill: "#1f1f1f", anchor: "middle", weight: "bold", className: "sa-title" });
   drawLegend(draw, { prefix, widthPx, top: titlePx + mapHeightPx + 8, lo, hi, valueDigits, label: options.valueLabel ?? "value" });
-  return serializeSvg(draw, digits, prefix);
+  return draw;
 }
 
 function valueRange(values: Float64Array, range?: readonly [number, number]): [number, number] {
@@ -240,13 +243,13 @@ function markerPx(direction: Readonly<Vec3>, toPx: (lon: number, lat: number, ou
   return p;
 }
 
-function drawCandidateMarker(g: G, x: number, y: number, digits: number): void {
+function drawCandidateMarker(g: SceneNode, x: number, y: number, digits: number): void {
   const pts: number[] = [];
   for (let k = 0; k < 6; k++) pts.push(x + 7 * Math.cos((Math.PI / 3) * k), y + 7 * Math.sin((Math.PI / 3) * k));
   g.polygon().attr({ points: pointsAttribute(pts, digits), fill: "#ffffff", stroke: "#111111", "stroke-width": 1.2, class: "sa-candidate" });
 }
 
-function drawHoldMarker(g: G, x: number, y: number): void {
+function drawHoldMarker(g: SceneNode, x: number, y: number): void {
   const h = 4.5;
   const d = `M${x - h} ${y - h}L${x + h} ${y + h}M${x - h} ${y + h}L${x + h} ${y - h}`;
   g.rect().attr({ x: x - h, y: y - h, width: 2 * h, height: 2 * h, fill: "#ffffff", stroke: "#111111", "stroke-width": 1.2, class: "sa-hold" });
@@ -263,7 +266,7 @@ interface LegendLayout {
   readonly label: string;
 }
 
-function drawLegend(draw: Svg, l: LegendLayout): void {
+function drawLegend(draw: SceneNode, l: LegendLayout): void {
   const g = draw.group().attr({ class: "sa-legend" });
   const barW = Math.min(300, 0.4 * l.widthPx);
   const barX = l.widthPx / 2 - barW / 2;

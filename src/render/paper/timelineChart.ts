@@ -3,9 +3,8 @@
  * spin axis at each phase, with each side's turn average as a dashed line. Drawn
  * with svg.js (src/render/svgContext.ts); deterministic.
  */
-import { createSvgCanvas, serializeSvg } from "../svgContext.js";
+import { addText, createScene, serializeScene, type SceneNode } from "../scene.js";
 import { polylinePath } from "../svgPath.js";
-import { addText } from "../svgText.js";
 
 export interface TimelineSeries {
   readonly label: string;
@@ -23,10 +22,15 @@ export interface TimelineChartOptions {
 }
 
 export function renderTimelineSvg(series: readonly TimelineSeries[], o: TimelineChartOptions): string {
+  return serializeScene(timelineScene(series, o), 1, o.idPrefix ?? "tl");
+}
+
+/** The chart as drawing commands (render/scene.ts). */
+export function timelineScene(series: readonly TimelineSeries[], o: TimelineChartOptions): SceneNode {
   const W = o.widthPx ?? 420;
   const H = o.heightPx ?? 300;
   const left = 46, right = 12, top = 34, bottom = 44 + 14 * series.length;
-  const draw = createSvgCanvas(W, H);
+  const draw = createScene(W, H);
   draw.rect(W, H).attr({ fill: "#ffffff" });
   let max = 0;
   for (const s of series) for (let i = 0; i < s.values.length; i++) max = Math.max(max, s.values[i]);
@@ -60,5 +64,5 @@ export function renderTimelineSvg(series: readonly TimelineSeries[], o: Timeline
     g.path().attr({ d: `M${x(0)} ${y(mean)}L${x(360)} ${y(mean)}`, stroke: s.color, "stroke-width": 1.2, "stroke-dasharray": "5 3", fill: "none" });
     addText(draw, left, H - bottom + 46 + 14 * k, `${s.label}; dashed: its turn average, ${(100 * mean).toFixed(1)} %`, { sizePx: 10, fill: s.color });
   });
-  return serializeSvg(draw, 1, o.idPrefix ?? "tl");
+  return draw;
 }
