@@ -8,8 +8,8 @@ import { assertSeamPointCount } from "../../geometry/seamSamples.js";
 import type { Vec3 } from "../../geometry/vec.js";
 import { seamPaths, SEAM_HALF_WIDTH_RAD, stitchMarks } from "./ballSeam.js";
 import {
-  drawFingerPads, drawFlowBand, drawLandmarks, drawPushArrow, drawSpinAxis,
-  type FingerPad, type FlowBandOverlay, type PushArrow,
+  drawFingerPads, drawFingers, drawFlowBand, drawLandmarks, drawPushArrow, drawSpinAxis,
+  type FingerMark, type FingerPad, type FlowBandOverlay, type PushArrow,
 } from "./ballOverlays.js";
 import { BALL_STYLE as S } from "./ballStyle.js";
 import type { DiscPlacement, View } from "./projection.js";
@@ -21,6 +21,8 @@ export interface BallOverlays {
   /** The separation band seen by the flow. */
   readonly flowBand?: FlowBandOverlay;
   readonly fingerPads?: readonly FingerPad[];
+  /** Fingers with their real pad sizes and direction (drawn instead of plain pads). */
+  readonly fingers?: readonly FingerMark[];
   readonly push?: PushArrow;
   /** Landmark names to label (geometry/landmarks.ts), or "all". */
   readonly landmarks?: "all" | readonly string[];
@@ -35,6 +37,8 @@ export interface BallModel {
   readonly title?: string;
   /** Line under the ball. */
   readonly caption?: string;
+  /** Words at the ball's left and right (e.g. "glove side", "arm side"), under its edges. */
+  readonly sides?: { readonly left: string; readonly right: string };
 }
 
 export interface BallDrawingOptions {
@@ -126,7 +130,7 @@ export function ballScene(model: BallModel, options: BallDrawingOptions = {}): S
   if (faded) kinds.push("far seam");
   if (ov.spinAxis) kinds.push("axis");
   if (ov.flowBand) kinds.push("band");
-  if (ov.fingerPads?.length) kinds.push("pad");
+  if (ov.fingerPads?.length || ov.fingers?.length) kinds.push("pad");
   if (ov.push) kinds.push("push");
   const legend = options.legend ?? true ? layoutLegend(kinds, sizePx) : [];
   const titlePx = model.title ? 30 : 0;
@@ -171,11 +175,17 @@ export function ballScene(model: BallModel, options: BallDrawingOptions = {}): S
   draw.circle().attr({ cx: disc.centerXPx, cy: disc.centerYPx, r: disc.radiusPx, fill: "none", stroke: S.coverOutline, "stroke-width": 1.2 });
   const marks = draw.group().attr({ class: "sa-marks" });
   if (ov.fingerPads?.length) drawFingerPads(marks, model.view, disc, ov.fingerPads, digits);
+  if (ov.fingers?.length) drawFingers(marks, model.view, disc, ov.fingers, digits);
   if (ov.landmarks) drawLandmarks(marks, model.view, disc, model.seamShape, ov.landmarks);
   if (ov.spinAxis) drawSpinAxis(under, marks, model.view, disc, ov.spinAxis, digits);
   if (ov.push) drawPushArrow(marks, model.view, disc, ov.push, digits);
 
   if (model.title) addText(draw, sizePx / 2, 21, model.title, { sizePx: 15, fill: S.ink, anchor: "middle", weight: "bold", className: "sa-title" });
+  if (model.sides) {
+    const y = disc.centerYPx + disc.radiusPx + 12;
+    addText(draw, disc.centerXPx - disc.radiusPx * 1.02, y, model.sides.left, { sizePx: 11, fill: S.ink, className: "sa-side" });
+    addText(draw, disc.centerXPx + disc.radiusPx * 1.02, y, model.sides.right, { sizePx: 11, fill: S.ink, anchor: "end", className: "sa-side" });
+  }
   if (model.caption) {
     addText(draw, sizePx / 2, titlePx + sizePx + 14, model.caption, { sizePx: 11, fill: S.ink, anchor: "middle", className: "sa-caption" });
   }

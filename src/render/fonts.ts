@@ -251,3 +251,36 @@ export function wrapText(text: string, maxWidth: number, size: number, weight: F
   }
   return out;
 }
+
+/**
+ * The outline of `text` set at `size` with its baseline starting at (x, y) (y down),
+ * as SVG path data: each glyph's own contours from the face, placed by its advance
+ * and kerning, so a rasteriser draws exactly the letters the PDF holds without
+ * needing the font.
+ */
+export function textOutline(text: string, x: number, y: number, size: number, weight: FontWeight = "normal"): string {
+  let d = "";
+  let pen = x;
+  const f = (n: number) => String(Math.round(n * 100) / 100);
+  for (const r of textRuns(text, weight)) {
+    const font = r.face.font;
+    const k = size / font.unitsPerEm;
+    const run = font.layout(r.text);
+    for (let i = 0; i < run.glyphs.length; i++) {
+      const g = run.glyphs[i];
+      const p = run.positions[i];
+      const ox = pen + p.xOffset * k, oy = y - p.yOffset * k;
+      for (const c of g.path.commands) {
+        const a = c.args;
+        const pt = (j: number) => `${f(ox + a[j] * k)} ${f(oy - a[j + 1] * k)}`;
+        if (c.command === "moveTo") d += `M${pt(0)}`;
+        else if (c.command === "lineTo") d += `L${pt(0)}`;
+        else if (c.command === "quadraticCurveTo") d += `Q${pt(0)} ${pt(2)}`;
+        else if (c.command === "bezierCurveTo") d += `C${pt(0)} ${pt(2)} ${pt(4)}`;
+        else d += "Z";
+      }
+      pen += p.xAdvance * k;
+    }
+  }
+  return d;
+}

@@ -140,6 +140,16 @@ export function createScene(width: number, height: number): SceneNode {
   return new SceneNode("svg").attr({ width, height, viewBox: `0 0 ${width} ${height}` });
 }
 
+/**
+ * Places drawing `child` (a root from createScene) inside `parent` at (x, y), scaled
+ * to fit width x height with its aspect ratio kept and centred, as a nested <svg>.
+ */
+export function nestScene(parent: SceneNode, child: SceneNode, x: number, y: number, width: number, height: number): SceneNode {
+  child.attr({ x, y, width, height });
+  parent.children.push(child);
+  return child;
+}
+
 /** `x` rounded to `digits` decimals as the shortest decimal text; never "-0". */
 export function formatNumber(x: number, digits: number): string {
   const r = Number(x.toFixed(digits));

@@ -86,7 +86,7 @@ export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: 
   const scale = (widthPx - 2 * margin) / (2 * HAMMER_HALF_WIDTH); // px per unit-sphere length
   const titlePx = options.title ? 38 : 12;
   const mapHeightPx = 2 * HAMMER_HALF_HEIGHT * scale;
-  const legendPx = 78;
+  const legendPx = 82;
   const cx = widthPx / 2;
   const cy = titlePx + mapHeightPx / 2;
   const heightPx = titlePx + mapHeightPx + legendPx;
@@ -266,6 +266,14 @@ interface LegendLayout {
   readonly label: string;
 }
 
+/** A round step (1, 2 or 5 times a power of ten) near `raw`. */
+function niceStep(raw: number): number {
+  if (!(raw > 0) || !Number.isFinite(raw)) return 1;
+  const p = 10 ** Math.floor(Math.log10(raw));
+  const m = raw / p;
+  return (m < 1.5 ? 1 : m < 3.5 ? 2 : m < 7.5 ? 5 : 10) * p;
+}
+
 function drawLegend(draw: SceneNode, l: LegendLayout): void {
   const g = draw.group().attr({ class: "sa-legend" });
   const barW = Math.min(300, 0.4 * l.widthPx);
@@ -280,7 +288,17 @@ function drawLegend(draw: SceneNode, l: LegendLayout): void {
   // min and max beside the bar's ends and the label under it, so no text can overlap
   addText(g, barX - 6, l.top + 15.5, l.lo.toFixed(l.valueDigits), { ...t, anchor: "end" });
   addText(g, barX + barW + 6, l.top + 15.5, l.hi.toFixed(l.valueDigits), { ...t, anchor: "start" });
-  addText(g, l.widthPx / 2, l.top + 32, l.label, { ...t, anchor: "middle", className: "sa-value-label" });
+  // a scale with round numbers under the bar
+  const step = niceStep((l.hi - l.lo) / 5);
+  let ticks = "";
+  for (let v = Math.ceil(l.lo / step - 1e-9) * step; v <= l.hi + 1e-9 * step; v += step) {
+    const x = barX + (barW * (v - l.lo)) / (l.hi - l.lo);
+    ticks += `M${x.toFixed(2)} ${l.top + 18}L${x.toFixed(2)} ${l.top + 22}`;
+    const digits = step >= 1 ? 0 : step >= 0.1 ? 1 : 2;
+    addText(g, x, l.top + 31, (Math.abs(v) < step * 1e-6 ? 0 : v).toFixed(digits), { sizePx: 9, fill: "#1f1f1f", anchor: "middle", className: "sa-tick" });
+  }
+  g.path().attr({ d: ticks, stroke: "#3a3a3a", "stroke-width": 0.8, fill: "none" });
+  addText(g, l.widthPx / 2, l.top + 45, l.label, { ...t, anchor: "middle", className: "sa-value-label" });
   // marker key, left of the bar
   const kx = 20;
   g.path().attr({ d: `M${kx} ${l.top + 12}L${kx + 16} ${l.top + 12}`, stroke: "#ffffff", "stroke-width": 3.4, fill: "none" });
@@ -293,7 +311,7 @@ function drawLegend(draw: SceneNode, l: LegendLayout): void {
   addText(
     g,
     l.widthPx / 2,
-    l.top + 62,
+    l.top + 64,
     `Hammer equal-area projection · longitude from ball +x toward +y · latitude from the seam's equator plane · graticule 30° · scale ${VERDIGRIS_NAME}`,
     { sizePx: 8, fill: "#4a4a4a", anchor: "middle", className: "sa-projection-note" },
   );

@@ -46,7 +46,7 @@ import { crossingsPerRevolution } from "../sampling/crossings.js";
 import { bandAveragesExact, type BandAverages } from "../sampling/exact.js";
 import { seamFor } from "../sampling/measure.js";
 import { computeSphereMap, type SphereMap } from "../sampling/sphereMap.js";
-import { DEFAULT_FINGER_SPACING_IN, placeFingers, type Grip } from "./hand.js";
+import { DEFAULT_FINGER_SPACING_IN, pitchKindFromName, placeFingers, type Grip } from "./hand.js";
 import { assertPitch, pitchFrame, type Pitch, type PitchFrame, type Want } from "./pitch.js";
 import { findReferenceAxes, type ReferenceName } from "./references.js";
 import { DEFAULT_SPREAD_DEG, robustness, type Robustness } from "./robustness.js";
@@ -280,7 +280,7 @@ function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceNam
     rankScore,
     occupancy: { ...bandAveragesExact(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad, s.band) },
     crossingsPerRevolution: crossingsPerRevolution(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad),
-    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn),
+    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn, pitchKindFromName(ctx.pitch.name).kind),
     flight,
     ...(reference ? { reference } : {}),
   };

@@ -170,8 +170,26 @@ function paintNode(doc: Doc, root: SceneNode, node: SceneNode, parent: Style): v
       return;
   }
   const s = inherit(parent, a);
+  if (node.tag === "svg" && node !== root) {
+    // a nested drawing: its viewBox fitted into (x, y, width, height), "xMidYMid meet"
+    const { width, height } = sceneSize(node);
+    const w = num(a.width, width), h = num(a.height, height);
+    const k = Math.min(w / width, h / height);
+    doc.save();
+    doc.translate(num(a.x) + (w - k * width) / 2, num(a.y) + (h - k * height) / 2);
+    doc.scale(k);
+    for (const c of node.children) paintNode(doc, node, c, s);
+    doc.restore();
+    return;
+  }
   if (node.tag === "g" || node.tag === "svg") {
+    const tr = a.transform !== undefined ? /translate\(\s*([-\d.e]+)[\s,]+([-\d.e]+)\s*\)/.exec(String(a.transform)) : null;
+    if (tr) {
+      doc.save();
+      doc.translate(Number(tr[1]), Number(tr[2]));
+    }
     for (const c of node.children) paintNode(doc, root, c, s);
+    if (tr) doc.restore();
     return;
   }
   doc.save();
