@@ -7,7 +7,7 @@
 import { join } from "node:path";
 import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
-import { renderAtlasPdf } from "../render/paper/atlas.js";
+import { pitchPages, renderAtlasPdf } from "../render/paper/atlas.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
@@ -28,6 +28,7 @@ import { samplerSettings } from "./request/settings.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { seamFor } from "../sampling/measure.js";
 import { parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
+import { screenAllPooled, type PoolTask } from "./screenPool.js";
 
 export function layoutsDir(): string {
   return join(projectRoot(), "templates", "layouts");
@@ -171,13 +172,18 @@ export async function runCard(job: CardJob): Promise<PaperOutput> {
 export interface AtlasJob {
   readonly screen: ScreenJob;
   readonly layout: Layout;
+  /** The request as given and the screen's top options: a worker thread builds the same job from them (screenPool.ts). */
+  readonly request: Request;
+  readonly top: PoolTask["top"];
 }
+
+const ATLAS_TOP = { fallback: 4, range: [1, 12] as const };
 
 export function parseAtlas(request: Request): AtlasJob {
   const layout = layoutOf(String(request.layout ?? "atlas-letter"), ["atlas"]);
-  const screen = parseScreen(request, { fallback: 4, range: [1, 12] });
+  const screen = parseScreen(request, ATLAS_TOP);
   checkNames(screen);
-  return { layout, screen };
+  return { layout, screen, request, top: ATLAS_TOP };
 }
 
 /** The values a sphere map shows for a screened pitch: seam movement toward the wanted direction (its size for "any"), inches. */
@@ -186,15 +192,12 @@ export function mapValuesIn(p: ScreenedPitch): Float64Array {
 }
 
 export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number, total: number) => void = () => {}): Promise<PaperOutput> {
-  const flown = screenAll(job.screen, tick);
-  const pdf = await renderAtlasPdf({
-    layout: job.layout,
-    team: job.screen.team,
-    pitches: flown.map((f) => ({ report: f.report, mapValuesIn: mapValuesIn(f), grid: f.result.grid })),
-    seamShape: job.screen.sampler.seamShape,
-    onPage: (done, total) => tick("pages", done, total),
-  });
-  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: flown.length };
+  const base = { layout: job.layout, team: job.screen.team, seamShape: job.screen.sampler.seamShape, onPage: (done: number, total: number) => tick("pages", done, total) };
+  // each pitch's pages are drawn as soon as it is screened, while the worker screens the others
+  const ready: Page[][] = [];
+  const pitches = await screenAllPooled(job.screen, job.request, job.top, (i, p) => (ready[i] = pitchPages(base, p, i)), tick);
+  const pdf = await renderAtlasPdf({ ...base, pitches }, ready);
+  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: pitches.length };
 }
 
 /** The sphere map of one screened pitch as a PNG picture (what `screen --map-png` writes). */

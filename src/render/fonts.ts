@@ -154,8 +154,10 @@ function faceFor(g: string, weight: FontWeight): FontFace | null {
  * stay in the run they fall in.
  */
 export function textRuns(text: string, weight: FontWeight = "normal"): TextRun[] {
-  const runs: { face: FontFace; text: string }[] = [];
   const latin = fontFace("latin", weight);
+  // most text is plain ASCII, which the latin subset holds whole: one run, no segmenting
+  if (/^[\x20-\x7e]*$/.test(text)) return text ? [{ face: latin, text }] : [];
+  const runs: { face: FontFace; text: string }[] = [];
   for (const { segment } of graphemes.segment(text.normalize("NFC").replace(CONTROL, ""))) {
     let face: FontFace;
     let piece = segment;
@@ -182,9 +184,20 @@ export function printable(text: string): string {
 
 const widthCache = new BoundedCache<string, number>("text widths in em", 4096);
 
-/** Advance width of one run's text in em (the font's advances and kerning, as pdfkit lays it out). */
+/**
+ * Advance width of one run's text in em: the font's advances and kerning within each
+ * word (as pdfkit lays it out), words measured once and cached, spaces added between.
+ */
 function runWidthEm(face: FontFace, text: string): number {
-  return widthCache.get(`${face.key}\u0000${text}`, () => face.font.layout(text).advanceWidth / face.font.unitsPerEm);
+  const word = (w: string) => widthCache.get(`${face.key}\u0000${w}`, () => face.font.layout(w).advanceWidth / face.font.unitsPerEm);
+  if (!text.includes(" ")) return word(text);
+  let em = 0;
+  let spaces = 0;
+  for (const w of text.split(" ")) {
+    if (w) em += word(w);
+    spaces++;
+  }
+  return em + (spaces - 1) * word(" ");
 }
 
 /** Width of `text` at `size` (any unit: the result is in the same unit). */

@@ -16,7 +16,7 @@
  * recommended spacing for print; 3 deg (4,584 cells) about 300 kB, enough on screen.
  */
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
-import { sampleSeam } from "../../geometry/seamSamples.js";
+import { seamFor } from "../sampling/measure.js";
 import type { SphereGrid } from "../../geometry/sphereGrid.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
 import { rampColor, VERDIGRIS_NAME } from "./colorScale.js";
@@ -210,7 +210,7 @@ function valueRange(values: Float64Array, range?: readonly [number, number]): [n
  * latitude interpolated linearly in longitude across the cut.
  */
 function seamOnMap(b: number, toPx: (lon: number, lat: number, out: number[]) => void, digits: number): string {
-  const seam = sampleSeam(b, SEAM_MAP_POINTS);
+  const seam = seamFor(b, SEAM_MAP_POINTS);
   const n = seam.count;
   const lonLat = (i: number) => lonLatOf(seam.points[3 * (i % n)], seam.points[3 * (i % n) + 1], seam.points[3 * (i % n) + 2]);
   let d = "";

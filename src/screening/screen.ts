@@ -37,7 +37,7 @@ import { DEG } from "../../geometry/units.js";
 import { angleBetween, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
 import type { AirConditions } from "../physics/air.js";
 import { flyPitch, tradeArmSide, unitSeamMovement, type PitchFlight } from "../physics/pitchFlight.js";
-import { coefficientMap } from "../physics/seamModel/map.js";
+import { coefficientMap, type CoefficientMap } from "../physics/seamModel/map.js";
 import type { SeamModel } from "../physics/seamModel/model.js";
 import { turnAverage, type TurnAverage } from "../physics/seamModel/turn.js";
 import { TRADE_WINDOW_START_M, type TradeBreak } from "../physics/tradeMovement.js";
@@ -287,6 +287,15 @@ function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceNam
 }
 
 const coverCache = new BoundedCache<number, CoverModel>("cover models per seam shape", 4);
+
+// A staff often has pitches with the same gyro: their sweeps are the same coefficient
+// map (it depends on the model, the gyro and the grid only), computed once per model.
+const mapCaches = new WeakMap<SeamModel, BoundedCache<string, CoefficientMap>>();
+function coefficientMapFor(model: SeamModel, gyroRad: number, grid: SphereGrid, spacingRad: number): CoefficientMap {
+  let cache = mapCaches.get(model);
+  if (!cache) mapCaches.set(model, (cache = new BoundedCache<string, CoefficientMap>("coefficient maps per gyro and grid", 8)));
+  return cache.get(`${gyroRad}/${spacingRad}`, () => coefficientMap(model, gyroRad, grid));
+}
 function coverFor(b: number): CoverModel {
   return coverCache.get(b, () => coverModel(b));
 }
@@ -315,7 +324,7 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
   };
 
   const grid = equalAreaGrid(settings.gridSpacingRad);
-  const map = coefficientMap(settings.model, pitch.gyroRad, grid);
+  const map = coefficientMapFor(settings.model, pitch.gyroRad, grid, settings.gridSpacingRad);
   const n = grid.count;
   const armSideM = new Float64Array(n);
   const verticalM = new Float64Array(n);

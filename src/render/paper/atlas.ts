@@ -131,7 +131,7 @@ function textPages(L: Layout, title: string, paragraphs: readonly string[]): Pag
   return pages;
 }
 
-function mapPage(input: AtlasInput, p: AtlasPitch, index: number): Page {
+function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: number): Page {
   const L = input.layout;
   const f = L.fonts;
   const m = L.marginIn;
@@ -166,30 +166,41 @@ function mapPage(input: AtlasInput, p: AtlasPitch, index: number): Page {
   return page;
 }
 
-/** Pages of the atlas for a staff, without painting them (the job paints them into one PDF). */
-export function atlasPages(input: AtlasInput): Page[] {
+/** One pitch's pages: its map page, then its cards (the grips, or the out-of-reach card, then the classic holds). */
+export function pitchPages(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, i: number): Page[] {
   const L = input.layout;
   const perPage = L.grid!.columns * L.grid!.rows;
-  const pages: Page[] = [...coverPages(input), ...textPages(L, "How to read this atlas", HOW_TO_READ)];
-  input.pitches.forEach((p, i) => {
-    pages.push(mapPage(input, p, i));
-    const r = p.report;
-    const contents: CardContent[] = [
-      ...(r.reach.outOfReach ? [outOfReachContent(r)] : r.candidates.map((o, k) => cardContent(r, o, input.seamShape, `p${i}c${k}`))),
-      ...r.references.map((o, k) => cardContent(r, o, input.seamShape, `p${i}h${k}`)),
-    ];
-    for (let k = 0; k < contents.length; k += perPage) {
-      const page = newPage(L);
-      placeCards(page.scene, L, contents.slice(k, k + perPage).map((c) => cardScene(L.card!, c)));
-      pages.push(page);
-    }
-  });
-  pages.push(...textPages(L, "Cautions", CAUTION_LONG));
+  const pages = [mapPage(input, p, i)];
+  const r = p.report;
+  const contents: CardContent[] = [
+    ...(r.reach.outOfReach ? [outOfReachContent(r)] : r.candidates.map((o, k) => cardContent(r, o, input.seamShape, `p${i}c${k}`))),
+    ...r.references.map((o, k) => cardContent(r, o, input.seamShape, `p${i}h${k}`)),
+  ];
+  for (let k = 0; k < contents.length; k += perPage) {
+    const page = newPage(L);
+    placeCards(page.scene, L, contents.slice(k, k + perPage).map((c) => cardScene(L.card!, c)));
+    pages.push(page);
+  }
   return pages;
 }
 
-export async function renderAtlasPdf(input: AtlasInput): Promise<{ bytes: Buffer; pages: number }> {
-  const pages = atlasPages(input);
+/** The pages before the pitches: the cover (which lists every pitch) and how to read the atlas. */
+export function frontPages(input: AtlasInput): Page[] {
+  return [...coverPages(input), ...textPages(input.layout, "How to read this atlas", HOW_TO_READ)];
+}
+
+export function cautionPages(L: Layout): Page[] {
+  return textPages(L, "Cautions", CAUTION_LONG);
+}
+
+/** Pages of the atlas for a staff, without painting them (the job paints them into one PDF). */
+export function atlasPages(input: AtlasInput, ready?: readonly (readonly Page[])[]): Page[] {
+  return [...frontPages(input), ...input.pitches.flatMap((p, i) => ready?.[i] ?? pitchPages(input, p, i)), ...cautionPages(input.layout)];
+}
+
+/** The atlas as PDF bytes; `ready[i]`, when given, are pitch i's pages already drawn. */
+export async function renderAtlasPdf(input: AtlasInput, ready?: readonly (readonly Page[])[]): Promise<{ bytes: Buffer; pages: number }> {
+  const pages = atlasPages(input, ready);
   const bytes = await pdfOfPages(pages, `Grip atlas${input.team ? ` - ${input.team}` : ""}`, input.onPage);
   return { bytes, pages: pages.length };
 }
