@@ -50,6 +50,9 @@ export function outOfReachContent(report: ScreenReport): CardContent {
   };
 }
 
+/** The smallest type on any printed page, points (common practice for fine print, no source). */
+export const MIN_TEXT_PT = 6;
+
 /** What the marks on the two drawings mean. */
 export const CARD_KEY = "I M R T: fingers, thumb (dashed: hidden) \u00b7 dashed line: spin axis \u00b7 arrow: seam push";
 
@@ -61,6 +64,8 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
   const f = layout.fonts;
   const W = layout.page.widthIn * PT_PER_IN;
   const H = layout.page.heightIn * PT_PER_IN;
+  // the smallest text on a card: 6 pt, dark enough to read in print (tests/cli/legibility.test.ts)
+  const small = Math.max(MIN_TEXT_PT, f.sizePt - 1);
   const card = createScene(W, H).attr({ "font-family": "Noto Sans, sans-serif" });
   card.rect().attr({ x: 0.25, y: 0.25, width: W - 0.5, height: H - 0.5, fill: "#ffffff", stroke: "#9a9a9a", "stroke-width": 0.5, "stroke-dasharray": "3 3", class: "sa-cut" });
   setText(card, c.title, pt(b.title), { sizePt: f.titleSizePt, weight: "bold", leading: 1.15 });
@@ -70,7 +75,7 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
     const keyH = f.sizePt * 1.3;
     nestScene(card, c.drawings.pitcher, p.x, p.y, p.w, p.h - keyH);
     nestScene(card, c.drawings.catcher, q.x, q.y, q.w, q.h - keyH);
-    setText(card, CARD_KEY, { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: f.sizePt - 1.5, fill: "#444444" });
+    setText(card, CARD_KEY, { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: small, fill: "#333333" });
     setText(card, c.howTo.join("\n"), pt(b.howTo), { sizePt: f.sizePt, leading: 1.2, paragraphGap: 0.25 });
   } else {
     // no grip to show: the words take the drawings' place
@@ -79,11 +84,11 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
     setText(card, c.howTo.join("\n"), { x: x0, y: p.y, w: x1 - x0, h: Math.max(p.h, h.h) }, { sizePt: f.sizePt + 1, leading: 1.25, paragraphGap: 0.4 });
   }
   const cmp = pt(b.compare);
-  const cap = f.sizePt - 1;
-  const capH = setText(card, COMPARE_CAPTION, { ...cmp, h: cap * 2.6 }, { sizePt: cap, fill: "#444444", leading: 1.15 }).heightPt;
-  setTable(card, COMPARE_COLUMNS(c.want), c.compare, { ...cmp, y: cmp.y + capH + cap * 0.2, h: cmp.h - capH - cap * 0.2 }, f.sizePt - 0.5, c.compare.length > 2);
-  setText(card, c.technical, pt(b.technical), { sizePt: Math.max(5, f.sizePt - 1.5), fill: "#555555", leading: 1.15 });
-  setText(card, CAUTION_SHORT, pt(b.caution), { sizePt: Math.max(5.5, f.sizePt - 1), fill: "#7a2f1d", leading: 1.2 });
+  const cap = small;
+  const capH = setText(card, COMPARE_CAPTION, { ...cmp, h: cap * 2.6 }, { sizePt: cap, fill: "#333333", leading: 1.15 }).heightPt;
+  setTable(card, COMPARE_COLUMNS(c.want), c.compare, { ...cmp, y: cmp.y + capH + cap * 0.2, h: cmp.h - capH - cap * 0.2 }, f.sizePt, c.compare.length > 2);
+  setText(card, c.technical, pt(b.technical), { sizePt: small, fill: "#333333", leading: 1.15 });
+  setText(card, CAUTION_SHORT, pt(b.caution), { sizePt: small, fill: "#7a2f1d", leading: 1.2 });
   return card;
 }
 

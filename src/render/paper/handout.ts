@@ -149,7 +149,7 @@ export function handoutPages(input: HandoutInput): Page[] {
     timelineScene(
       [
         { label: "across the spin axis", values: h.acrossPct, color: "#1f4f5a" },
-        { label: "along the lift", values: h.magnusPct, color: "#b5532b" },
+        { label: "along the lift", values: h.magnusPct, color: "#9a3c18" },
       ],
       { title, valueLabel: "% of the ball's weight", tick: (v) => `${fixed(v, 0)} %`, idPrefix: id },
     );
