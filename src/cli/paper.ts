@@ -13,8 +13,9 @@ import { planRun, print, progress, writeOutput, type PlannedOutput } from "./out
  */
 async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat): Promise<PlannedOutput> {
   const { inputFiles } = await import("../jobs/request/inputs.js");
-  const { layoutsDir } = await import("../jobs/paper.js");
-  const inputs: InputRef[] = [...inputFiles(argv), { option: "--layout", path: join(layoutsDir(), `${layout.name}.json`) }];
+  const { layoutPath } = await import("../jobs/paper.js");
+  const given = typeof argv.layout === "string" ? argv.layout : layout.name;
+  const inputs: InputRef[] = [...inputFiles(argv), { option: "--layout", path: given.endsWith(".json") ? layoutPath(given) : layoutPath(layout.name) }];
   return planRun([{ option: "--out", path: argv.out ?? join(projectRoot(), "out", fallback), format }], inputs)[0]!;
 }
 

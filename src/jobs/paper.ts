@@ -12,7 +12,7 @@ import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
 import { renderHandoutPdf, type Clinic } from "../render/paper/handout.js";
-import { LayoutError, loadLayout, type Layout } from "../render/paper/layouts.js";
+import { LayoutError, loadLayout, loadLayoutFile, type Layout } from "../render/paper/layouts.js";
 import { PT_PER_IN } from "../render/paper/pdfScene.js";
 import { nearestReachable, WANT_WORDS } from "../render/paper/words.js";
 import { sceneToPng } from "../render/png.js";
@@ -34,11 +34,16 @@ export function layoutsDir(): string {
   return join(projectRoot(), "templates", "layouts");
 }
 
-/** A layout by name, of one of the kinds a command takes. */
+/** The file a --layout value reads: a name in templates/layouts, or a path to a .json file. */
+export function layoutPath(value: string): string {
+  return value.endsWith(".json") ? value : join(layoutsDir(), `${value}.json`);
+}
+
+/** A layout by name (templates/layouts) or by path (a .json file whose card layout, if any, is named from templates/layouts), of one of the kinds a command takes. */
 export function layoutOf(name: string, kinds: readonly string[]): Layout {
   let layout: Layout;
   try {
-    layout = loadLayout(layoutsDir(), name);
+    layout = name.endsWith(".json") ? loadLayoutFile(name, layoutsDir()) : loadLayout(layoutsDir(), name);
   } catch (err) {
     if (err instanceof LayoutError) throw new InputError(`--layout: ${err.message}`);
     throw err;

@@ -184,6 +184,25 @@ export function loadLayout(dir: string, name: string, seen: readonly string[] = 
   return layout;
 }
 
+/** Loads and checks a layout from a file path; a sheet's or atlas's card layout is named from `dir`. */
+export function loadLayoutFile(path: string, dir: string): Layout {
+  if (!existsSync(path)) throw new LayoutError(`layout file "${path}" not found; expected a layout name (${listLayouts(dir).join(", ")}) or a path to a .json layout`);
+  let bytes: Uint8Array;
+  try {
+    bytes = readFileSync(path);
+  } catch (err) {
+    throw new LayoutError(`layout ${path}: cannot read the file (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
+  }
+  let raw: unknown;
+  try {
+    raw = parseStrictJson(bytes, `layout ${path}`).value;
+  } catch (err) {
+    if (err instanceof InputError) throw new LayoutError(err.message);
+    throw err;
+  }
+  return validateLayout(raw, basename(path), (other) => loadLayout(dir, other));
+}
+
 export function listLayouts(dir: string): string[] {
   return existsSync(dir) ? readdirSync(dir).filter((f) => f.endsWith(".json")).map((f) => f.slice(0, -5)).sort() : [];
 }
