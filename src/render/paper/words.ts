@@ -202,7 +202,7 @@ export function reachWords(r: ScreenReport): string {
   }
   const near = nearestReachable(r);
   const instead = near
-    ? ` The nearest direction they can add to is the ${near.name}: up to ${fixed(near.bestTowardIn, 1)} in (${fixed(near.pct, 0)} %); screen for it with --want ${near.key}.`
+    ? ` The nearest direction they can add to is ${near.key === "arm" || near.key === "glove" ? "the " : ""}${near.name}: up to ${fixed(near.bestTowardIn, 1)} in (${fixed(near.pct, 0)} %); screen for it with --want ${near.key}.`
     : "";
   return (
     `Out of reach: with this spin the seams cannot add ${WANT_WORDS[want]} movement. The best any grip gives toward the ${DIRECTION_NAMES[want]} is ${fixed(re.bestTowardIn, 1)} in, ` +
