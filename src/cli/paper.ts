@@ -5,18 +5,22 @@ import type { InputRef, OutputFormat } from "../io/outputPlan.js";
 import type { Layout } from "../render/paper/layouts.js";
 import { projectRoot } from "../version.js";
 import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
-import { planRun, print, progress, writeOutput, type PlannedOutput } from "./output.js";
+import { planRun, print, progress, writeOutput, type PlannedOutput, type WantedOutput } from "./output.js";
+import { InputError } from "../io/errors.js";
 
 /**
  * Plans a paper command's one output (--out, or out/FALLBACK in the project) before
  * anything is drawn; the layout file is an input it may not replace.
  */
-async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat): Promise<PlannedOutput> {
+async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat): Promise<PlannedOutput>;
+async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat, more: WantedOutput[]): Promise<{ main: PlannedOutput; more: (PlannedOutput | undefined)[] }>;
+async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat, more?: WantedOutput[]): Promise<PlannedOutput | { main: PlannedOutput; more: (PlannedOutput | undefined)[] }> {
   const { inputFiles } = await import("../jobs/request/inputs.js");
   const { layoutPath } = await import("../jobs/paper.js");
   const given = typeof argv.layout === "string" ? argv.layout : layout.name;
   const inputs: InputRef[] = [...inputFiles(argv), { option: "--layout", path: given.endsWith(".json") ? layoutPath(given) : layoutPath(layout.name) }];
-  return planRun([{ option: "--out", path: argv.out ?? join(projectRoot(), "out", fallback), format }], inputs)[0]!;
+  const planned = planRun([{ option: "--out", path: argv.out ?? join(projectRoot(), "out", fallback), format }, ...(more ?? [])], inputs);
+  return more === undefined ? planned[0]! : { main: planned[0]!, more: planned.slice(1) };
 }
 
 /** What a paper command prints once its file is written ("wrote PATH ..."), unless the file went to standard output. */
@@ -86,15 +90,24 @@ export function registerPaper(y: Argv): Argv {
             .option("date", textOption("the clinic's date as it should print, e.g. 14 March 2027"))
             .option("contact", textOption("a contact line for the header, e.g. a coach's name and e-mail"))
             .option("out", textOption("output PDF, - for standard output [default: out/handout.pdf]"))
+            .option("figures-png", textOption("also write the two figures as PNG pictures, 1600 px wide, into this folder (four-seam-push.png, two-seam-push.png)"))
             .example("$0 handout --clinic 'Harbor Youth Pitching Clinic' --date '14 March 2027' --contact 'Coach R. Ortega, clinic@example.org'", "the handout with the clinic's header"),
         ),
       async (argv) => {
         const { parseHandout, runHandout } = await import("../jobs/paper.js");
         const job = parseHandout(argv);
-        const out = await planPaper(argv, job.layout, "handout.pdf", "pdf");
+        const { FIGURE_FILES } = await import("../jobs/paper.js");
+        const folder = argv["figures-png"];
+        if (folder !== undefined && (typeof folder !== "string" || folder === "" || folder === "-")) {
+          throw new InputError(`--figures-png ${JSON.stringify(folder)} is not a folder; expected a folder for the two figure pictures`);
+        }
+        const figureOutputs = folder === undefined ? [] : FIGURE_FILES.map((f) => ({ option: "--figures-png", path: join(folder as string, f), format: "png" as const }));
+        const out = await planPaper(argv, job.layout, "handout.pdf", "pdf", figureOutputs);
         const made = await runHandout(job);
-        writeOutput(out, made.bytes);
-        wrote(out, ` (${made.pages} pages)`);
+        writeOutput(out.main, made.bytes);
+        out.more.forEach((o, i) => o && writeOutput(o, made.figures[i]));
+        wrote(out.main, ` (${made.pages} pages)`);
+        for (const o of out.more) if (o && o.kind !== "stdout") print(`wrote ${o.given}\n`);
       },
     );
 }

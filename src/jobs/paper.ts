@@ -11,7 +11,7 @@ import { pitchPages, renderAtlasPdf } from "../render/paper/atlas.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
-import { renderHandoutPdf, type Clinic } from "../render/paper/handout.js";
+import { figureScene, handoutFigures, renderHandoutPdf, type Clinic } from "../render/paper/handout.js";
 import { LayoutError, loadLayout, loadLayoutFile, type Layout } from "../render/paper/layouts.js";
 import { PT_PER_IN } from "../render/paper/pdfScene.js";
 import { nearestReachable, WANT_WORDS } from "../render/paper/words.js";
@@ -243,15 +243,15 @@ export function parseHandout(request: Request): HandoutJob {
   return { layout, request, clinic: { name: text("clinic"), date: text("date"), contact: text("contact") } };
 }
 
-export async function runHandout(job: HandoutJob): Promise<PaperOutput> {
+/** The handout's figures' file names in a --figures-png folder. */
+export const FIGURE_FILES = ["four-seam-push.png", "two-seam-push.png"] as const;
+
+export async function runHandout(job: HandoutJob): Promise<PaperOutput & { figures: Buffer[] }> {
   const choice = modelChoice(job.request);
   const s = samplerSettings(job.request, choice.profile);
-  const pdf = await renderHandoutPdf({
-    layout: job.layout,
-    model: buildModel(choice.profile, s.seamShape),
-    values: choice.profile.values,
-    seam: seamFor(s.seamShape, s.seamPoints),
-    clinic: job.clinic,
-  });
-  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: 0 };
+  const model = buildModel(choice.profile, s.seamShape);
+  const seam = seamFor(s.seamShape, s.seamPoints);
+  const pdf = await renderHandoutPdf({ layout: job.layout, model, values: choice.profile.values, seam, clinic: job.clinic });
+  const figures = job.request["figures-png"] === undefined ? [] : handoutFigures(model, seam).map((f) => sceneToPng(figureScene(f)));
+  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: 0, figures };
 }

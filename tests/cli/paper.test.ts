@@ -320,6 +320,19 @@ describe("handout", () => {
   });
 });
 
+describe("the handout's figures as pictures", () => {
+  it("handout --figures-png writes the two charts as 1600 px wide PNGs beside the PDF", () => {
+    const folder = join(tmp, "figures");
+    const r = runCli(["handout", "--out", join(tmp, "h2.pdf"), "--figures-png", folder]);
+    expect(r.code, r.stderr).toBe(0);
+    for (const f of ["four-seam-push.png", "two-seam-push.png"]) {
+      const png = readFileSync(join(folder, f));
+      expect(png.subarray(1, 4).toString("latin1")).toBe("PNG");
+      expect(png.readUInt32BE(16)).toBe(1600);
+    }
+  });
+});
+
 describe("the sphere map as a picture", () => {
   it("screen --map-png writes a 1600 px wide PNG of the map", () => {
     const out = join(tmp, "map.png");

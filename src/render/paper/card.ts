@@ -54,7 +54,7 @@ export function outOfReachContent(report: ScreenReport): CardContent {
 export const MIN_TEXT_PT = 6;
 
 /** What the marks on the two drawings mean. */
-export const CARD_KEY = "I M R T: fingers, thumb (dashed: hidden) \u00b7 dashed line: spin axis \u00b7 arrow: seam push";
+export const CARD_KEY = "I M R T: fingers and thumb \u00b7 dashed line: spin axis \u00b7 arrow: seam push";
 
 const pt = (b: Box): BoxPt => ({ x: b.xIn * PT_PER_IN, y: b.yIn * PT_PER_IN, w: b.wIn * PT_PER_IN, h: b.hIn * PT_PER_IN });
 

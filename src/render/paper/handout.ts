@@ -15,7 +15,7 @@ import type { SeamModelValues } from "../../physics/seamModel/parameters.js";
 import { forceTimeline } from "../../physics/seamModel/turn.js";
 import { findReferenceAxes } from "../../screening/references.js";
 import { fixed } from "../numbers.js";
-import { createScene, nestScene } from "../scene.js";
+import { createScene, nestScene, type SceneNode } from "../scene.js";
 import { pdfOfPages, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
 import { PT_PER_IN } from "./pdfScene.js";
@@ -91,6 +91,17 @@ export function figureWords(figs: readonly HandoutFigure[]): string {
   );
 }
 
+/** One figure as a drawing: the push through a turn for a classic hold. */
+export function figureScene(h: HandoutFigure): SceneNode {
+  return timelineScene(
+    [
+      { label: "across the spin axis", values: h.acrossPct, color: "#1f4f5a" },
+      { label: "along the lift", values: h.magnusPct, color: "#9a3c18" },
+    ],
+    { title: `${h.hold} hold: the push through one turn`, valueLabel: "% of the ball's weight", tick: (v) => `${fixed(v, 0)} %`, idPrefix: h.hold === "four-seam" ? "fs" : "ts" },
+  );
+}
+
 function page(L: Layout): Page {
   const scene = createScene(L.page.widthIn * PT_PER_IN, L.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
   scene.rect().attr({ x: 0, y: 0, width: L.page.widthIn * PT_PER_IN, height: L.page.heightIn * PT_PER_IN, fill: "#ffffff", stroke: "none" });
@@ -145,18 +156,10 @@ export function handoutPages(input: HandoutInput): Page[] {
   ], f.sizePt - 0.5);
   const figTop = Math.max(y + 0.05, fig.yIn);
   const figH = Math.min(fig.hIn, L.page.heightIn - m - 0.35 - figTop);
-  const chart = (h: HandoutFigure, title: string, id: string) =>
-    timelineScene(
-      [
-        { label: "across the spin axis", values: h.acrossPct, color: "#1f4f5a" },
-        { label: "along the lift", values: h.magnusPct, color: "#9a3c18" },
-      ],
-      { title, valueLabel: "% of the ball's weight", tick: (v) => `${fixed(v, 0)} %`, idPrefix: id },
-    );
   const [four, two] = [figs.find((x) => x.hold === "four-seam")!, figs.find((x) => x.hold === "two-seam")!];
   const a = L.blocks.figureSymmetric, b = L.blocks.figureAsymmetric;
-  nestScene(p1.scene, chart(four, "four-seam hold: the push through one turn", "fs"), a.xIn * PT_PER_IN, figTop * PT_PER_IN, a.wIn * PT_PER_IN, figH * PT_PER_IN);
-  nestScene(p1.scene, chart(two, "two-seam hold: the push through one turn", "ts"), b.xIn * PT_PER_IN, figTop * PT_PER_IN, b.wIn * PT_PER_IN, figH * PT_PER_IN);
+  nestScene(p1.scene, figureScene(four), a.xIn * PT_PER_IN, figTop * PT_PER_IN, a.wIn * PT_PER_IN, figH * PT_PER_IN);
+  nestScene(p1.scene, figureScene(two), b.xIn * PT_PER_IN, figTop * PT_PER_IN, b.wIn * PT_PER_IN, figH * PT_PER_IN);
   setText(p1.scene, `Figures: computed by the seam-force model at ${HANDOUT_SPEED_MPH} mph in standard sea-level air, ${HANDOUT_GYRO_DEG}\u00b0 of gyro; the ball's weight is ${fixed(BALL_MASS_KG * 1000, 0)} g.`, pt(m, figTop + figH + 0.05, w, 0.3), { sizePt: f.sizePt - 2, fill: "#555555" });
   const p2 = page(L);
   y = header(p2, L, input.clinic, 2);

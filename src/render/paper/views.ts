@@ -44,7 +44,7 @@ export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: n
     {
       seamShape,
       view: viewFromDirections(b([0, 1, 0]), up),
-      overlays: { spinAxis: o.axis, fingers, ...pushOverlay("seam push") },
+      overlays: { spinAxis: o.axis, fingers, ...pushOverlay("push") },
       caption: "your view (fingertips up)",
       sides: armOnPitchersRight ? { left: "glove side", right: "arm side" } : { left: "arm side", right: "glove side" },
     },
