@@ -37,6 +37,8 @@ export interface PooledPitch {
   readonly grid: SphereGrid;
 }
 
+/** The calling thread's share of the screening (it draws the pages too; measured on the demo staff). */
+const CALLER_SHARE = 0.4;
 /** Below this many pitches a second thread costs more than it saves. */
 const POOL_MIN_PITCHES = 3;
 
@@ -59,8 +61,12 @@ function plainRequest(request: Request): Request {
   return out as Request;
 }
 
-/** Splits pitch indices into two groups of about equal work, pitches with one gyro together. */
-export function splitByGyro(gyros: readonly number[]): [number[], number[]] {
+/**
+ * Splits pitch indices into two groups, pitches with one gyro together: the first
+ * gets about `share` of the work (the calling thread, which also draws), the second
+ * the rest (the worker).
+ */
+export function splitByGyro(gyros: readonly number[], share = 0.5): [number[], number[]] {
   const byGyro = new Map<number, number[]>();
   gyros.forEach((g, i) => byGyro.set(g, [...(byGyro.get(g) ?? []), i]));
   // a group's cost: one map per gyro (about as much as screening a pitch) and one per pitch
@@ -68,7 +74,7 @@ export function splitByGyro(gyros: readonly number[]): [number[], number[]] {
   const bins: [number[], number[]] = [[], []];
   const cost = [0, 0];
   for (const g of groups) {
-    const k = cost[0] <= cost[1] ? 0 : 1;
+    const k = cost[0] / share <= cost[1] / (1 - share) ? 0 : 1;
     bins[k].push(...g);
     cost[k] += 1 + g.length;
   }
@@ -106,7 +112,8 @@ export async function screenAllPooled(
     for (let i = 0; i < n; i++) local(i);
     return out;
   }
-  const [mine, theirs] = splitByGyro(job.pitches.map((p) => p.pitch.gyroRad));
+  // this thread also draws every page, so it screens the smaller part
+  const [mine, theirs] = splitByGyro(job.pitches.map((p) => p.pitch.gyroRad), CALLER_SHARE);
   const results: PoolResult[] = [];
   const worker = new Worker(file, { workerData: { request: plainRequest(request), top, indices: theirs } satisfies PoolTask });
   const finished = new Promise<void>((resolve, reject) => {

@@ -1,6 +1,6 @@
 /**
  * Overlays on a ball drawing (ball frame; view and disc as in projection.ts; marks
- * and colours as in ballStyle.ts). Each function adds its marks to an svg.js group.
+ * and colours as in ballStyle.ts). Each function adds its marks to a drawing group (scene.ts).
  */
 import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import { findLandmarks } from "../../geometry/landmarks.js";

@@ -152,9 +152,16 @@ export function nestScene(parent: SceneNode, child: SceneNode, x: number, y: num
 
 /** `x` rounded to `digits` decimals as the shortest decimal text; never "-0". */
 export function formatNumber(x: number, digits: number): string {
+  // x.toFixed(digits) read back as a number: the same decimals, fast for the common case
+  const k = POW10[digits];
+  if (k !== undefined && Math.abs(x) < 1e9) {
+    const r = Math.round(x * k) / k;
+    return r === 0 ? "0" : String(r);
+  }
   const r = Number(x.toFixed(digits));
   return r === 0 ? "0" : String(r);
 }
+const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
 
 /** The width and height of a drawing's viewBox. */
 export function sceneSize(root: SceneNode): { width: number; height: number } {
