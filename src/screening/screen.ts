@@ -146,7 +146,7 @@ export interface ScreenResult {
   readonly armSideM: Float64Array;
   readonly verticalM: Float64Array;
   readonly scores: Float64Array;
-  /** The sampler's occupancy map (seam occupancy, for the map's notes). */
+  /** The sampler's occupancy map (seam occupancy, for the full sphere-map output), made on first use. */
   readonly occupancy: SphereMap;
   /** Distinct local maxima found before the top-N cut. */
   readonly maximaFound: number;
@@ -379,6 +379,8 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
   const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
   const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));
+  // the occupancy map is read only by the full sphere-map output (--map): made on first use
+  let occupancy: SphereMap | undefined;
   return {
     pitch,
     frame,
@@ -393,7 +395,9 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
     armSideM,
     verticalM,
     scores,
-    occupancy: computeSphereMap(seam, pitch.gyroRad, settings.band, grid),
+    get occupancy(): SphereMap {
+      return (occupancy ??= computeSphereMap(seam, pitch.gyroRad, settings.band, grid));
+    },
     maximaFound: refined.length,
   };
 }

@@ -9,7 +9,7 @@
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import type { Box, Layout } from "./layouts.js";
-import { setTable, setText, type BoxPt } from "./textLayout.js";
+import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
 import { PT_PER_IN } from "./pdfScene.js";
 import { cardDrawings, type CardDrawings } from "./views.js";
 import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
@@ -76,7 +76,12 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
     nestScene(card, c.drawings.pitcher, p.x, p.y, p.w, p.h - keyH);
     nestScene(card, c.drawings.catcher, q.x, q.y, q.w, q.h - keyH);
     setText(card, CARD_KEY, { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: small, fill: "#333333" });
-    setText(card, c.howTo.join("\n"), pt(b.howTo), { sizePt: f.sizePt, leading: 1.2, paragraphGap: 0.25 });
+    // whole sentences only: on a small card the last ones (where the axis goes, then the thumb) give way
+    const style = { sizePt: f.sizePt, leading: 1.2, paragraphGap: 0.25 };
+    const box = pt(b.howTo);
+    let lines = [...c.howTo];
+    while (lines.length > 2 && textHeight(lines.join("\n"), box.w, style) > box.h) lines = lines.slice(0, -1);
+    setText(card, lines.join("\n"), box, style);
   } else {
     // no grip to show: the words take the drawings' place
     const p = pt(b.viewPitcher), h = pt(b.howTo);

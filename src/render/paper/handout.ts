@@ -86,7 +86,7 @@ export function figureWords(figs: readonly HandoutFigure[]): string {
   const other = steadier === two ? four : two;
   return (
     `The two figures come from the model itself, for a ${HANDOUT_SPEED_MPH} mph fastball with backspin (and ${HANDOUT_GYRO_DEG}\u00b0 of gyro, as most have). Each line is the seam's push at one moment of a turn, as a share of the ball's weight: across the spin axis (for backspin, sideways) and along the spin's own lift (up or down). ` +
-    `With the ${other.hold} hold the push swings from side to side through every turn (at its largest ${fixed(other.peakPct, 0)} % of the ball's weight) and averages only ${d(other)}: the pushes nearly cancel. ` +
+    `With the ${other.hold} hold the push swings back and forth through every turn (at its largest ${fixed(other.peakPct, 0)} % of the ball's weight) and averages only ${d(other)}: the pushes nearly cancel. ` +
     `With the ${steadier.hold} hold the push stays on one side for most of the turn and averages ${d(steadier)} (at its largest ${fixed(steadier.peakPct, 0)} %): that steady push is what moves the pitch at the plate.`
   );
 }

@@ -20,6 +20,8 @@ import { viewFromDirections } from "../projection.js";
 import type { SceneNode } from "../scene.js";
 
 const LABELS: Record<string, string> = { index: "I", middle: "M", ring: "R", thumb: "T" };
+/** Seam samples for a card's drawings: about 0.035 in apart on the ball, below a printed dot at a card's 1.5 in ball. */
+const CARD_SEAM_POINTS = 256;
 
 export interface CardDrawings {
   readonly pitcher: SceneNode;
@@ -48,7 +50,7 @@ export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: n
       caption: "your view (fingertips up)",
       sides: armOnPitchersRight ? { left: "glove side", right: "arm side" } : { left: "arm side", right: "glove side" },
     },
-    { sizePx, seamPoints: 512, legend: false, idPrefix: `${idPrefix}-p` },
+    { sizePx, seamPoints: CARD_SEAM_POINTS, legend: false, idPrefix: `${idPrefix}-p` },
   );
   const catcher = ballScene(
     {
@@ -58,7 +60,7 @@ export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: n
       caption: "the catcher's view",
       sides: armOnPitchersRight ? { left: "arm side", right: "glove side" } : { left: "glove side", right: "arm side" },
     },
-    { sizePx, seamPoints: 512, legend: false, idPrefix: `${idPrefix}-c` },
+    { sizePx, seamPoints: CARD_SEAM_POINTS, legend: false, idPrefix: `${idPrefix}-c` },
   );
   return { pitcher, catcher };
 }

@@ -164,7 +164,7 @@ export const COMPARE_COLUMNS = (want: string) =>
   ] as const;
 
 /** The line over the comparison table. */
-export const COMPARE_CAPTION = "Seam movement at the plate, inches, as the screen gives it; mean / p10: its average and 10th percentile when the axis wanders about 5\u00b0; passes: seams past the front per turn.";
+export const COMPARE_CAPTION = "Seam movement at the plate, inches, as the screen gives it. mean / p10: with the axis off by about 5\u00b0. passes: seams past the front per turn.";
 
 /** One row of the comparison table, the numbers in screen --json's terminal format. */
 export function compareRow(label: string, o: OrientationReport): string[] {
