@@ -280,7 +280,8 @@ function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceNam
     rankScore,
     occupancy: { ...bandAveragesExact(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad, s.band) },
     crossingsPerRevolution: crossingsPerRevolution(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad),
-    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn, pitchKindFromName(ctx.pitch.name).kind),
+    // the classic holds are fastball holds, held as coaches teach them whatever the pitch
+    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn, reference ? "fastball" : pitchKindFromName(ctx.pitch.name).kind),
     flight,
     ...(reference ? { reference } : {}),
   };

@@ -49,7 +49,7 @@ export const HOW_TO_READ = [
   "Seam movement. The seam part of the movement at the front of the plate, read as the trade reads movement (a constant-acceleration fit over the last 50 ft, gravity removed): arm side and up, in inches, and its direction as a clock reading from behind the pitcher or the catcher, as the pitch's tilt is.",
   "The sphere map. Each cell is one place the spin axis could go through the ball, on the Hammer equal-area map of the ball's own frame, coloured by the seam movement toward the wanted direction in inches (the scale under the map). Negative numbers push the other way. Numbered hexagons are the ranked grips, crossed squares the four-seam (4S) and two-seam (2S) holds. When the seams cannot reach the wanted direction (less than 5 % of the strongest seam movement), the page says so and names the nearest direction they can reach, and no grip is ranked.",
   "Robustness. No one places the axis exactly: 'mean' and 'p10' are the movement's average and its 10th percentile when the axis wanders on the ball by about 5 degrees. A grip whose p10 stays close to its number is forgiving.",
-  "The comparison table on every card and map page puts each grip beside the four-seam and two-seam holds for the same pitch, with the numbers `screen --json` gives.",
+  "The comparison table on every card and map page puts each grip beside the four-seam and two-seam holds for the same pitch, with the same numbers as screen --json.",
   "Fingers. Fastballs: index and middle side by side on top, thumb beneath. Changeups: middle and ring on top, the index finger curled round to the thumb (a circle). Breaking balls: offset, the middle finger doing the work with the index beside it. The kind is read from the pitch's name. Pads are drawn at an adult's size, in the pitcher's own view (fingertips up) beside the catcher's view. The grip may slide along the spin's equator without changing the prediction; the card puts the pads on or nearest a seam.",
 ];
 
@@ -146,7 +146,7 @@ function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: numbe
   const map = sphereMapScene(p.mapValuesIn, p.grid, {
     widthPx: 720,
     title: toward,
-    valueLabel: pp.want === "any" ? "seam movement at the plate, inches" : `seam movement toward the ${pp.want === "arm" ? "arm side" : pp.want === "glove" ? "glove side" : pp.want}, inches at the plate (negative: the other way)`,
+    valueLabel: pp.want === "any" ? "seam movement at the plate, inches" : `seam movement ${pp.want === "arm" ? "toward the arm side" : pp.want === "glove" ? "toward the glove side" : `${pp.want}ward`}, inches at the plate (negative: the other way)`,
     seamShape: input.seamShape,
     candidates: r.reach.outOfReach ? [] : r.candidates.map((c) => ({ direction: c.axis, label: String(c.rank) })),
     referenceHolds: r.references.map((c) => ({ direction: c.axis, label: c.reference === "four-seam" ? "4S" : "2S" })),

@@ -41,6 +41,7 @@ export const HOLD_WORDS: Record<string, string> = {
 
 export const WANT_WORDS: Record<string, string> = { arm: "arm-side", glove: "glove-side", up: "upward", down: "downward", any: "any" };
 const DIRECTION_NAMES: Record<string, string> = { arm: "arm side", glove: "glove side", up: "up", down: "down" };
+const TOWARD: Record<string, string> = { arm: "Toward the arm side", glove: "Toward the glove side", up: "Upward", down: "Downward" };
 /** Angle between the four directions, degrees (arm and glove opposite, up and down across them). */
 const DIRECTION_ANGLE: Record<string, Record<string, number>> = {
   arm: { arm: 0, up: 90, down: 90, glove: 180 },
@@ -81,12 +82,17 @@ export function axisWords(o: OrientationReport): string {
   return `The spin axis goes through a seam where it crosses from one lobe to the next${off}.`;
 }
 
+/** Within this of a horseshoe's apex a pad is "at the bend", inches (about half a pad). */
+const AT_TIP_IN = 0.3;
+/** Within this, "near the bend", inches. */
+const NEAR_TIP_IN = 0.5;
+
 function seamPlace(f: FingerReport): string {
-  const atTip = f.nearTip.distanceIn <= 0.45;
+  const atTip = f.nearTip.distanceIn <= AT_TIP_IN;
   const near = f.region.near;
   if (f.region.part === "seam") {
-    if (atTip) return "on the seam at the horseshoe's bend";
-    return near.startsWith("waist") ? "on one of the two close seams" : "on a wide seam, along a lobe";
+    if (near.startsWith("waist")) return `on one of the two close seams${f.nearTip.distanceIn <= NEAR_TIP_IN ? ", near a horseshoe's bend" : ""}`;
+    return atTip ? "on the seam at the horseshoe's bend" : "on a wide seam, along a lobe";
   }
   const off = `${fixed(f.seamDistanceIn, 2)} in off the seam`;
   if (atTip) return `inside the horseshoe's bend, ${off}`;
@@ -129,9 +135,11 @@ export function turnSentence(t: HoldTurnReport): string {
 export function holdLines(r: ScreenReport, o: OrientationReport): string[] {
   const g = r.grip;
   const kind = g.kind === "breaking" ? "Breaking-ball grip" : g.kind === "changeup" ? "Changeup grip" : "Fastball grip";
-  const lines = [`${kind}, ${g.pattern}${g.kindFromName ? "" : ` (the name "${r.input.pitch.name}" names no pitch kind, so the fastball pattern is used)`}.`];
-  if (o.reference) lines.push(`The ${HOLD_WORDS[o.reference] ?? o.reference}.`);
-  else if (o.fromHold) lines.push(turnSentence(o.fromHold));
+  // a classic hold is a fastball hold, told as coaches teach it; a grip gets its pitch kind's pattern and the turn to it
+  const lines = o.reference
+    ? [`The ${HOLD_WORDS[o.reference] ?? o.reference}; thumb beneath.`]
+    : [`${kind}, ${g.pattern}${g.kindFromName ? "" : ` (the name "${r.input.pitch.name}" names no pitch kind, so the fastball pattern is used)`}.`];
+  if (!o.reference && o.fromHold) lines.push(turnSentence(o.fromHold));
   lines.push(...o.fingers.map(fingerSentence));
   lines.push(axisWords(o));
   return lines;
@@ -198,14 +206,14 @@ export function reachWords(r: ScreenReport): string {
   const re = r.reach;
   if (want === "any") return `The strongest seam movement any grip gives this spin is ${fixed(re.strongestIn, 1)} in at the plate.`;
   if (!re.outOfReach) {
-    return `Toward the ${DIRECTION_NAMES[want]} the best grip adds ${fixed(re.bestTowardIn, 1)} in at the plate, ${fixed(re.wantPct, 0)} % of the strongest seam movement any grip gives this spin (${fixed(re.strongestIn, 1)} in).`;
+    return `${TOWARD[want]} the best grip adds ${fixed(re.bestTowardIn, 1)} in at the plate, ${fixed(re.wantPct, 0)} % of the strongest seam movement any grip gives this spin (${fixed(re.strongestIn, 1)} in).`;
   }
   const near = nearestReachable(r);
   const instead = near
     ? ` The nearest direction they can add to is ${near.key === "arm" || near.key === "glove" ? "the " : ""}${near.name}: up to ${fixed(near.bestTowardIn, 1)} in (${fixed(near.pct, 0)} %); screen for it with --want ${near.key}.`
     : "";
   return (
-    `Out of reach: with this spin the seams cannot add ${WANT_WORDS[want]} movement. The best any grip gives toward the ${DIRECTION_NAMES[want]} is ${fixed(re.bestTowardIn, 1)} in, ` +
+    `Out of reach: with this spin the seams cannot add ${WANT_WORDS[want]} movement. The best any grip gives ${want === "arm" || want === "glove" ? `toward the ${DIRECTION_NAMES[want]}` : `${want}ward`} is ${fixed(re.bestTowardIn, 1)} in, ` +
     `${fixed(re.wantPct, 0)} % of the strongest seam movement (${fixed(re.strongestIn, 1)} in), so no grip is ranked for it.${instead}`
   );
 }
