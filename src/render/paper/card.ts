@@ -12,7 +12,7 @@ import type { Box, Layout } from "./layouts.js";
 import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
 import { PT_PER_IN } from "./pdfScene.js";
 import { cardDrawings, type CardDrawings } from "./views.js";
-import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
+import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareOwnRow, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
 
 export interface CardContent {
   readonly title: string;
@@ -22,6 +22,8 @@ export interface CardContent {
   readonly howTo: readonly string[];
   readonly want: string;
   readonly compare: readonly (readonly string[])[];
+  /** The comparison row that is this card's own grip or hold (emphasised), or -1. */
+  readonly ownRow: number;
   readonly technical: string;
 }
 
@@ -34,6 +36,7 @@ export function cardContent(report: ScreenReport, o: OrientationReport, seamShap
     howTo: holdLines(report, o),
     want: report.input.pitch.want,
     compare: compareRows(report, o),
+    ownRow: compareOwnRow(report, o),
     technical: technicalLine(o),
   };
 }
@@ -46,6 +49,7 @@ export function outOfReachContent(report: ScreenReport): CardContent {
     howTo: [reachWords(report), "The classic holds below show what this spin does with each."],
     want: report.input.pitch.want,
     compare: compareRows(report),
+    ownRow: -1,
     technical: `Technical: reach ${report.reach.wantPct.toFixed(1)} % of the strongest seam movement (${report.reach.strongestIn.toFixed(2)} in); below 5 % a direction counts as out of reach.`,
   };
 }
@@ -91,7 +95,7 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
   const cmp = pt(b.compare);
   const cap = small;
   const capH = setText(card, COMPARE_CAPTION, { ...cmp, h: cap * 2.6 }, { sizePt: cap, fill: "#333333", leading: 1.15 }).heightPt;
-  setTable(card, COMPARE_COLUMNS(c.want), c.compare, { ...cmp, y: cmp.y + capH + cap * 0.2, h: cmp.h - capH - cap * 0.2 }, f.sizePt, c.compare.length > 2);
+  setTable(card, COMPARE_COLUMNS(c.want), c.compare, { ...cmp, y: cmp.y + capH + cap * 0.2, h: cmp.h - capH - cap * 0.2 }, f.sizePt, c.ownRow);
   setText(card, c.technical, pt(b.technical), { sizePt: small, fill: "#333333", leading: 1.15 });
   setText(card, CAUTION_SHORT, pt(b.caution), { sizePt: small, fill: "#7a2f1d", leading: 1.2 });
   return card;

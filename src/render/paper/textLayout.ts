@@ -101,10 +101,10 @@ export interface TableColumn {
 
 /**
  * A table: a bold header row, then the rows, each cell one line (cut with an
- * ellipsis when too wide), hairlines under the header; the first row can be
- * emphasised. Returns the height used, points.
+ * ellipsis when too wide), hairlines under the header; one row (`emphasise`) can
+ * be set in bold on a tint. Returns the height used, points.
  */
-export function setTable(parent: SceneNode, columns: readonly TableColumn[], rows: readonly (readonly string[])[], box: BoxPt, sizePt: number, emphasiseFirst = false): number {
+export function setTable(parent: SceneNode, columns: readonly TableColumn[], rows: readonly (readonly string[])[], box: BoxPt, sizePt: number, emphasise = -1): number {
   const total = columns.reduce((s, c) => s + c.share, 0);
   const pitch = sizePt * 1.3;
   const ascent = fontMetricsEm().ascent * sizePt;
@@ -131,10 +131,10 @@ export function setTable(parent: SceneNode, columns: readonly TableColumn[], row
   y += pitch;
   rows.forEach((row, i) => {
     if (y - ascent + sizePt > box.y + box.h + 1e-6) return;
-    if (emphasiseFirst && i === 0) {
+    if (i === emphasise) {
       parent.rect().attr({ x: box.x - 1, y: y - ascent - 1, width: box.w + 2, height: sizePt * 1.25, fill: "#f1ece2", stroke: "none" });
     }
-    row.forEach((text, k) => cell(text, k, y, emphasiseFirst && i === 0 ? "bold" : "normal", INK));
+    row.forEach((text, k) => cell(text, k, y, i === emphasise ? "bold" : "normal", INK));
     y += pitch;
   });
   return y - pitch - box.y + sizePt * 0.4;

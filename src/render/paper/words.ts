@@ -172,7 +172,7 @@ export const COMPARE_COLUMNS = (want: string) =>
   ] as const;
 
 /** The line over the comparison table. */
-export const COMPARE_CAPTION = "Seam movement at the plate, inches, as the screen gives it. mean / p10: with the axis off by about 5\u00b0. passes: seams past the front per turn.";
+export const COMPARE_CAPTION = "Inches at the plate, the screen's numbers; mean / p10 with the axis about 5\u00b0 off; passes: seams past the front per turn.";
 
 /** One row of the comparison table, the numbers in screen --json's terminal format. */
 export function compareRow(label: string, o: OrientationReport): string[] {
@@ -184,8 +184,15 @@ export function compareRow(label: string, o: OrientationReport): string[] {
 export function compareRows(r: ScreenReport, o?: OrientationReport): string[][] {
   const rows: string[][] = [];
   if (o && !o.reference) rows.push(compareRow(`grip ${o.rank}`, o));
-  for (const h of r.references) rows.push(compareRow(`${h.reference} hold${o?.reference === h.reference ? " (this card)" : ""}`, h));
+  for (const h of r.references) rows.push(compareRow(`${h.reference} hold`, h));
   return rows;
+}
+
+/** Which row of compareRows is the card's own grip or hold (emphasised), or -1. */
+export function compareOwnRow(r: ScreenReport, o?: OrientationReport): number {
+  if (!o) return -1;
+  if (!o.reference) return 0;
+  return r.references.findIndex((h) => h.reference === o.reference);
 }
 
 /** The direction the seams can add to that is nearest the wanted one, with its reach, or null. */
