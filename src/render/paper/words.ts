@@ -163,7 +163,7 @@ export function movementWords(r: ScreenReport, o: OrientationReport): string {
 /** The comparison table's columns (inches; the caption above the table says so). */
 export const COMPARE_COLUMNS = (want: string) =>
   [
-    { title: "grip", share: 1.55 },
+    { title: "grip", share: 1.7 },
     { title: "arm side", share: 0.95, align: "end" as const },
     { title: "up", share: 0.65, align: "end" as const },
     { title: want === "any" ? "size" : want === "arm" || want === "glove" ? `to ${want}` : want, share: 0.9, align: "end" as const },
