@@ -3,6 +3,8 @@
  * --json, and always written to out/bench.json). Run on the compiled JavaScript.
  */
 import { spawnSync } from "node:child_process";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
 import { planOutputs, writeOutput } from "../io/output.js";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
@@ -200,6 +202,10 @@ async function main(): Promise<void> {
   const tCal = performance.now();
   const calibration = calibrateSeamModel({ start: defaultProfile(), fit: calibratableNames(), lab: calibrationRows, sigmaN: 0.01 });
   const calibrateSeconds = (performance.now() - tCal) / 1000;
+  // and as a whole process, as a user runs it (issue target: <= 2.5 s; best of 3 cold starts)
+  const atlasDir = mkdtempSync(join(tmpdir(), "seam-atlas-bench-"));
+  const atlasProcessSeconds = processSeconds([join(projectRoot(), "out", "build", "cli", "main.js"), "atlas", "--demo", "--out", join(atlasDir, "atlas.pdf")], 3);
+  rmSync(atlasDir, { recursive: true, force: true });
   const mem = process.memoryUsage();
   const result = {
     tool: "seam-atlas",
@@ -225,7 +231,7 @@ async function main(): Promise<void> {
     },
     flight: { pitchesPerSecond: Math.round(flightsPerSecond), timeResolvedPerSecond: Math.round(timeResolvedPerSecond) },
     seamModel: { turnAveragesPerSecond: Math.round(turnAveragesPerSecond), profileHash: model.profile.hash },
-    atlas: { seconds: Math.round(atlasSeconds * 100) / 100, pages: atlas.pages, bytes: atlas.bytes.length },
+    atlas: { seconds: Math.round(atlasSeconds * 100) / 100, processSeconds: Math.round(atlasProcessSeconds * 100) / 100, pages: atlas.pages, bytes: atlas.bytes.length },
     explain: { rowsPerSecond: Math.round(explainRowsPerSecond), rows },
     calibrate: {
       seconds: Math.round(calibrateSeconds * 10) / 10,
@@ -258,7 +264,7 @@ async function main(): Promise<void> {
       `  flight               ${result.flight.pitchesPerSecond.toLocaleString("en-US")} pitches/s (RK4, 1 ms steps, drag, Magnus, turn-averaged seam force; target >= 2,000)`,
       `  time-resolved flight ${result.flight.timeResolvedPerSecond.toLocaleString("en-US")} pitches/s (a new 360-phase timeline each; target >= 500)`,
       `  explain              ${result.explain.rowsPerSecond} rows/s over ${rows} rows with varied gyro (target >= 200)`,
-      `  atlas, demo staff    ${result.atlas.seconds} s, ${result.atlas.pages} pages (target <= 15 s)`,
+      `  atlas, demo staff    ${result.atlas.seconds} s in process, ${result.atlas.pages} pages; \`atlas --demo\` as a whole process ${result.atlas.processSeconds} s (best of 3; target <= 2.5 s)`,
       `  calibrate            ${result.calibrate.seconds} s for ${result.calibrate.rows.toLocaleString("en-US")} lab rows (${result.calibrate.turnAveraged} turn-averaged), ${result.calibrate.parameters} parameters, ${result.calibrate.modelEvaluations} evaluations (target <= 30 s)`,
       `  start, --help        ${start.helpSeconds} s, ${start.helpOverNode}x node -e 0 (${start.nodeSeconds} s; target <= 3x; best of 7 processes)`,
       `  start, measure       ${start.measureSeconds} s for measure --axis waist-A, ${start.measureOverNode}x node -e 0 (target <= 5x)`,

@@ -19,7 +19,7 @@ import * as esbuild from "esbuild";
 import { licenceNotices } from "./licences.js";
 
 /** Packages the CLI bundle leaves in node_modules. */
-export const CLI_EXTERNAL = ["pdfkit", "svg-to-pdfkit", "svgdom", "@svgdotjs/svg.js", "three", "esbuild", "piscina", "@resvg/resvg-js", "fontkit"];
+export const CLI_EXTERNAL = ["pdfkit", "svg-to-pdfkit", "svgdom", "@svgdotjs/svg.js", "three", "esbuild", "piscina", "@resvg/resvg-js", "fontkit", "@fontsource/noto-sans"];
 
 function projectRootFrom(file: string): string {
   let dir = dirname(file);
@@ -34,7 +34,11 @@ async function bundleCli(root: string): Promise<void> {
   const outdir = join(root, "out", "build", "cli");
   rmSync(outdir, { recursive: true, force: true });
   await esbuild.build({
-    entryPoints: [join(root, "src", "cli", "main.ts")],
+    // the screening worker (src/jobs/screenWorker.ts) is an entry of its own, beside the chunks that load it
+    entryPoints: [
+      { in: join(root, "src", "cli", "main.ts"), out: "main" },
+      { in: join(root, "src", "jobs", "screenWorker.ts"), out: "chunks/screenWorker" },
+    ],
     absWorkingDir: root,
     bundle: true,
     splitting: true,

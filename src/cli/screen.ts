@@ -28,6 +28,7 @@ export function registerScreen(y: Argv): Argv {
                 "write the full sphere map (JSON) to this file; for several pitches (a staff), or when it is an existing folder, a folder: one PITCHER-PITCH.json per pitch, each name unique",
               ),
             )
+            .option("map-png", textOption("write the sphere map as a PNG picture, 1600 px wide, to this file; for a staff, a folder: one PITCHER-PITCH.png per pitch"))
             .example("$0 screen --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --want arm", "a right-hander's sinker")
             .example("$0 screen --demo --csv", "the demo staff as CSV")
             .example("$0 screen --demo --map out/maps", "the demo staff's sphere maps, one file per pitch in out/maps/"),
@@ -39,17 +40,25 @@ export function registerScreen(y: Argv): Argv {
       const { inputFiles } = await import("../jobs/request/inputs.js");
       const job = parseScreen(argv);
       const mapOutputs = mapsWanted(argv.map, job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name)));
-      const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: "json" }, ...mapOutputs];
+      const labels = job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name));
+      const pngOutputs = mapsWanted(argv["map-png"], labels, "--map-png", "png");
+      const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: "json" }, ...mapOutputs, ...pngOutputs];
       // standard output carries one document: --out - may go with --json (the same JSON), nothing else
       if (argv.csv) refuseSecondStdout(wanted, "--csv");
-      if (argv.json) refuseSecondStdout(mapOutputs, "--json");
-      const [out, ...maps] = planRun(wanted, inputFiles(argv));
-      const planned = [out, ...maps];
+      if (argv.json) refuseSecondStdout([...mapOutputs, ...pngOutputs], "--json");
+      const [out, ...rest] = planRun(wanted, inputFiles(argv));
+      const maps = rest.slice(0, mapOutputs.length);
+      const pngs = rest.slice(mapOutputs.length);
+      const planned = [out, ...rest];
       const { jsonText, screenDocument, sphereMapDocument } = await import("../jobs/formats/json.js");
       const outcome = runScreen(job);
       const json = jsonText(screenDocument(outcome));
       if (out) writeOutput(out, json);
       maps.forEach((m, i) => m && writeOutput(m, JSON.stringify(sphereMapDocument(outcome.screened[i].result)) + "\n"));
+      if (pngs.some((m) => m)) {
+        const { mapPng } = await import("../jobs/paper.js");
+        pngs.forEach((m, i) => m && writeOutput(m, mapPng(outcome.screened[i], job.sampler.seamShape)));
+      }
       if (toStdout(planned)) return;
       const reports = outcome.screened.map((s) => s.report);
       if (argv.json) print(json);
@@ -64,15 +73,15 @@ export function registerScreen(y: Argv): Argv {
  * several, one file per pitch in the folder it names, each named by a unique
  * readable stem of "PITCHER-PITCH" (io/slugs.ts).
  */
-function mapsWanted(map: unknown, labels: readonly string[]): WantedOutput[] {
+function mapsWanted(map: unknown, labels: readonly string[], option = "--map", format: "json" | "png" = "json"): WantedOutput[] {
   if (map === undefined) return [];
   const folder = typeof map === "string" && map !== "" && existsSync(map) && statSync(map).isDirectory();
-  if (typeof map !== "string" || (labels.length === 1 && !folder)) return [{ option: "--map", path: map, format: "json" }];
+  if (typeof map !== "string" || (labels.length === 1 && !folder)) return [{ option, path: map, format }];
   const n = labels.length;
-  const expected = `expected a folder for the ${n} pitches' sphere maps (one PITCHER-PITCH.json each)`;
-  const given = `--map ${quote(map)}`;
+  const expected = `expected a folder for the ${n} pitches' sphere maps (one PITCHER-PITCH.${format} each)`;
+  const given = `${option} ${quote(map)}`;
   if (map === "" || map === "-") throw new InputError(`${given} cannot hold ${n} sphere maps; ${expected}`);
   if (existsSync(map) && !statSync(map).isDirectory()) throw new InputError(`${given} is a file, but the run has ${n} pitches; ${expected}`);
   if (!existsSync(map) && formatOfPath(map) !== undefined) throw new InputError(`${given} is named like a file, but the run has ${n} pitches; ${expected}`);
-  return uniqueSlugs(labels).map((stem) => ({ option: "--map", path: join(map, `${stem}.json`), format: "json" as const }));
+  return uniqueSlugs(labels).map((stem) => ({ option, path: join(map, `${stem}.${format}`), format }));
 }

@@ -1,34 +1,51 @@
 /**
- * The paper jobs: a grip card (PDF or SVG) or a sheet of cards, the ranked atlas,
- * and the clinic handout. Screening and flights go through the one shared path
- * (pipeline.ts); the drawing is src/render/paper/.
+ * The paper jobs: a grip card (PDF, SVG or PNG), a sheet of cards (one pitch's grips
+ * with the classic holds, or one card per pitch for a staff), the ranked atlas, the
+ * clinic handout, and the sphere map as a picture. Screening goes through the one
+ * shared path (pipeline.ts); the drawing is src/render/paper/.
  */
 import { join } from "node:path";
+import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
-import { renderAtlasPdf } from "../render/paper/atlas.js";
-import { cardContent, cardOrigins, drawCard } from "../render/paper/card.js";
+import { pitchPages, renderAtlasPdf } from "../render/paper/atlas.js";
+import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
-import { renderHandoutPdf } from "../render/paper/handout.js";
-import { LayoutError, loadLayout, type Layout } from "../render/paper/layouts.js";
-import { addPage, finish, newDocument } from "../render/paper/pdfDoc.js";
+import { pdfOfPages, type Page } from "../render/paper/document.js";
+import { figureScene, handoutFigures, renderHandoutPdf, type Clinic } from "../render/paper/handout.js";
+import { LayoutError, loadLayout, loadLayoutFile, type Layout } from "../render/paper/layouts.js";
+import { PT_PER_IN } from "../render/paper/pdfScene.js";
+import { nearestReachable, WANT_WORDS } from "../render/paper/words.js";
+import { sceneToPng } from "../render/png.js";
+import { createScene } from "../render/scene.js";
+import { sphereMapScene } from "../render/sphereMapDrawing.js";
+import { fixed } from "../render/numbers.js";
+import type { ScreenReport } from "../screening/report.js";
 import { TOP_RANGE } from "../screening/screen.js";
 import { projectRoot } from "../version.js";
 import { screenAll } from "./pipeline.js";
-import { samplerSettings, type SamplerSettings } from "./request/settings.js";
+import { buildModel, modelChoice } from "./request/model.js";
+import { samplerSettings } from "./request/settings.js";
 import { parseInteger, type Request } from "./request/values.js";
-import { parseScreen, screenOne, type ScreenJob } from "./screen.js";
+import { seamFor } from "../sampling/measure.js";
+import { parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
+import { screenAllPooled, type PoolTask } from "./screenPool.js";
 
 export function layoutsDir(): string {
   return join(projectRoot(), "templates", "layouts");
 }
 
-/** A layout by name, of one of the kinds a command takes. */
+/** The file a --layout value reads: a name in templates/layouts, or a path to a .json file. */
+export function layoutPath(value: string): string {
+  return value.endsWith(".json") ? value : join(layoutsDir(), `${value}.json`);
+}
+
+/** A layout by name (templates/layouts) or by path (a .json file whose card layout, if any, is named from templates/layouts), of one of the kinds a command takes. */
 export function layoutOf(name: string, kinds: readonly string[]): Layout {
   let layout: Layout;
   try {
-    layout = loadLayout(layoutsDir(), name);
+    layout = name.endsWith(".json") ? loadLayoutFile(name, layoutsDir()) : loadLayout(layoutsDir(), name);
   } catch (err) {
-    if (err instanceof LayoutError) throw new InputError(err.message);
+    if (err instanceof LayoutError) throw new InputError(`--layout: ${err.message}`);
     throw err;
   }
   const a = (k: string) => (/^[aeiou]/.test(k) ? `an ${k}` : `a ${k}`);
@@ -36,26 +53,51 @@ export function layoutOf(name: string, kinds: readonly string[]): Layout {
   return layout;
 }
 
+// C0 controls (NUL among them) and DEL: text that would print as nothing or as garbage
+// eslint-disable-next-line no-control-regex
+const CONTROL = /[\u0000-\u0008\u000b-\u001f\u007f]/;
+
+/** Refuses printed text holding a control character (a NUL byte, an escape), naming it. */
+export function assertPrintable(what: string, text: string | undefined): void {
+  if (text === undefined) return;
+  const m = CONTROL.exec(text);
+  if (m) {
+    const code = m[0].charCodeAt(0).toString(16).padStart(4, "0").toUpperCase();
+    throw new InputError(`${what} "${text.replace(/[\u0000-\u001f\u007f]/g, "?")}" holds the control character U+${code}${code === "0000" ? " (a NUL byte)" : ""}; expected printable text`);
+  }
+}
+
+function checkNames(job: ScreenJob): void {
+  assertPrintable("the team name", job.team);
+  for (const p of job.pitches) {
+    assertPrintable("the pitcher's name", p.echo.pitcher);
+    assertPrintable("the pitch's name", p.echo.name);
+  }
+}
+
 /** What a paper job produces. */
 export interface PaperOutput {
   readonly bytes: Uint8Array | string;
-  readonly format: "pdf" | "svg";
+  readonly format: "pdf" | "svg" | "png";
   readonly pages: number;
   readonly pitches: number;
 }
 
+export type PictureFormat = "pdf" | "svg" | "png";
+
 export interface CardJob {
   readonly screen: ScreenJob;
   readonly layout: Layout;
-  readonly svg: boolean;
+  readonly format: PictureFormat;
   readonly candidate: number;
   readonly reference?: "four-seam" | "two-seam";
 }
 
 export function parseCard(request: Request): CardJob {
   const layout = layoutOf(String(request.layout ?? "index-card-4x6"), ["card", "sheet"]);
-  const svg = request.svg === true;
-  if (svg && layout.kind !== "card") throw new InputError(`--svg draws one card; --layout ${layout.name} is a sheet (leave out --svg for a PDF)`);
+  if (request.svg === true && request.png === true) throw new InputError("give --svg or --png, not both");
+  const format: PictureFormat = request.svg === true ? "svg" : request.png === true ? "png" : "pdf";
+  if (format !== "pdf" && layout.kind !== "card") throw new InputError(`--${format} draws one card; --layout ${layout.name} is a sheet (leave out --${format} for a PDF)`);
   if (request.candidate !== undefined && request.reference !== undefined) throw new InputError(`give --candidate N or --reference four-seam|two-seam, not both`);
   const n = parseInteger("candidate", request.candidate ?? "1", "a candidate number, 1 or more");
   if (n < 1 || n > TOP_RANGE[1]) throw new InputError(`--candidate ${n} is out of range; expected 1 to ${TOP_RANGE[1]}`);
@@ -67,80 +109,149 @@ export function parseCard(request: Request): CardJob {
   }
   const perPage = layout.kind === "card" ? 1 : layout.grid!.columns * layout.grid!.rows;
   const screen = parseScreen({ ...request, top: undefined }, { atLeast: Math.max(n, perPage) });
-  if (screen.pitches.length !== 1) throw new InputError(`card takes one pitch; the file has ${screen.pitches.length} (choose one with --pitch-name, or use atlas)`);
-  return { screen, layout, svg, candidate: n, reference };
+  if (layout.kind === "card" && screen.pitches.length !== 1) {
+    throw new InputError(`card takes one pitch for a card layout; the file has ${screen.pitches.length} (choose one with --pitch-name, or give a sheet layout for a staff sheet, one card per pitch)`);
+  }
+  checkNames(screen);
+  return { screen, layout, format, candidate: n, reference };
+}
+
+/** The one line `card` stops with when the wanted direction is out of reach. */
+export function outOfReachMessage(r: ScreenReport): string {
+  const want = r.input.pitch.want;
+  const near = nearestReachable(r);
+  const instead = near ? `; the nearest direction they can add to is ${near.name} (up to ${fixed(near.bestTowardIn, 1)} in, ${fixed(near.pct, 0)} %): try --want ${near.key}` : "";
+  return (
+    `--want ${want} is out of reach for this spin: the seams add at most ${fixed(r.reach.bestTowardIn, 1)} in of ${WANT_WORDS[want]} movement, ` +
+    `${fixed(r.reach.wantPct, 0)} % of their strongest (${fixed(r.reach.strongestIn, 1)} in), so no grip is ranked${instead}, or print a classic hold with --reference four-seam|two-seam`
+  );
+}
+
+const cardPage = (layout: Layout, c: CardContent): Page => ({ widthIn: layout.page.widthIn, heightIn: layout.page.heightIn, scene: cardScene(layout, c) });
+
+function sheetPages(layout: Layout, contents: readonly CardContent[]): Page[] {
+  const per = layout.grid!.columns * layout.grid!.rows;
+  const pages: Page[] = [];
+  for (let k = 0; k < contents.length; k += per) {
+    const scene = createScene(layout.page.widthIn * PT_PER_IN, layout.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
+    placeCards(scene, layout, contents.slice(k, k + per).map((c) => cardScene(layout.card!, c)));
+    pages.push({ widthIn: layout.page.widthIn, heightIn: layout.page.heightIn, scene });
+  }
+  return pages;
 }
 
 export async function runCard(job: CardJob): Promise<PaperOutput> {
   const { layout } = job;
-  const screened = screenOne(job.screen, job.screen.pitches[0]);
-  const { result, report } = screened;
-  const cardLayout = layout.kind === "card" ? layout : layout.card!;
-  const perPage = layout.kind === "card" ? 1 : layout.grid!.columns * layout.grid!.rows;
-  let picks: { screened: (typeof result.candidates)[number]; rep: (typeof report.candidates)[number] }[];
-  if (job.reference !== undefined) {
-    const i = result.references.findIndex((r) => r.reference === job.reference);
-    picks = [{ screened: result.references[i], rep: report.references[i] }];
-  } else {
-    const n = job.candidate;
-    if (n > result.candidates.length) throw new InputError(`--candidate ${n} is out of range; the screen found ${result.candidates.length} candidate(s)`);
-    const first = layout.kind === "card" ? n - 1 : 0;
-    picks = result.candidates.slice(first, first + perPage).map((s, k) => ({ screened: s, rep: report.candidates[first + k] }));
-  }
   const s = job.screen.sampler;
-  const contents = picks.map((p, k) => cardContent(report, p.rep, p.screened, s.band, s.seamShape, `card${k + 1}`));
-  if (job.svg) return { bytes: renderCardSvg(cardLayout, contents[0]), format: "svg", pages: 1, pitches: 1 };
-  const doc = newDocument(layout, contents[0].title);
-  let pages = 1;
-  if (layout.kind === "card") drawCard(doc, layout, contents[0]);
-  else {
-    const origins = cardOrigins(layout);
-    contents.forEach((c, k) => {
-      if (k > 0 && k % origins.length === 0) {
-        addPage(doc, layout);
-        pages++;
-      }
-      drawCard(doc, cardLayout, c, origins[k % origins.length]);
+  const screened = job.screen.pitches.length === 1 ? [screenOne(job.screen, job.screen.pitches[0])] : screenAll(job.screen);
+  const contents: CardContent[] = [];
+  if (screened.length === 1) {
+    const { report } = screened[0];
+    if (job.reference !== undefined) {
+      const o = report.references.find((r) => r.reference === job.reference)!;
+      contents.push(cardContent(report, o, s.seamShape, "card1"));
+    } else {
+      if (report.reach.outOfReach) throw new InputError(outOfReachMessage(report));
+      const n = job.candidate;
+      if (n > report.candidates.length) throw new InputError(`--candidate ${n} is out of range; the screen found ${report.candidates.length} grip(s)`);
+      const first = layout.kind === "card" ? n - 1 : 0;
+      const count = layout.kind === "card" ? 1 : report.candidates.length - first;
+      report.candidates.slice(first, first + count).forEach((o, k) => contents.push(cardContent(report, o, s.seamShape, `card${k + 1}`)));
+      // a sheet carries the classic holds after the grips
+      if (layout.kind === "sheet") report.references.forEach((o, k) => contents.push(cardContent(report, o, s.seamShape, `hold${k + 1}`)));
+    }
+  } else {
+    // a staff sheet: one card per pitch, its best grip or, out of reach, what the seams can do instead
+    screened.forEach(({ report }, i) => {
+      if (job.reference !== undefined) contents.push(cardContent(report, report.references.find((r) => r.reference === job.reference)!, s.seamShape, `p${i}`));
+      else if (report.reach.outOfReach || !report.candidates.length) contents.push(outOfReachContent(report));
+      else contents.push(cardContent(report, report.candidates[Math.min(job.candidate, report.candidates.length) - 1], s.seamShape, `p${i}`));
     });
   }
-  return { bytes: await finish(doc), format: "pdf", pages, pitches: 1 };
+  if (job.format === "svg") return { bytes: renderCardSvg(layout, contents[0]), format: "svg", pages: 1, pitches: screened.length };
+  if (job.format === "png") return { bytes: sceneToPng(cardScene(layout, contents[0])), format: "png", pages: 1, pitches: screened.length };
+  const pages = layout.kind === "card" ? [cardPage(layout, contents[0])] : sheetPages(layout, contents);
+  return { bytes: await pdfOfPages(pages, contents[0].title), format: "pdf", pages: pages.length, pitches: screened.length };
 }
 
 export interface AtlasJob {
   readonly screen: ScreenJob;
   readonly layout: Layout;
+  /** The request as given and the screen's top options: a worker thread builds the same job from them (screenPool.ts). */
+  readonly request: Request;
+  readonly top: PoolTask["top"];
 }
+
+const ATLAS_TOP = { fallback: 4, range: [1, 12] as const };
 
 export function parseAtlas(request: Request): AtlasJob {
   const layout = layoutOf(String(request.layout ?? "atlas-letter"), ["atlas"]);
-  return { layout, screen: parseScreen(request, { fallback: 4, range: [1, 12] }) };
+  const screen = parseScreen(request, ATLAS_TOP);
+  checkNames(screen);
+  return { layout, screen, request, top: ATLAS_TOP };
+}
+
+/** The values a sphere map shows for a screened pitch: seam movement toward the wanted direction (its size for "any"), inches. */
+export function mapValuesIn(p: ScreenedPitch): Float64Array {
+  return p.result.scores.map((x) => x / M_PER_IN);
 }
 
 export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number, total: number) => void = () => {}): Promise<PaperOutput> {
-  const flown = screenAll(job.screen, tick);
-  const s = job.screen.sampler;
-  const pdf = await renderAtlasPdf({
-    layout: job.layout,
-    team: job.screen.team,
-    pitches: flown.map((f) => ({ result: f.result, report: f.report })),
-    band: s.band,
-    seamShape: s.seamShape,
-    onPage: (done, total) => tick("pages", done, total),
+  const base = { layout: job.layout, team: job.screen.team, seamShape: job.screen.sampler.seamShape, onPage: (done: number, total: number) => tick("pages", done, total) };
+  // each pitch's pages are drawn as soon as it is screened, while the worker screens the others
+  const ready: Page[][] = [];
+  const pitches = await screenAllPooled(job.screen, job.request, job.top, (i, p) => (ready[i] = pitchPages(base, p, i)), tick);
+  const pdf = await renderAtlasPdf({ ...base, pitches }, ready);
+  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: pitches.length };
+}
+
+/** The sphere map of one screened pitch as a PNG picture (what `screen --map-png` writes). */
+export function mapPng(p: ScreenedPitch, seamShape: number): Buffer {
+  const r = p.report;
+  const want = r.input.pitch.want;
+  const scene = sphereMapScene(mapValuesIn(p), p.result.grid, {
+    widthPx: 720,
+    title: `${r.input.pitch.pitcher ? `${r.input.pitch.pitcher} \u2013 ` : ""}${r.input.pitch.name}: seam movement ${want === "any" ? "(its size)" : `toward ${WANT_WORDS[want]}`} at the plate`,
+    valueLabel: want === "any" ? "seam movement, inches" : "seam movement toward the wanted direction, inches (negative: the other way)",
+    seamShape,
+    candidates: r.reach.outOfReach ? [] : r.candidates.map((c) => ({ direction: c.axis, label: String(c.rank) })),
+    referenceHolds: r.references.map((c) => ({ direction: c.axis, label: c.reference === "four-seam" ? "4S" : "2S" })),
+    valueDigits: 1,
   });
-  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: flown.length };
+  return sceneToPng(scene);
 }
 
 export interface HandoutJob {
   readonly layout: Layout;
-  readonly sampler: SamplerSettings;
+  readonly request: Request;
+  readonly clinic: Clinic;
 }
 
 export function parseHandout(request: Request): HandoutJob {
-  return { layout: layoutOf(String(request.layout ?? "handout-letter"), ["handout"]), sampler: samplerSettings(request) };
+  const layout = layoutOf(String(request.layout ?? "handout-letter"), ["handout"]);
+  const text = (name: string): string | undefined => {
+    const v = request[name];
+    if (v === undefined) return undefined;
+    if (Array.isArray(v)) throw new InputError(`--${name} was given ${v.length} times; expected it once`);
+    const s = String(v);
+    assertPrintable(`--${name}`, s);
+    if (s.length > 200) throw new InputError(`--${name} is ${s.length} characters long; expected at most 200 for the header line`);
+    return s;
+  };
+  // the model and seam settings are checked now, so a bad value stops the run before any output is planned
+  samplerSettings(request);
+  return { layout, request, clinic: { name: text("clinic"), date: text("date"), contact: text("contact") } };
 }
 
-export async function runHandout(job: HandoutJob): Promise<PaperOutput> {
-  const s = job.sampler;
-  const pdf = await renderHandoutPdf({ layout: job.layout, band: s.band, seamShape: s.seamShape, seamPoints: s.seamPoints, bandCenterDeg: s.bandCenterDeg, bandWidthDeg: s.bandWidthDeg });
-  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: 0 };
+/** The handout's figures' file names in a --figures-png folder. */
+export const FIGURE_FILES = ["four-seam-push.png", "two-seam-push.png"] as const;
+
+export async function runHandout(job: HandoutJob): Promise<PaperOutput & { figures: Buffer[] }> {
+  const choice = modelChoice(job.request);
+  const s = samplerSettings(job.request, choice.profile);
+  const model = buildModel(choice.profile, s.seamShape);
+  const seam = seamFor(s.seamShape, s.seamPoints);
+  const pdf = await renderHandoutPdf({ layout: job.layout, model, values: choice.profile.values, seam, clinic: job.clinic });
+  const figures = job.request["figures-png"] === undefined ? [] : handoutFigures(model, seam).map((f) => sceneToPng(figureScene(f)));
+  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: 0, figures };
 }

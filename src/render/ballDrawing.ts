@@ -4,18 +4,16 @@
  * Frames: the ball frame of geometry/seamCurve.ts; the view of projection.ts.
  * Visual language: ballStyle.ts.
  */
-import type { Container, G } from "@svgdotjs/svg.js";
 import { assertSeamPointCount } from "../../geometry/seamSamples.js";
 import type { Vec3 } from "../../geometry/vec.js";
 import { seamPaths, SEAM_HALF_WIDTH_RAD, stitchMarks } from "./ballSeam.js";
 import {
-  drawFingerPads, drawFlowBand, drawLandmarks, drawPushArrow, drawSpinAxis,
-  type FingerPad, type FlowBandOverlay, type PushArrow,
+  drawFingerPads, drawFingers, drawFlowBand, drawLandmarks, drawPushArrow, drawSpinAxis,
+  type FingerMark, type FingerPad, type FlowBandOverlay, type PushArrow,
 } from "./ballOverlays.js";
 import { BALL_STYLE as S } from "./ballStyle.js";
 import type { DiscPlacement, View } from "./projection.js";
-import { createSvgCanvas, DEFAULT_SVG_DIGITS, serializeSvg } from "./svgContext.js";
-import { addText } from "./svgText.js";
+import { addText, createScene, DEFAULT_SCENE_DIGITS, serializeScene, type SceneNode } from "./scene.js";
 
 export interface BallOverlays {
   /** Spin axis, ball frame, pointing at the positive end (right-hand rule). */
@@ -23,6 +21,8 @@ export interface BallOverlays {
   /** The separation band seen by the flow. */
   readonly flowBand?: FlowBandOverlay;
   readonly fingerPads?: readonly FingerPad[];
+  /** Fingers with their real pad sizes and direction (drawn instead of plain pads). */
+  readonly fingers?: readonly FingerMark[];
   readonly push?: PushArrow;
   /** Landmark names to label (geometry/landmarks.ts), or "all". */
   readonly landmarks?: "all" | readonly string[];
@@ -37,6 +37,8 @@ export interface BallModel {
   readonly title?: string;
   /** Line under the ball. */
   readonly caption?: string;
+  /** Words at the ball's left and right (e.g. "glove side", "arm side"), under its edges. */
+  readonly sides?: { readonly left: string; readonly right: string };
 }
 
 export interface BallDrawingOptions {
@@ -85,7 +87,7 @@ function layoutLegend(kinds: readonly LegendKind[], widthPx: number): { kind: Le
   return out;
 }
 
-function drawLegendSwatch(g: Container, kind: LegendKind, x: number, y: number): void {
+function drawLegendSwatch(g: SceneNode, kind: LegendKind, x: number, y: number): void {
   const line = (attrs: Record<string, string | number>) => g.path().attr({ d: `M${x} ${y}L${x + 18} ${y}`, fill: "none", ...attrs });
   if (kind === "seam") {
     line({ stroke: S.seamBand, "stroke-width": 6 });
@@ -109,9 +111,14 @@ function drawLegendSwatch(g: Container, kind: LegendKind, x: number, y: number):
  * Throws RangeError for an invalid seam shape, option or overlay.
  */
 export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}): string {
+  return serializeScene(ballScene(model, options), options.digits ?? DEFAULT_SCENE_DIGITS, options.idPrefix ?? "sa");
+}
+
+/** The ball drawing as drawing commands (render/scene.ts), for SVG, PDF and PNG alike; see renderBallSvg. */
+export function ballScene(model: BallModel, options: BallDrawingOptions = {}): SceneNode {
   const sizePx = options.sizePx ?? 360;
   if (!(sizePx >= 120 && sizePx <= 4000)) throw new RangeError(`drawing size ${sizePx} px must be from 120 to 4000 px`);
-  const digits = options.digits ?? DEFAULT_SVG_DIGITS;
+  const digits = options.digits ?? DEFAULT_SCENE_DIGITS;
   const seamPoints = options.seamPoints ?? 1024;
   assertSeamPointCount(seamPoints);
   const prefix = options.idPrefix ?? "sa";
@@ -123,7 +130,7 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
   if (faded) kinds.push("far seam");
   if (ov.spinAxis) kinds.push("axis");
   if (ov.flowBand) kinds.push("band");
-  if (ov.fingerPads?.length) kinds.push("pad");
+  if (ov.fingerPads?.length || ov.fingers?.length) kinds.push("pad");
   if (ov.push) kinds.push("push");
   const legend = options.legend ?? true ? layoutLegend(kinds, sizePx) : [];
   const titlePx = model.title ? 30 : 0;
@@ -132,7 +139,7 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
   const heightPx = titlePx + sizePx + captionPx + legendPx;
   const disc: DiscPlacement = { radiusPx: 0.36 * sizePx, centerXPx: sizePx / 2, centerYPx: titlePx + sizePx / 2 };
 
-  const draw = createSvgCanvas(sizePx, heightPx).attr({ "font-family": S.font });
+  const draw = createScene(sizePx, heightPx).attr({ "font-family": S.font });
   if (model.title) draw.element("title").words(model.title);
   const shade = draw
     .gradient("radial", (add) => {
@@ -144,7 +151,7 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
     // light from the upper left: the highlight sits up and left of the centre
     .attr({ cx: "40%", cy: "36%", r: "70%", fx: "34%", fy: "28%" });
 
-  const under: G = draw.group().attr({ class: "sa-under" });
+  const under: SceneNode = draw.group().attr({ class: "sa-under" });
   draw.circle().attr({ cx: disc.centerXPx, cy: disc.centerYPx, r: disc.radiusPx, fill: `url(#${shade.id()})`, class: "sa-cover" });
   const surface = draw.group().attr({ class: "sa-surface" });
   if (ov.flowBand) drawFlowBand(surface, model.view, disc, ov.flowBand, digits);
@@ -168,13 +175,19 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
   draw.circle().attr({ cx: disc.centerXPx, cy: disc.centerYPx, r: disc.radiusPx, fill: "none", stroke: S.coverOutline, "stroke-width": 1.2 });
   const marks = draw.group().attr({ class: "sa-marks" });
   if (ov.fingerPads?.length) drawFingerPads(marks, model.view, disc, ov.fingerPads, digits);
+  if (ov.fingers?.length) drawFingers(marks, model.view, disc, ov.fingers, digits);
   if (ov.landmarks) drawLandmarks(marks, model.view, disc, model.seamShape, ov.landmarks);
   if (ov.spinAxis) drawSpinAxis(under, marks, model.view, disc, ov.spinAxis, digits);
   if (ov.push) drawPushArrow(marks, model.view, disc, ov.push, digits);
 
   if (model.title) addText(draw, sizePx / 2, 21, model.title, { sizePx: 15, fill: S.ink, anchor: "middle", weight: "bold", className: "sa-title" });
+  if (model.sides) {
+    const y = disc.centerYPx + disc.radiusPx + 12;
+    addText(draw, disc.centerXPx - disc.radiusPx * 1.02, y, model.sides.left, { sizePx: 11, fill: S.ink, className: "sa-side" });
+    addText(draw, disc.centerXPx + disc.radiusPx * 1.02, y, model.sides.right, { sizePx: 11, fill: S.ink, anchor: "end", className: "sa-side" });
+  }
   if (model.caption) {
-    addText(draw, sizePx / 2, titlePx + sizePx + 14, model.caption, { sizePx: 11, fill: S.ink, anchor: "middle", italic: true, className: "sa-caption" });
+    addText(draw, sizePx / 2, titlePx + sizePx + 14, model.caption, { sizePx: 11, fill: S.ink, anchor: "middle", className: "sa-caption" });
   }
   if (legend.length) {
     const g = draw.group().attr({ class: "sa-legend" });
@@ -185,5 +198,5 @@ export function renderBallSvg(model: BallModel, options: BallDrawingOptions = {}
       addText(g, item.x + 24, y + 3.5, LEGEND_TEXT[item.kind], { sizePx: LEGEND_FONT_PX, fill: S.ink });
     }
   }
-  return serializeSvg(draw, digits, prefix);
+  return draw;
 }

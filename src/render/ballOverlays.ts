@@ -1,8 +1,7 @@
 /**
  * Overlays on a ball drawing (ball frame; view and disc as in projection.ts; marks
- * and colours as in ballStyle.ts). Each function adds its marks to an svg.js group.
+ * and colours as in ballStyle.ts). Each function adds its marks to a drawing group (scene.ts).
  */
-import type { G } from "@svgdotjs/svg.js";
 import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import { findLandmarks } from "../../geometry/landmarks.js";
 import { cross3, dot3, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
@@ -10,9 +9,8 @@ import type { Band } from "../sampling/band.js";
 import { BALL_STYLE as S } from "./ballStyle.js";
 import { depthRuns, projectPoint, projectPoints, runsWhere, type DiscPlacement, type View } from "./projection.js";
 import { smallCirclePoints } from "./sphereCircle.js";
-import { formatNumber } from "./svgContext.js";
+import { addText, formatNumber, type SceneNode as G } from "./scene.js";
 import { pointsAttribute, polylinePath } from "./svgPath.js";
-import { addText } from "./svgText.js";
 
 /** How far the spin-axis stubs reach beyond the surface, ball radii. */
 const AXIS_STUB_RADII = 0.3;
@@ -230,5 +228,96 @@ export function drawLandmarks(g: G, view: View, disc: DiscPlacement, b: number, 
     if (!(p.depthPx > 0)) continue;
     group.circle().attr({ cx: p.xPx, cy: p.yPx, r: 2.2, fill: S.landmark });
     addText(group, p.xPx + 4, p.yPx - 4, l.name, { sizePx: 9, fill: S.landmark, haloPx: 2 });
+  }
+}
+
+export interface FingerMark {
+  /** Centre of the fingertip pad, ball frame (normalised here). */
+  readonly direction: Vec3;
+  /** Tangent at the pad toward the fingertip, ball frame. */
+  readonly pointing: Vec3;
+  /** Pad width across the finger and length along it, inches (real size on the nominal ball). */
+  readonly widthIn: number;
+  readonly lengthIn: number;
+  readonly label: string;
+  /** Working fingers are drawn stronger than resting ones. */
+  readonly working: boolean;
+}
+
+/** How much of the finger behind its pad is drawn, inches along the surface. */
+const FINGER_BODY_IN = 1.1;
+
+/**
+ * Fingers as they lie on the ball: each finger's body as a band of its real width
+ * running back from the pad along the surface (away from the fingertip), and the
+ * pad as the oval it covers (width across, length along the finger). Parts facing
+ * away from the viewer are left out; a pad wholly on the far side shows as a faded
+ * dashed outline, so the thumb beneath the ball still reads in a view from above.
+ */
+export function drawFingers(g: G, view: View, disc: DiscPlacement, fingers: readonly FingerMark[], digits: number): void {
+  const group = g.group().attr({ class: "sa-fingers" });
+  const r = disc.radiusPx;
+  const pxPerIn = r / BALL_RADIUS_IN;
+  for (const f of fingers) {
+    const c = unit3(f.direction);
+    const k0 = dot3(f.pointing, c);
+    const u = unit3([f.pointing[0] - k0 * c[0], f.pointing[1] - k0 * c[1], f.pointing[2] - k0 * c[2]]);
+    const x = cross3(c, u);
+    // the finger's body: the great circle from the pad's back edge, away from the tip
+    const body: number[] = [];
+    const start = f.lengthIn / 2 / BALL_RADIUS_IN;
+    const steps = 24;
+    for (let i = 0; i <= steps; i++) {
+      const a = -(start * 0.2 + ((FINGER_BODY_IN / BALL_RADIUS_IN) * i) / steps);
+      const p: Vec3 = [Math.cos(a) * c[0] + Math.sin(a) * u[0], Math.cos(a) * c[1] + Math.sin(a) * u[1], Math.cos(a) * c[2] + Math.sin(a) * u[2]];
+      const q = projectPoint(view, disc, p);
+      if (q.depthPx > 0) body.push(q.xPx, q.yPx);
+      else if (body.length) break;
+    }
+    if (body.length >= 4) {
+      group.path().attr({
+        d: polylinePath(body, false, digits), fill: "none", stroke: S.fingerFill, "stroke-width": f.widthIn * pxPerIn * 0.95,
+        "stroke-opacity": f.working ? 0.5 : 0.32, "stroke-linecap": "round", class: "sa-finger",
+      });
+    }
+    // the pad: an oval on the surface, half-axes along (u) and across (x) the finger
+    const a = f.lengthIn / 2 / BALL_RADIUS_IN, b = f.widthIn / 2 / BALL_RADIUS_IN;
+    const ring: number[] = [];
+    let visible = 0;
+    const n = 48;
+    for (let i = 0; i < n; i++) {
+      const phi = (2 * Math.PI * i) / n;
+      const da = a * Math.cos(phi), db = b * Math.sin(phi);
+      const ang = Math.hypot(da, db);
+      const t: Vec3 = [(da * u[0] + db * x[0]) / ang, (da * u[1] + db * x[1]) / ang, (da * u[2] + db * x[2]) / ang];
+      const p: Vec3 = [Math.cos(ang) * c[0] + Math.sin(ang) * t[0], Math.cos(ang) * c[1] + Math.sin(ang) * t[1], Math.cos(ang) * c[2] + Math.sin(ang) * t[2]];
+      const q = projectPoint(view, disc, p);
+      if (q.depthPx > 0) visible++;
+      // a hidden boundary point is pushed out to the limb, which traces the limb inside the pad
+      const dx = q.xPx - disc.centerXPx, dy = q.yPx - disc.centerYPx;
+      const s = q.depthPx > 0 ? 1 : r / Math.max(Math.hypot(dx, dy), 1e-9);
+      ring.push(disc.centerXPx + s * dx, disc.centerYPx + s * dy);
+    }
+    const centre = projectPoint(view, disc, c);
+    if (visible > 0) {
+      group.path().attr({
+        d: polylinePath(ring, true, digits), fill: S.padFill, "fill-opacity": f.working ? 0.78 : 0.5, stroke: S.padOutline,
+        "stroke-width": 1.2, class: "sa-pad",
+      });
+    } else {
+      const far: number[] = [];
+      for (let i = 0; i < n; i++) {
+        const phi = (2 * Math.PI * i) / n;
+        const da = a * Math.cos(phi), db = b * Math.sin(phi);
+        const ang = Math.hypot(da, db);
+        const p: Vec3 = [0, 1, 2].map((k) => Math.cos(ang) * c[k] + Math.sin(ang) * ((da * u[k] + db * x[k]) / ang)) as Vec3;
+        const q = projectPoint(view, disc, p);
+        far.push(q.xPx, q.yPx);
+      }
+      group.path().attr({ d: polylinePath(far, true, digits), fill: "none", stroke: S.padOutline, "stroke-width": 1, "stroke-dasharray": "3 2", opacity: 0.55, class: "sa-pad-far" });
+    }
+    addText(group, centre.xPx, centre.yPx + 4, f.label, {
+      sizePx: 11, fill: S.padOutline, anchor: "middle", weight: "bold", haloPx: 3, opacity: centre.depthPx > 0 ? 1 : 0.7, className: "sa-pad-label",
+    });
   }
 }

@@ -8,10 +8,14 @@
  * edges meeting on the seam's centre line, the point of the V toward increasing t.
  */
 import { BALL_RADIUS_IN } from "../../geometry/ball.js";
-import { sampleSeam, seamLength } from "../../geometry/seamSamples.js";
-import { stitchLayout } from "../../geometry/stitches.js";
+import { BoundedCache } from "../../geometry/cache.js";
+import { seamLength } from "../../geometry/seamSamples.js";
+import { stitchLayout, type Stitches } from "../../geometry/stitches.js";
+import { seamFor } from "../sampling/measure.js";
 import { depthRuns, projectPoints, type DiscPlacement, type View } from "./projection.js";
 import { polylinePath } from "./svgPath.js";
+
+const stitchCache = new BoundedCache<number, Stitches>("stitch layouts per seam shape", 4);
 
 /** Width of the stitched seam, inches (common practice: about 3/16 in). */
 export const SEAM_WIDTH_IN = 3 / 16;
@@ -50,7 +54,7 @@ export interface SeamPaths {
 
 /** Path data of the seam band and the hidden seam for shape `b`, sampled at `seamPoints` (multiple of 4). */
 export function seamPaths(b: number, view: View, disc: DiscPlacement, seamPoints: number, digits: number): SeamPaths {
-  const seam = sampleSeam(b, seamPoints);
+  const seam = seamFor(b, seamPoints);
   const n = seam.count;
   const side = new Float64Array(3 * n);
   const left = new Float64Array(3 * n);
@@ -83,7 +87,7 @@ export interface StitchMarks {
 
 /** Path data of the double stitches whose centres face the viewer. */
 export function stitchMarks(b: number, view: View, disc: DiscPlacement, digits: number): StitchMarks {
-  const layout = stitchLayout(b);
+  const layout = stitchCache.get(b, () => stitchLayout(b));
   const count = layout.count;
   const centres = projectPoints(view, disc, layout.centres);
   // legs reach 85 % of the way to the band edge; the V is 60 % of the stitch pitch long

@@ -13,7 +13,8 @@
  *   flow band      the separation band seen by the flow: cornflower tint between
  *                  its two edge circles (solid steel blue); the front stagnation
  *                  point a small open steel-blue diamond
- *   finger pads    ochre translucent ellipses with a dark brown outline and label
+ *   finger pads    ochre translucent ellipses with a dark brown outline and label;
+ *                  fingers drawn as tan bands of their real width behind the pads
  *   push arrow     spruce green arrow from the centre; a push along the line of
  *                  sight is a ring with a dot (toward the viewer) or a cross (away)
  *   landmarks      small graphite dots with haloed graphite labels
@@ -37,6 +38,7 @@ export const BALL_STYLE = {
   padFill: "#e3a83b",
   padFillOpacity: 0.45,
   padOutline: "#6b4a12",
+  fingerFill: "#c98a4b",
   push: "#2f6f4f",
   ink: "#2c2c2c",
   landmark: "#4a4a4a",

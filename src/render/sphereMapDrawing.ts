@@ -15,16 +15,14 @@
  * 1 deg spacing (41,240 cells) about 1.3 MB; 2 deg (10,328 cells) about 460 kB, the
  * recommended spacing for print; 3 deg (4,584 cells) about 300 kB, enough on screen.
  */
-import type { G, Svg } from "@svgdotjs/svg.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
-import { sampleSeam } from "../../geometry/seamSamples.js";
+import { seamFor } from "../sampling/measure.js";
 import type { SphereGrid } from "../../geometry/sphereGrid.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
 import { rampColor, VERDIGRIS_NAME } from "./colorScale.js";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "./hammer.js";
-import { createSvgCanvas, serializeSvg } from "./svgContext.js";
+import { addText, createScene, serializeScene, type SceneNode } from "./scene.js";
 import { pointsAttribute, polylinePath, relativePolygonPath } from "./svgPath.js";
-import { addText } from "./svgText.js";
 import { DEG } from "../../geometry/units.js";
 
 export interface MapMarker {
@@ -69,6 +67,11 @@ const SEAM_MAP_POINTS = 1024;
  * Throws RangeError when the lengths differ or an option is out of range.
  */
 export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, options: SphereMapOptions = {}): string {
+  return serializeScene(sphereMapScene(values, grid, options), options.digits ?? 1, options.idPrefix ?? "sa");
+}
+
+/** The sphere map as drawing commands (render/scene.ts), for SVG, PDF and PNG alike; see renderSphereMapSvg. */
+export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: SphereMapOptions = {}): SceneNode {
   if (values.length !== grid.count) throw new RangeError(`${values.length} values for a grid of ${grid.count} cells`);
   const widthPx = options.widthPx ?? 720;
   if (!(widthPx >= 240 && widthPx <= 4000)) throw new RangeError(`map width ${widthPx} px must be from 240 to 4000 px`);
@@ -83,7 +86,7 @@ export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, optio
   const scale = (widthPx - 2 * margin) / (2 * HAMMER_HALF_WIDTH); // px per unit-sphere length
   const titlePx = options.title ? 38 : 12;
   const mapHeightPx = 2 * HAMMER_HALF_HEIGHT * scale;
-  const legendPx = 78;
+  const legendPx = 82;
   const cx = widthPx / 2;
   const cy = titlePx + mapHeightPx / 2;
   const heightPx = titlePx + mapHeightPx + legendPx;
@@ -93,7 +96,7 @@ export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, optio
     out.push(cx + scale * xy[0], cy - scale * xy[1]);
   };
 
-  const draw = createSvgCanvas(widthPx, heightPx).attr({ "font-family": "DejaVu Sans, Verdana, sans-serif" });
+  const draw = createScene(widthPx, heightPx).attr({ "font-family": "DejaVu Sans, Verdana, sans-serif" });
   if (options.title) draw.element("title").words(options.title);
 
   // cells: runs of equal colour step within a ring, grouped by step
@@ -179,7 +182,7 @@ export function renderSphereMapSvg(values: Float64Array, grid: SphereGrid, optio
 
   if (options.title) addText(draw, widthPx / 2, 21, options.title, { sizePx: 15, fill: "#1f1f1f", anchor: "middle", weight: "bold", className: "sa-title" });
   drawLegend(draw, { prefix, widthPx, top: titlePx + mapHeightPx + 8, lo, hi, valueDigits, label: options.valueLabel ?? "value" });
-  return serializeSvg(draw, digits, prefix);
+  return draw;
 }
 
 function valueRange(values: Float64Array, range?: readonly [number, number]): [number, number] {
@@ -207,7 +210,7 @@ function valueRange(values: Float64Array, range?: readonly [number, number]): [n
  * latitude interpolated linearly in longitude across the cut.
  */
 function seamOnMap(b: number, toPx: (lon: number, lat: number, out: number[]) => void, digits: number): string {
-  const seam = sampleSeam(b, SEAM_MAP_POINTS);
+  const seam = seamFor(b, SEAM_MAP_POINTS);
   const n = seam.count;
   const lonLat = (i: number) => lonLatOf(seam.points[3 * (i % n)], seam.points[3 * (i % n) + 1], seam.points[3 * (i % n) + 2]);
   let d = "";
@@ -240,13 +243,13 @@ function markerPx(direction: Readonly<Vec3>, toPx: (lon: number, lat: number, ou
   return p;
 }
 
-function drawCandidateMarker(g: G, x: number, y: number, digits: number): void {
+function drawCandidateMarker(g: SceneNode, x: number, y: number, digits: number): void {
   const pts: number[] = [];
   for (let k = 0; k < 6; k++) pts.push(x + 7 * Math.cos((Math.PI / 3) * k), y + 7 * Math.sin((Math.PI / 3) * k));
   g.polygon().attr({ points: pointsAttribute(pts, digits), fill: "#ffffff", stroke: "#111111", "stroke-width": 1.2, class: "sa-candidate" });
 }
 
-function drawHoldMarker(g: G, x: number, y: number): void {
+function drawHoldMarker(g: SceneNode, x: number, y: number): void {
   const h = 4.5;
   const d = `M${x - h} ${y - h}L${x + h} ${y + h}M${x - h} ${y + h}L${x + h} ${y - h}`;
   g.rect().attr({ x: x - h, y: y - h, width: 2 * h, height: 2 * h, fill: "#ffffff", stroke: "#111111", "stroke-width": 1.2, class: "sa-hold" });
@@ -263,7 +266,15 @@ interface LegendLayout {
   readonly label: string;
 }
 
-function drawLegend(draw: Svg, l: LegendLayout): void {
+/** A round step (1, 2 or 5 times a power of ten) near `raw`. */
+function niceStep(raw: number): number {
+  if (!(raw > 0) || !Number.isFinite(raw)) return 1;
+  const p = 10 ** Math.floor(Math.log10(raw));
+  const m = raw / p;
+  return (m < 1.5 ? 1 : m < 3.5 ? 2 : m < 7.5 ? 5 : 10) * p;
+}
+
+function drawLegend(draw: SceneNode, l: LegendLayout): void {
   const g = draw.group().attr({ class: "sa-legend" });
   const barW = Math.min(300, 0.4 * l.widthPx);
   const barX = l.widthPx / 2 - barW / 2;
@@ -277,7 +288,17 @@ function drawLegend(draw: Svg, l: LegendLayout): void {
   // min and max beside the bar's ends and the label under it, so no text can overlap
   addText(g, barX - 6, l.top + 15.5, l.lo.toFixed(l.valueDigits), { ...t, anchor: "end" });
   addText(g, barX + barW + 6, l.top + 15.5, l.hi.toFixed(l.valueDigits), { ...t, anchor: "start" });
-  addText(g, l.widthPx / 2, l.top + 32, l.label, { ...t, anchor: "middle", className: "sa-value-label" });
+  // a scale with round numbers under the bar
+  const step = niceStep((l.hi - l.lo) / 5);
+  let ticks = "";
+  for (let v = Math.ceil(l.lo / step - 1e-9) * step; v <= l.hi + 1e-9 * step; v += step) {
+    const x = barX + (barW * (v - l.lo)) / (l.hi - l.lo);
+    ticks += `M${x.toFixed(2)} ${l.top + 18}L${x.toFixed(2)} ${l.top + 22}`;
+    const digits = step >= 1 ? 0 : step >= 0.1 ? 1 : 2;
+    addText(g, x, l.top + 31, (Math.abs(v) < step * 1e-6 ? 0 : v).toFixed(digits), { sizePx: 9, fill: "#1f1f1f", anchor: "middle", className: "sa-tick" });
+  }
+  g.path().attr({ d: ticks, stroke: "#3a3a3a", "stroke-width": 0.8, fill: "none" });
+  addText(g, l.widthPx / 2, l.top + 45, l.label, { ...t, anchor: "middle", className: "sa-value-label" });
   // marker key, left of the bar
   const kx = 20;
   g.path().attr({ d: `M${kx} ${l.top + 12}L${kx + 16} ${l.top + 12}`, stroke: "#ffffff", "stroke-width": 3.4, fill: "none" });
@@ -290,7 +311,7 @@ function drawLegend(draw: Svg, l: LegendLayout): void {
   addText(
     g,
     l.widthPx / 2,
-    l.top + 62,
+    l.top + 64,
     `Hammer equal-area projection · longitude from ball +x toward +y · latitude from the seam's equator plane · graticule 30° · scale ${VERDIGRIS_NAME}`,
     { sizePx: 8, fill: "#4a4a4a", anchor: "middle", className: "sa-projection-note" },
   );

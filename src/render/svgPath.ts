@@ -2,7 +2,7 @@
  * Path data text for polylines, with coordinates rounded where they are written
  * (so a path's text is already what `serializeSvg` would leave).
  */
-import { formatNumber } from "./svgContext.js";
+import { formatNumber } from "./scene.js";
 
 /**
  * "M x0 y0 L x1 y1 ..." through flat 2-D points [x0, y0, x1, y1, ...] (px), with "Z" when closed.

@@ -3,13 +3,17 @@
  * that the JSON, the CSV, the terminal table, the printed cards and the 3-D page all
  * read, so the numbers agree everywhere they appear.
  */
-import { BALL_RADIUS_M } from "../../geometry/ball.js";
+import { BALL_RADIUS_IN, BALL_RADIUS_M } from "../../geometry/ball.js";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
 import { angleToClock, formatClock } from "../../geometry/clock.js";
 import { movementClock } from "../../geometry/frames.js";
 import { DEG, M_PER_FT, M_PER_IN } from "../../geometry/units.js";
 import { type Vec3 } from "../../geometry/vec.js";
 import { seamForceNewtons } from "../physics/seamModel/newtons.js";
+import { findLandmarks } from "../../geometry/landmarks.js";
+import { angleBetween } from "../../geometry/vec.js";
+import { FINGER_PATTERNS, pitchKindFromName, type PitchKind } from "./hand.js";
+import { turnFromHold } from "./holdTurn.js";
 import { REACH_FLOOR, type ScreenResult, type ScreenedOrientation } from "./screen.js";
 
 export interface FingerReport {
@@ -18,6 +22,24 @@ export interface FingerReport {
   latLon: string;
   seamDistanceIn: number;
   region: { half: string; part: string; near: string };
+  /** Whether the pad grips a seam to set the spin (src/screening/hand.ts). */
+  working: boolean;
+  /** Unit tangent at the pad toward the fingertip, ball frame. */
+  pointing: Vec3;
+  /** The nearest horseshoe tip and the surface distance to it, inches. */
+  nearTip: { name: string; distanceIn: number };
+}
+
+/** The turn in the hand from the nearer classic hold to this grip (src/screening/holdTurn.ts), degrees. */
+export interface HoldTurnReport {
+  hold: string;
+  angleDeg: number;
+  /** Clockwise as the pitcher sees the ball at release (negative: counter-clockwise). */
+  twistClockwiseDeg: number;
+  /** The face under the fingers rolls this far, toward armSide / up (unit components). */
+  rollDeg: number;
+  rollArmSide: number;
+  rollUp: number;
 }
 
 export interface OrientationReport {
@@ -40,6 +62,8 @@ export interface OrientationReport {
   /** The sampler's band occupancy through a turn (seam occupancy, not the push). */
   occupancy: { seamInBand: number; axisPlus: number; axisMinus: number };
   fingers: FingerReport[];
+  /** From the nearer classic hold (none for the holds themselves). */
+  fromHold?: HoldTurnReport;
   release: { ballToField: number[]; trailingPoint: Vec3; fingerSpacingIn: number };
 }
 
@@ -77,8 +101,17 @@ export interface ScreenReport {
     /** The trade's movement window: from this distance to the front of the plate. */
     windowFt: number;
   };
+  /** The finger pattern: the pitch kind (read from the pitch's name) and its words. */
+  grip: { kind: PitchKind; kindFromName: boolean; pattern: string };
   /** How far toward the wanted direction the seams can push, as a share of the strongest seam push anywhere, percent (100 for "any"). */
-  reach: { wantPct: number; bestTowardIn: number; strongestIn: number; outOfReach: boolean };
+  reach: {
+    wantPct: number;
+    bestTowardIn: number;
+    strongestIn: number;
+    outOfReach: boolean;
+    /** The same for each of the four directions: the best seam movement toward it over the grid, inches, and its share of the strongest, percent. */
+    directions: Record<"arm" | "glove" | "up" | "down", { bestTowardIn: number; pct: number }>;
+  };
   grid: { count: number; spacingDeg: number };
   maximaFound: number;
   candidates: OrientationReport[];
@@ -90,6 +123,28 @@ export function clockText(rad: number | null): string | null {
   return rad === null ? null : formatClock(angleToClock(rad));
 }
 
+
+function nearestTip(r: ScreenResult, p: Vec3): { name: string; distanceIn: number } {
+  let best = { name: "", distanceIn: Infinity };
+  for (const l of findLandmarks(r.settings.seamShape)) {
+    if (l.kind !== "tip") continue;
+    const d = angleBetween(p, l.direction) * BALL_RADIUS_IN;
+    if (d < best.distanceIn) best = { name: l.name, distanceIn: d };
+  }
+  return best;
+}
+
+/** The turn from the nearer of the two classic holds. */
+function holdTurnReport(r: ScreenResult, o: ScreenedOrientation): HoldTurnReport | undefined {
+  let best: HoldTurnReport | undefined;
+  for (const h of r.references) {
+    const t = turnFromHold(o.axis, h.axis, h.grip.ballToField, r.frame);
+    if (!best || t.angleRad / DEG < best.angleDeg) {
+      best = { hold: h.reference!, angleDeg: t.angleRad / DEG, twistClockwiseDeg: t.twistRad / DEG, rollDeg: t.rollRad / DEG, rollArmSide: t.rollArmSide, rollUp: t.rollUp };
+    }
+  }
+  return best;
+}
 
 function orientationReport(r: ScreenResult, o: ScreenedOrientation, rank?: number): OrientationReport {
   const ll = vectorToLatLon(o.axis);
@@ -125,9 +180,33 @@ function orientationReport(r: ScreenResult, o: ScreenedOrientation, rank?: numbe
       latLon: formatLatLon(vectorToLatLon(p.direction)),
       seamDistanceIn: p.seamDistanceIn,
       region: { half: p.region.half, part: p.region.part, near: p.region.near },
+      working: p.working,
+      pointing: p.pointing,
+      nearTip: nearestTip(r, p.direction),
     })),
+    ...(o.reference ? {} : { fromHold: holdTurnReport(r, o) }),
     release: { ballToField: [...o.grip.ballToField], trailingPoint: o.grip.trailingPoint, fingerSpacingIn: o.grip.fingerSpacingIn },
   };
+}
+
+/** Best seam movement toward each of the four directions over the grid (the screen's per-cell movement). */
+function reachByDirection(r: ScreenResult): ScreenReport["reach"]["directions"] {
+  let arm = 0, glove = 0, up = 0, down = 0;
+  for (let i = 0; i < r.armSideM.length; i++) {
+    const a = r.armSideM[i], v = r.verticalM[i];
+    if (a > arm) arm = a;
+    if (-a > glove) glove = -a;
+    if (v > up) up = v;
+    if (-v > down) down = -v;
+  }
+  const strongest = r.reach.strongestM;
+  const one = (m: number) => ({ bestTowardIn: m / M_PER_IN, pct: strongest > 0 ? (100 * m) / strongest : 0 });
+  return { arm: one(arm), glove: one(glove), up: one(up), down: one(down) };
+}
+
+function kindOf(name: string): { kind: PitchKind; kindFromName: boolean } {
+  const k = pitchKindFromName(name);
+  return { kind: k.kind, kindFromName: k.fromName };
 }
 
 export function screenReport(r: ScreenResult, echo: PitchEcho): ScreenReport {
@@ -152,11 +231,13 @@ export function screenReport(r: ScreenResult, echo: PitchEcho): ScreenReport {
       air: { densityKgM3: air ? air.densityKgM3 : 0 },
       windowFt: s.windowStartM / M_PER_FT,
     },
+    grip: { ...kindOf(echo.name), pattern: FINGER_PATTERNS[kindOf(echo.name).kind] },
     reach: {
       wantPct: 100 * r.reach.wantFraction,
       bestTowardIn: r.reach.bestTowardM / M_PER_IN,
       strongestIn: r.reach.strongestM / M_PER_IN,
       outOfReach: r.reach.wantFraction < REACH_FLOOR,
+      directions: reachByDirection(r),
     },
     grid: { count: r.grid.count, spacingDeg: s.gridSpacingRad / DEG },
     maximaFound: r.maximaFound,

@@ -37,7 +37,7 @@ import { DEG } from "../../geometry/units.js";
 import { angleBetween, perpendicularUnit, unit3, type Vec3 } from "../../geometry/vec.js";
 import type { AirConditions } from "../physics/air.js";
 import { flyPitch, tradeArmSide, unitSeamMovement, type PitchFlight } from "../physics/pitchFlight.js";
-import { coefficientMap } from "../physics/seamModel/map.js";
+import { coefficientMap, type CoefficientMap } from "../physics/seamModel/map.js";
 import type { SeamModel } from "../physics/seamModel/model.js";
 import { turnAverage, type TurnAverage } from "../physics/seamModel/turn.js";
 import { TRADE_WINDOW_START_M, type TradeBreak } from "../physics/tradeMovement.js";
@@ -46,7 +46,7 @@ import { crossingsPerRevolution } from "../sampling/crossings.js";
 import { bandAveragesExact, type BandAverages } from "../sampling/exact.js";
 import { seamFor } from "../sampling/measure.js";
 import { computeSphereMap, type SphereMap } from "../sampling/sphereMap.js";
-import { DEFAULT_FINGER_SPACING_IN, placeFingers, type Grip } from "./hand.js";
+import { DEFAULT_FINGER_SPACING_IN, pitchKindFromName, placeFingers, type Grip } from "./hand.js";
 import { assertPitch, pitchFrame, type Pitch, type PitchFrame, type Want } from "./pitch.js";
 import { findReferenceAxes, type ReferenceName } from "./references.js";
 import { DEFAULT_SPREAD_DEG, robustness, type Robustness } from "./robustness.js";
@@ -146,7 +146,7 @@ export interface ScreenResult {
   readonly armSideM: Float64Array;
   readonly verticalM: Float64Array;
   readonly scores: Float64Array;
-  /** The sampler's occupancy map (seam occupancy, for the map's notes). */
+  /** The sampler's occupancy map (seam occupancy, for the full sphere-map output), made on first use. */
   readonly occupancy: SphereMap;
   /** Distinct local maxima found before the top-N cut. */
   readonly maximaFound: number;
@@ -280,13 +280,23 @@ function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceNam
     rankScore,
     occupancy: { ...bandAveragesExact(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad, s.band) },
     crossingsPerRevolution: crossingsPerRevolution(ctx.seam, axis[0], axis[1], axis[2], ctx.pitch.gyroRad),
-    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn),
+    // the classic holds are fastball holds, held as coaches teach them whatever the pitch
+    grip: placeFingers(axis, ctx.frame, ctx.seam, ctx.cover, s.fingerSpacingIn, reference ? "fastball" : pitchKindFromName(ctx.pitch.name).kind),
     flight,
     ...(reference ? { reference } : {}),
   };
 }
 
 const coverCache = new BoundedCache<number, CoverModel>("cover models per seam shape", 4);
+
+// A staff often has pitches with the same gyro: their sweeps are the same coefficient
+// map (it depends on the model, the gyro and the grid only), computed once per model.
+const mapCaches = new WeakMap<SeamModel, BoundedCache<string, CoefficientMap>>();
+function coefficientMapFor(model: SeamModel, gyroRad: number, grid: SphereGrid, spacingRad: number): CoefficientMap {
+  let cache = mapCaches.get(model);
+  if (!cache) mapCaches.set(model, (cache = new BoundedCache<string, CoefficientMap>("coefficient maps per gyro and grid", 8)));
+  return cache.get(`${gyroRad}/${spacingRad}`, () => coefficientMap(model, gyroRad, grid));
+}
 function coverFor(b: number): CoverModel {
   return coverCache.get(b, () => coverModel(b));
 }
@@ -315,7 +325,7 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
   };
 
   const grid = equalAreaGrid(settings.gridSpacingRad);
-  const map = coefficientMap(settings.model, pitch.gyroRad, grid);
+  const map = coefficientMapFor(settings.model, pitch.gyroRad, grid, settings.gridSpacingRad);
   const n = grid.count;
   const armSideM = new Float64Array(n);
   const verticalM = new Float64Array(n);
@@ -370,6 +380,8 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
   const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
   const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));
+  // the occupancy map is read only by the full sphere-map output (--map): made on first use
+  let occupancy: SphereMap | undefined;
   return {
     pitch,
     frame,
@@ -384,7 +396,9 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
     armSideM,
     verticalM,
     scores,
-    occupancy: computeSphereMap(seam, pitch.gyroRad, settings.band, grid),
+    get occupancy(): SphereMap {
+      return (occupancy ??= computeSphereMap(seam, pitch.gyroRad, settings.band, grid));
+    },
     maximaFound: refined.length,
   };
 }

@@ -279,6 +279,23 @@ const goldenModel: BallModel = {
   },
 };
 
+describe("ball drawing: labels stay legible in every output", () => {
+  it("draws each haloed label's white outline as its own text element before the letters (no paint-order, which PDF painters ignore)", () => {
+    const svg = renderBallSvg(fullModel);
+    expect(svg).not.toContain("paint-order");
+    const all = [...svg.matchAll(/<text\b([^>]*)>([^<]*)<\/text>/g)];
+    const halos = all.filter((m) => /class="sa-halo"/.test(m[1]));
+    expect(halos.length).toBeGreaterThanOrEqual(4); // three pad labels and the push label at least
+    for (const h of halos) {
+      const k = all.indexOf(h);
+      const next = all[k + 1];
+      expect(next[2]).toBe(h[2]); // the letters follow their halo at once, so they are painted over it
+      expect(next[1]).not.toMatch(/stroke=/);
+      expect(h[1]).toMatch(/stroke="#ffffff"/);
+    }
+  });
+});
+
 describe("ball drawing: golden file", () => {
   it("matches tests/render/golden/ball-waist-view.svg byte for byte (2 decimals, 256 seam points, 240 px)", () => {
     const svg = `${renderBallSvg(goldenModel, { sizePx: 240, seamPoints: 256 })}\n`;

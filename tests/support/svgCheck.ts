@@ -52,10 +52,10 @@ export function elements(svg: string, name: string): Record<string, string>[] {
   return out;
 }
 
-/** Text contents of every <text> element, entities decoded. */
+/** Text contents of every <text> element, entities decoded; a label's halo (class sa-halo, the same words drawn under it) is left out. */
 export function texts(svg: string): string[] {
-  return [...svg.matchAll(/<text\b[^>]*>([^<]*)<\/text>/g)].map((m) =>
-    m[1].replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&quot;/g, '"').replace(/&amp;/g, "&"),
+  return [...svg.matchAll(/<text\b([^>]*)>([^<]*)<\/text>/g)].filter((m) => !/class="sa-halo"/.test(m[1])).map((m) => m[2]).map((m) =>
+    m.replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&quot;/g, '"').replace(/&amp;/g, "&"),
   );
 }
 

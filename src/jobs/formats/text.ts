@@ -2,6 +2,7 @@
  * What the terminal shows: tables and compact plots built from job results, with
  * numbers written by the shared rules of src/render/numbers.ts (as on paper).
  */
+import { reachWords } from "../../render/paper/words.js";
 import { formatLatLon, vectorToLatLon } from "../../../geometry/ballCoords.js";
 import { DEG } from "../../../geometry/units.js";
 import { fixed, formatMovementIn, percent, signed } from "../../render/numbers.js";
@@ -103,7 +104,7 @@ export function screenTable(r: ScreenReport): string {
     p.want === "any"
       ? ""
       : r.reach.outOfReach
-        ? `\n  OUT OF REACH: the seams cannot push this pitch ${WANT_WORDS[p.want]} (at best ${fixed(r.reach.wantPct, 0)} % of the strongest seam movement, ${fixed(r.reach.strongestIn, 1)} in); no grip is ranked for it`
+        ? `\n  ${reachWords(r)}`
         : `\n  toward ${WANT_WORDS[p.want].replace("toward ", "")}: at best ${fixed(r.reach.bestTowardIn, 1)} in, ${fixed(r.reach.wantPct, 0)} % of the strongest seam movement (${fixed(r.reach.strongestIn, 1)} in)`;
   const head =
     `${p.pitcher ? `${p.pitcher}, ` : ""}${p.name} (${p.hand === "right" ? "RHP" : "LHP"}): ${fixed(p.speedMph, 1)} mph, ${fixed(p.spinRpm, 0)} rpm, ` +

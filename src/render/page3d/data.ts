@@ -36,10 +36,10 @@ export interface ListedOrientation {
   readonly orientation: OrientationReport;
 }
 
-/** The candidates in rank order, then the reference holds. */
+/** The candidates in rank order, then the reference holds; no candidate when the wanted direction is out of reach. */
 export function listOrientations(report: ScreenReport): ListedOrientation[] {
   return [
-    ...report.candidates.map((o) => ({ label: `#${o.rank}`, orientation: o })),
+    ...(report.reach.outOfReach ? [] : report.candidates.map((o) => ({ label: `#${o.rank}`, orientation: o }))),
     ...report.references.map((o) => ({ label: `${o.reference} hold`, orientation: o })),
   ];
 }

@@ -7,6 +7,7 @@
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import type { ListedOrientation } from "./data.js";
 import { fixed as fixedDigits, formatMovementIn as inches, percent as percentText } from "../numbers.js";
+import { reachWords } from "../paper/words.js";
 
 const WANT_WORDS: Record<string, string> = { arm: "toward the arm side", glove: "toward the glove side", up: "up", down: "down", any: "any direction" };
 
@@ -18,7 +19,8 @@ export function pitchSummary(report: ScreenReport): string {
     `${p.hand === "right" ? "RHP" : "LHP"}: ${fixedDigits(p.speedMph, 1)} mph, ${fixedDigits(p.spinRpm, 0)} rpm, tilt ${p.tilt} from behind the ${p.view}, ` +
     `gyro ${fixedDigits(p.gyroDeg, 1)} deg (spin efficiency ${fixedDigits(p.efficiencyPct, 1)} %); wanted push: ${WANT_WORDS[p.want] ?? p.want}. ` +
     `Seam-force model ${report.input.model.name} (${report.input.model.hash}). Band ${fixedDigits(s.bandCenterDeg - s.bandWidthDeg / 2, 1)} to ` +
-    `${fixedDigits(s.bandCenterDeg + s.bandWidthDeg / 2, 1)} deg from the stagnation point; grid ${s.gridSpacingDeg} deg, ranked by ${s.rank}.`
+    `${fixedDigits(s.bandCenterDeg + s.bandWidthDeg / 2, 1)} deg from the stagnation point; grid ${s.gridSpacingDeg} deg, ranked by ${s.rank}.` +
+    (report.reach.outOfReach ? ` ${reachWords(report)}` : "")
   );
 }
 

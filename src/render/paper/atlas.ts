@@ -1,159 +1,206 @@
 /**
- * The ranked grip atlas: a multi-page PDF for one pitch or a staff.
- *   1. cover: the pitches, each with its best grip, and the caution
+ * The ranked grip atlas: a multi-page PDF for one pitch or a staff, every page a
+ * drawing (render/scene.ts) painted straight into the PDF.
+ *   1. cover: the pitches, each with its best grip (or, when the seams cannot reach
+ *      the wanted direction, that in plain words), and the caution
  *   2. how to read the atlas
- *   per pitch: the sphere map of scores (Hammer equal-area) with the candidates
- *   numbered and the reference holds marked, then the candidates ranked as cards,
- *   the reference holds beside them
+ *   per pitch: the sphere map of seam movement toward the wanted direction (inches,
+ *   Hammer equal-area) with the grips numbered and the classic holds marked, what the
+ *   seams can reach, and the comparison table; then the grips ranked as cards with the
+ *   two classic holds' cards after them (an out-of-reach pitch gets one card saying so
+ *   instead of ranked grips)
  *   last: the caution page
  * Every number comes from the screen report (src/screening/report.ts) through the
  * shared formats, so it equals what `screen --json` gives.
  */
-import { M_PER_IN } from "../../../geometry/units.js";
-import type { Band } from "../../sampling/band.js";
-import { fixed, formatMovementIn } from "../numbers.js";
+import type { SphereGrid } from "../../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../../screening/report.js";
-import type { ScreenResult } from "../../screening/screen.js";
 import { TOOL_VERSION } from "../../version.js";
-import { renderSphereMapSvg } from "../sphereMapDrawing.js";
-import { cardContent, cardOrigins, drawCard } from "./card.js";
+import { createScene, nestScene, type SceneNode } from "../scene.js";
+import { sphereMapScene } from "../sphereMapDrawing.js";
+import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "./card.js";
+import { pdfOfPages, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
-import { addPage, drawSvg, finish, newDocument, PT_PER_IN, textInBox, type Doc } from "./pdfDoc.js";
-import { CAUTION_LONG, CAUTION_SHORT, pitchSummary } from "./words.js";
+import { PT_PER_IN } from "./pdfScene.js";
+import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
+import { CAUTION_LONG, CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareRow, HOLD_WORDS, movementWords, pitchLabel, pitchSummary, reachWords, SEAM_PICTURE, turnSentence, WANT_WORDS } from "./words.js";
+import { MODEL_STORY } from "./story.js";
 
 export interface AtlasPitch {
-  readonly result: ScreenResult;
   readonly report: ScreenReport;
+  /** Seam movement toward the wanted direction (its size for "any") per grid cell, inches. */
+  readonly mapValuesIn: Float64Array;
+  readonly grid: SphereGrid;
 }
 
 export interface AtlasInput {
   readonly layout: Layout;
   readonly team?: string;
   readonly pitches: readonly AtlasPitch[];
-  readonly band: Band;
   readonly seamShape: number;
   readonly onPage?: (done: number, total: number) => void;
 }
 
-const WANT: Record<string, string> = { arm: "arm side", glove: "glove side", up: "up", down: "down", any: "either way" };
-
 export const HOW_TO_READ = [
-  "What this atlas is. For each pitch it screens every place on the ball where the spin axis could pierce it, and ranks the distinct grips by the seam movement they add toward the wanted direction, in inches at the plate. One seam-force model gives every number: the direction, the inches and the ranking. The numbers are a model's, for planning lab time, not a promise: calibrate it to your own measurements (README).",
-  "The model. At each instant the air leaves the ball at a separation line. Where a seam sits well ahead of that line it trips the boundary layer, which then clings longer on that side; where a seam sits in the separation band it fixes the line at itself. A ball pushed by an uneven separation line moves toward the side that separates later. As the ball turns these change; the model follows them through each turn.",
+  `What this atlas is. For each pitch it tries every place on the ball where the spin axis could go through it, and ranks the distinct grips by the seam movement they add toward the wanted direction, in inches at the plate. One seam-force model gives every number. The numbers are a model's, for planning bullpen and lab time, not a promise: calibrate the model to your own measurements (README).`,
+  SEAM_PICTURE,
+  `The classic holds, as coaches teach them. The ${HOLD_WORDS["four-seam"]}. The ${HOLD_WORDS["two-seam"]}. Every grip card tells you which of the two to start from and how far to turn the ball in your hand: how far the side under your fingers rolls (toward your arm side or glove side, your fingertips or your palm) and how far the ball twists as you look at its back.`,
+  `The model, in the same words as the cards and the handout. ${MODEL_STORY}`,
   "Seam movement. The seam part of the movement at the front of the plate, read as the trade reads movement (a constant-acceleration fit over the last 50 ft, gravity removed): arm side and up, in inches, and its direction as a clock reading from behind the pitcher or the catcher, as the pitch's tilt is.",
-  "The sphere map. Each cell is one spin-axis position on the ball, drawn on the Hammer equal-area projection of the ball's own frame (longitude from the seam's node-1, latitude toward waist-A), coloured by the seam movement toward the wanted direction, in inches. The seam is drawn over it. Numbered hexagons are the candidates, crossed squares the four-seam and two-seam holds.",
-  "Score and robustness. The score is the seam movement toward the wanted direction (its size when any direction will do). No one places the axis exactly: 'mean' and 'p10' are the score's average and its 10th percentile when the axis wanders on the ball by about 5 degrees. A grip whose p10 stays close to its score is forgiving.",
-  "Seam passes per turn and seam in band. How many times a seam crosses the front of the ball per revolution (4 for the four-seam hold, 2 for the two-seam), and the share of the seam that sits in the separation band through a turn (occupancy, not the push).",
-  "Finger placement. Index and middle pads sit side by side along the spin axis at the back of the ball at release, with the thumb beneath. The grip may slide along the spin equator without changing the prediction; the card puts the pads where they rest on or nearest a seam.",
+  "The sphere map. Each cell is one place the spin axis could go through the ball, on the Hammer equal-area map of the ball's own frame, coloured by the seam movement toward the wanted direction in inches (the scale under the map). Negative numbers push the other way. Numbered hexagons are the ranked grips, crossed squares the four-seam (4S) and two-seam (2S) holds. When the seams cannot reach the wanted direction (less than 5 % of the strongest seam movement), the page says so and names the nearest direction they can reach, and no grip is ranked.",
+  "Robustness. No one places the axis exactly: 'mean' and 'p10' are the movement's average and its 10th percentile when the axis wanders on the ball by about 5 degrees. A grip whose p10 stays close to its number is forgiving.",
+  "The comparison table on every card and map page puts each grip beside the four-seam and two-seam holds for the same pitch, with the same numbers as screen --json.",
+  "Fingers. Fastballs: index and middle side by side on top, thumb beneath. Changeups: middle and ring on top, the index finger curled round to the thumb (a circle). Breaking balls: offset, the middle finger doing the work with the index beside it. The kind is read from the pitch's name. Pads are drawn at an adult's size, in the pitcher's own view (fingertips up) beside the catcher's view. The grip may slide along the spin's equator without changing the prediction; the card puts the pads on or nearest a seam.",
 ];
 
-function coverPage(doc: Doc, input: AtlasInput): void {
+const pt = (xIn: number, yIn: number, wIn: number, hIn: number): BoxPt => ({ x: xIn * PT_PER_IN, y: yIn * PT_PER_IN, w: wIn * PT_PER_IN, h: hIn * PT_PER_IN });
+
+function newPage(L: Layout): Page {
+  const scene = createScene(L.page.widthIn * PT_PER_IN, L.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
+  scene.rect().attr({ x: 0, y: 0, width: L.page.widthIn * PT_PER_IN, height: L.page.heightIn * PT_PER_IN, fill: "#ffffff", stroke: "none" });
+  return { widthIn: L.page.widthIn, heightIn: L.page.heightIn, scene };
+}
+
+function cautionBox(s: SceneNode, L: Layout, yIn: number, hIn: number): void {
+  const m = L.marginIn;
+  const w = L.page.widthIn - 2 * m;
+  s.rect().attr({ x: m * PT_PER_IN, y: yIn * PT_PER_IN, width: w * PT_PER_IN, height: hIn * PT_PER_IN, fill: "#f6efe6", stroke: "none" });
+  setText(s, CAUTION_SHORT, pt(m + 0.15, yIn + 0.12, w - 0.3, hIn - 0.2), { sizePt: L.fonts.sizePt, fill: "#7a2f1d" });
+}
+
+function bestLine(r: ScreenReport): string {
+  const best = r.candidates[0];
+  if (r.reach.outOfReach || !best) return reachWords(r);
+  const turn = best.fromHold ? ` ${turnSentence(best.fromHold)}` : "";
+  return `Best grip: ${movementWords(r, best)}; robustness ${best.robustness.meanIn.toFixed(1)} / ${best.robustness.p10In.toFixed(1)} in.${turn}`;
+}
+
+function coverPages(input: AtlasInput): Page[] {
   const L = input.layout;
   const f = L.fonts;
   const m = L.marginIn;
   const w = L.page.widthIn - 2 * m;
-  textInBox(doc, "Grip atlas", { xIn: m, yIn: m, wIn: w, hIn: 0.5 }, { font: f.bold, sizePt: f.titleSizePt + 6 });
-  textInBox(doc, input.team ?? "One pitch", { xIn: m, yIn: m + 0.55, wIn: w, hIn: 0.3 }, { font: f.body, sizePt: f.sizePt + 2, color: "#333333" });
-  textInBox(doc, `Seam orientations ranked by predicted wake asymmetry. seam-atlas ${TOOL_VERSION}.`, { xIn: m, yIn: m + 0.9, wIn: w, hIn: 0.3 }, { font: f.body, sizePt: f.sizePt, color: "#555555" });
-  let y = m + 1.4;
+  const pages: Page[] = [];
+  let page = newPage(L);
+  pages.push(page);
+  setText(page.scene, "Grip atlas", pt(m, m, w, 0.5), { sizePt: f.titleSizePt + 6, weight: "bold" });
+  setText(page.scene, input.team ?? "One pitch", pt(m, m + 0.55, w, 0.3), { sizePt: f.sizePt + 2, fill: "#333333" });
+  setText(page.scene, `Seam orientations ranked by the seam movement they add at the plate. seam-atlas ${TOOL_VERSION}.`, pt(m, m + 0.9, w, 0.3), { sizePt: f.sizePt, fill: "#555555" });
+  const bottom = L.page.heightIn - m - 1.3;
+  let y = m + 1.35;
   for (const p of input.pitches) {
     const r = p.report;
-    const best = r.candidates[0];
-    const head = `${r.input.pitch.pitcher ? `${r.input.pitch.pitcher} - ` : ""}${r.input.pitch.name}`;
-    textInBox(doc, head, { xIn: m, yIn: y, wIn: w, hIn: 0.25 }, { font: f.bold, sizePt: f.sizePt + 1 });
-    const line2 = pitchSummary(r);
-    const line3 =
-      best && !r.reach.outOfReach
-        ? `best grip #1: axis ${best.latLon.text}, seam movement ${formatMovementIn(best.seamMovement.armSideIn)} in arm side / ${formatMovementIn(best.seamMovement.verticalIn)} in up toward ${best.seamMovement.clock ?? "-"}, robustness ${formatMovementIn(best.robustness.meanIn)} / ${formatMovementIn(best.robustness.p10In)} in, ${best.crossingsPerRevolution} seam passes per turn`
-        : `the seams cannot push this pitch ${WANT[r.input.pitch.want]} (at most ${fixed(r.reach.wantPct, 0)} % of the strongest seam movement)`;
-    textInBox(doc, `${line2}\n${line3}`, { xIn: m + 0.15, yIn: y + 0.24, wIn: w - 0.15, hIn: 0.6 }, { font: f.body, sizePt: f.sizePt - 1, color: "#333333" });
-    y += 0.95;
-    if (y > L.page.heightIn - m - 1.6) break;
+    const body = `${pitchSummary(r)}\n${bestLine(r)}`;
+    const hIn = (f.sizePt * 1.4 + textHeight(body, (w - 0.15) * PT_PER_IN, { sizePt: f.sizePt - 1 })) / PT_PER_IN + 0.15;
+    if (y + hIn > bottom) {
+      page = newPage(L);
+      pages.push(page);
+      setText(page.scene, "Grip atlas (continued)", pt(m, m, w, 0.4), { sizePt: f.titleSizePt, weight: "bold" });
+      y = m + 0.6;
+    }
+    setText(page.scene, pitchLabel(r), pt(m, y, w, 0.3), { sizePt: f.sizePt + 1, weight: "bold" });
+    setText(page.scene, body, pt(m + 0.15, y + (f.sizePt * 1.4) / PT_PER_IN, w - 0.15, hIn), { sizePt: f.sizePt - 1, fill: "#333333" });
+    y += hIn;
   }
-  doc.save().rect(m * PT_PER_IN, (L.page.heightIn - m - 1.1) * PT_PER_IN, w * PT_PER_IN, 1.0 * PT_PER_IN).fillColor("#f6efe6").fill().restore();
-  textInBox(doc, CAUTION_SHORT, { xIn: m + 0.15, yIn: L.page.heightIn - m - 1.0, wIn: w - 0.3, hIn: 0.85 }, { font: f.body, sizePt: f.sizePt, color: "#7a2f1d" });
+  cautionBox(pages[0].scene, L, L.page.heightIn - m - 1.1, 1.0);
+  return pages;
 }
 
-function textPage(doc: Doc, L: Layout, title: string, paragraphs: readonly string[]): void {
+/** Pages of paragraphs under a title, continued on as many pages as they need. */
+function textPages(L: Layout, title: string, paragraphs: readonly string[]): Page[] {
   const f = L.fonts;
   const m = L.marginIn;
-  const w = L.page.widthIn - 2 * m;
-  textInBox(doc, title, { xIn: m, yIn: m, wIn: w, hIn: 0.5 }, { font: f.bold, sizePt: f.titleSizePt });
-  doc.font(f.body).fontSize(f.sizePt).fillColor("#1b1b1b");
-  doc.text(paragraphs.join("\n\n"), m * PT_PER_IN, (m + 0.7) * PT_PER_IN, { width: w * PT_PER_IN, lineGap: 2, paragraphGap: 4 });
+  const w = (L.page.widthIn - 2 * m) * PT_PER_IN;
+  const style = { sizePt: f.sizePt, leading: 1.3 };
+  const pages: Page[] = [];
+  let page = newPage(L);
+  pages.push(page);
+  setText(page.scene, title, pt(m, m, L.page.widthIn - 2 * m, 0.5), { sizePt: f.titleSizePt, weight: "bold" });
+  let y = (m + 0.7) * PT_PER_IN;
+  const bottom = (L.page.heightIn - m) * PT_PER_IN;
+  for (const para of paragraphs) {
+    const h = textHeight(para, w, style);
+    if (y + h > bottom) {
+      page = newPage(L);
+      pages.push(page);
+      y = m * PT_PER_IN;
+    }
+    setText(page.scene, para, { x: m * PT_PER_IN, y, w, h: h + f.sizePt }, style);
+    y += h + f.sizePt * 0.7;
+  }
+  return pages;
 }
 
-function mapPage(doc: Doc, input: AtlasInput, p: AtlasPitch, index: number): void {
+function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: number): Page {
   const L = input.layout;
   const f = L.fonts;
   const m = L.marginIn;
   const w = L.page.widthIn - 2 * m;
   const r = p.report;
   const pp = r.input.pitch;
-  textInBox(doc, `${pp.pitcher ? `${pp.pitcher} - ` : ""}${pp.name}: where the spin axis could sit`, { xIn: m, yIn: m, wIn: w, hIn: 0.4 }, { font: f.bold, sizePt: f.titleSizePt - 4 });
-  textInBox(doc, pitchSummary(r), { xIn: m, yIn: m + 0.45, wIn: w, hIn: 0.4 }, { font: f.body, sizePt: f.sizePt - 1, color: "#333333" });
-  const values = p.result.scores.map((x) => x / M_PER_IN);
-  const svg = renderSphereMapSvg(values, p.result.grid, {
+  const page = newPage(L);
+  const s = page.scene;
+  setText(s, `${pitchLabel(r)}: where the spin axis could go`, pt(m, m, w, 0.4), { sizePt: f.titleSizePt - 4, weight: "bold" });
+  setText(s, pitchSummary(r), pt(m, m + 0.42, w, 0.4), { sizePt: f.sizePt - 1, fill: "#333333" });
+  const toward = pp.want === "any" ? "seam movement (its size) at every place the spin axis could go" : `seam movement toward the ${WANT_WORDS[pp.want].replace("-side", " side").replace("upward", "top").replace("downward", "ground")} at every place the spin axis could go`;
+  const map = sphereMapScene(p.mapValuesIn, p.grid, {
     widthPx: 720,
-    title: pp.want === "any" ? "seam movement over every spin-axis position" : `seam movement toward ${WANT[pp.want]} over every spin-axis position`,
-    valueLabel: "seam movement, in",
+    title: toward,
+    valueLabel: pp.want === "any" ? "seam movement at the plate, inches" : `seam movement ${pp.want === "arm" ? "toward the arm side" : pp.want === "glove" ? "toward the glove side" : `${pp.want}ward`}, inches at the plate (negative: the other way)`,
     seamShape: input.seamShape,
-    candidates: r.candidates.map((c) => ({ direction: c.axis, label: String(c.rank) })),
+    candidates: r.reach.outOfReach ? [] : r.candidates.map((c) => ({ direction: c.axis, label: String(c.rank) })),
     referenceHolds: r.references.map((c) => ({ direction: c.axis, label: c.reference === "four-seam" ? "4S" : "2S" })),
     valueDigits: 1,
     idPrefix: `map${index}`,
   });
-  drawSvg(doc, svg, L.blocks.map);
-  const lines = [
-    `The strongest seam movement anywhere on the ball is ${fixed(r.reach.strongestIn, 1)} in.` +
-      (pp.want === "any" ? "" : r.reach.outOfReach ? ` The seams cannot push ${WANT[pp.want]} for this spin (${fixed(r.reach.wantPct, 0)} % of that at best).` : ` Toward ${WANT[pp.want]} the best is ${fixed(r.reach.bestTowardIn, 1)} in (${fixed(r.reach.wantPct, 0)} %).`),
-    `${r.grid.count.toLocaleString("en-US")} positions at ${r.input.settings.gridSpacingDeg} deg; ${r.maximaFound} distinct maxima; ranked by ${r.input.settings.rank}.`,
-    "",
-    ...[...r.candidates, ...r.references].map((o, k) => {
-      const label = o.reference ? `${o.reference} hold` : `#${o.rank}`;
-      const mv = o.seamMovement;
-      return `${label}: axis ${o.latLon.text} (${o.landmark.name}), seam movement ${formatMovementIn(mv.armSideIn)} in arm side / ${formatMovementIn(mv.verticalIn)} in up toward ${mv.clock ?? "-"}, score ${formatMovementIn(o.score)} in, robustness ${formatMovementIn(o.robustness.meanIn)} / ${formatMovementIn(o.robustness.p10In)} in, ${o.crossingsPerRevolution} passes per turn`;
-    }),
-  ];
-  textInBox(doc, lines.join("\n"), L.blocks.mapNotes, { font: f.body, sizePt: f.sizePt - 1.5, lineGap: 1.5 });
+  const b = L.blocks.map;
+  nestScene(s, map, b.xIn * PT_PER_IN, b.yIn * PT_PER_IN, b.wIn * PT_PER_IN, b.hIn * PT_PER_IN);
+  const notes = L.blocks.mapNotes;
+  const nb = pt(notes.xIn, notes.yIn, notes.wIn, notes.hIn);
+  const reach = setText(s, reachWords(r), { ...nb, h: nb.h / 3 }, { sizePt: f.sizePt - 0.5, weight: r.reach.outOfReach ? "bold" : "normal", fill: r.reach.outOfReach ? "#7a2f1d" : "#1b1b1b" });
+  let y = nb.y + reach.heightPt + f.sizePt * 0.6;
+  const rows = [...(r.reach.outOfReach ? [] : r.candidates.map((o) => compareRow(`grip ${o.rank}`, o))), ...r.references.map((o) => compareRow(`${o.reference} hold`, o))];
+  y += setText(s, COMPARE_CAPTION, { ...nb, y, h: f.sizePt * 3 }, { sizePt: f.sizePt - 1.5, fill: "#444444" }).heightPt + f.sizePt * 0.3;
+  y += setTable(s, COMPARE_COLUMNS(pp.want), rows, { ...nb, y, h: nb.y + nb.h - y }, f.sizePt - 1) + f.sizePt * 0.4;
+  setText(s, `${r.grid.count.toLocaleString("en-US")} spin-axis positions ${r.input.settings.gridSpacingDeg}\u00b0 apart; ${r.maximaFound} distinct best grips found; ranked by ${r.input.settings.rank}.`, { ...nb, y, h: nb.y + nb.h - y }, { sizePt: f.sizePt - 1.5, fill: "#555555" });
+  return page;
 }
 
-export async function renderAtlasPdf(input: AtlasInput): Promise<{ bytes: Buffer; pages: number }> {
+/** One pitch's pages: its map page, then its cards (the grips, or the out-of-reach card, then the classic holds). */
+export function pitchPages(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, i: number): Page[] {
   const L = input.layout;
   const perPage = L.grid!.columns * L.grid!.rows;
-  const total = 3 + input.pitches.reduce((s, p) => s + 1 + Math.ceil((p.report.candidates.length + p.report.references.length) / perPage), 0);
-  let pages = 1;
-  const tick = () => input.onPage?.(pages, total);
-  const doc = newDocument(L, `Grip atlas${input.team ? ` - ${input.team}` : ""}`);
-  coverPage(doc, input);
-  tick();
-  addPage(doc, L);
-  pages++;
-  textPage(doc, L, "How to read this atlas", HOW_TO_READ);
-  tick();
-  input.pitches.forEach((p, i) => {
-    addPage(doc, L);
-    pages++;
-    mapPage(doc, input, p, i);
-    tick();
-    const all = [
-      ...p.report.candidates.map((rep, k) => ({ rep, screened: p.result.candidates[k] })),
-      ...p.report.references.map((rep, k) => ({ rep, screened: p.result.references[k] })),
-    ];
-    const origins = cardOrigins(L);
-    all.forEach((o, k) => {
-      if (k % perPage === 0) {
-        addPage(doc, L);
-        pages++;
-        tick();
-      }
-      const content = cardContent(p.report, o.rep, o.screened, input.band, input.seamShape, `p${i}c${k}`);
-      drawCard(doc, L.card!, content, origins[k % perPage]);
-    });
-  });
-  addPage(doc, L);
-  pages++;
-  textPage(doc, L, "Cautions", CAUTION_LONG);
-  tick();
-  return { bytes: await finish(doc), pages };
+  const pages = [mapPage(input, p, i)];
+  const r = p.report;
+  const contents: CardContent[] = [
+    ...(r.reach.outOfReach ? [outOfReachContent(r)] : r.candidates.map((o, k) => cardContent(r, o, input.seamShape, `p${i}c${k}`))),
+    ...r.references.map((o, k) => cardContent(r, o, input.seamShape, `p${i}h${k}`)),
+  ];
+  for (let k = 0; k < contents.length; k += perPage) {
+    const page = newPage(L);
+    placeCards(page.scene, L, contents.slice(k, k + perPage).map((c) => cardScene(L.card!, c)));
+    pages.push(page);
+  }
+  return pages;
+}
+
+/** The pages before the pitches: the cover (which lists every pitch) and how to read the atlas. */
+export function frontPages(input: AtlasInput): Page[] {
+  return [...coverPages(input), ...textPages(input.layout, "How to read this atlas", HOW_TO_READ)];
+}
+
+export function cautionPages(L: Layout): Page[] {
+  return textPages(L, "Cautions", CAUTION_LONG);
+}
+
+/** Pages of the atlas for a staff, without painting them (the job paints them into one PDF). */
+export function atlasPages(input: AtlasInput, ready?: readonly (readonly Page[])[]): Page[] {
+  return [...frontPages(input), ...input.pitches.flatMap((p, i) => ready?.[i] ?? pitchPages(input, p, i)), ...cautionPages(input.layout)];
+}
+
+/** The atlas as PDF bytes; `ready[i]`, when given, are pitch i's pages already drawn. */
+export async function renderAtlasPdf(input: AtlasInput, ready?: readonly (readonly Page[])[]): Promise<{ bytes: Buffer; pages: number }> {
+  const pages = atlasPages(input, ready);
+  const bytes = await pdfOfPages(pages, `Grip atlas${input.team ? ` - ${input.team}` : ""}`, input.onPage);
+  return { bytes, pages: pages.length };
 }

@@ -1,66 +1,107 @@
 /**
- * One grip card drawn on a page at an origin (inches): a thin cut line, the title,
- * the pitch summary, the two ball drawings, the numbers, the finger placement in
- * words and the caution line, each in the block its card layout names.
+ * One grip card as a drawing (render/scene.ts) in points, from its card layout: a
+ * dashed cut line, the title, the pitch, the ball in the pitcher's own view beside
+ * the catcher's view, "how to hold it" in a player's words, a table comparing the
+ * grip with the four-seam and two-seam holds (the screen's numbers), a technical
+ * line and the caution. The same drawing is painted into a PDF, written as SVG or
+ * rasterised to PNG, so the three read alike.
  */
-import type { Band } from "../../sampling/band.js";
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
-import type { ScreenedOrientation } from "../../screening/screen.js";
-import type { Layout } from "./layouts.js";
-import { drawSvg, PT_PER_IN, rowsInBox, textInBox, type Doc } from "./pdfDoc.js";
+import { createScene, nestScene, type SceneNode } from "../scene.js";
+import type { Box, Layout } from "./layouts.js";
+import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
+import { PT_PER_IN } from "./pdfScene.js";
 import { cardDrawings, type CardDrawings } from "./views.js";
-import { CAUTION_SHORT, fingerSentence, holdAdvice, numberLines, orientationTitle, pitchSummary } from "./words.js";
+import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareOwnRow, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
 
 export interface CardContent {
   readonly title: string;
   readonly summary: string;
-  readonly drawings: CardDrawings;
-  readonly numbers: readonly [string, string][];
-  readonly fingers: readonly string[];
-  readonly advice: string;
+  /** The ball drawings, or none for a card that names no grip (out of reach). */
+  readonly drawings?: CardDrawings;
+  readonly howTo: readonly string[];
+  readonly want: string;
+  readonly compare: readonly (readonly string[])[];
+  /** The comparison row that is this card's own grip or hold (emphasised), or -1. */
+  readonly ownRow: number;
+  readonly technical: string;
 }
 
-/** Everything a card prints, from the screen report (numbers) and the screened orientation (geometry). */
-export function cardContent(
-  report: ScreenReport,
-  orientation: OrientationReport,
-  screened: ScreenedOrientation,
-  band: Band,
-  seamShape: number,
-  idPrefix = "card",
-): CardContent {
+/** Everything a card prints for a grip or a classic hold, from the screen report. */
+export function cardContent(report: ScreenReport, o: OrientationReport, seamShape: number, idPrefix = "card"): CardContent {
   return {
-    title: orientationTitle(report, orientation),
+    title: orientationTitle(report, o),
     summary: pitchSummary(report),
-    drawings: cardDrawings(screened, band, seamShape, 300, idPrefix),
-    numbers: numberLines(report, orientation),
-    fingers: orientation.fingers.map(fingerSentence),
-    advice: holdAdvice(orientation),
+    drawings: cardDrawings(report, o, seamShape, 180, idPrefix),
+    howTo: holdLines(report, o),
+    want: report.input.pitch.want,
+    compare: compareRows(report, o),
+    ownRow: compareOwnRow(report, o),
+    technical: technicalLine(o),
   };
 }
 
-export function drawCard(doc: Doc, layout: Layout, c: CardContent, origin: readonly [number, number] = [0, 0]): void {
-  const b = layout.blocks;
-  const f = layout.fonts;
-  doc
-    .save()
-    .lineWidth(0.5)
-    .dash(3, { space: 3 })
-    .strokeColor("#9a9a9a")
-    .rect(origin[0] * PT_PER_IN, origin[1] * PT_PER_IN, layout.page.widthIn * PT_PER_IN, layout.page.heightIn * PT_PER_IN)
-    .stroke()
-    .undash()
-    .restore();
-  textInBox(doc, c.title, b.title, { font: f.bold, sizePt: f.titleSizePt }, origin);
-  textInBox(doc, c.summary, b.summary, { font: f.body, sizePt: f.sizePt, color: "#333333" }, origin);
-  drawSvg(doc, c.drawings.held, b.viewHeld, origin);
-  drawSvg(doc, c.drawings.flow, b.viewFlow, origin);
-  rowsInBox(doc, c.numbers, b.numbers, layout, origin);
-  textInBox(doc, [...c.fingers, c.advice].join("\n"), b.fingers, { font: f.body, sizePt: f.sizePt, lineGap: 0.5 }, origin);
-  textInBox(doc, CAUTION_SHORT, b.caution, { font: f.body, sizePt: Math.max(5.5, f.sizePt - 1), color: "#7a2f1d" }, origin);
+/** The card of a pitch whose wanted direction the seams cannot reach: what they can do instead, and the classic holds' numbers; no grip. */
+export function outOfReachContent(report: ScreenReport): CardContent {
+  return {
+    title: `${pitchLabel(report)}: no grip for ${WANT_WORDS[report.input.pitch.want]} movement`,
+    summary: pitchSummary(report),
+    howTo: [reachWords(report), "The classic holds below show what this spin does with each."],
+    want: report.input.pitch.want,
+    compare: compareRows(report),
+    ownRow: -1,
+    technical: `Technical: reach ${report.reach.wantPct.toFixed(1)} % of the strongest seam movement (${report.reach.strongestIn.toFixed(2)} in); below 5 % a direction counts as out of reach.`,
+  };
 }
 
-/** Origins (inches) of the cards of a sheet or atlas page, row by row. */
+/** The smallest type on any printed page, points (common practice for fine print, no source). */
+export const MIN_TEXT_PT = 6;
+
+/** What the marks on the two drawings mean. */
+export const CARD_KEY = "I M R T: fingers and thumb \u00b7 dashed line: spin axis \u00b7 arrow: seam push";
+
+const pt = (b: Box): BoxPt => ({ x: b.xIn * PT_PER_IN, y: b.yIn * PT_PER_IN, w: b.wIn * PT_PER_IN, h: b.hIn * PT_PER_IN });
+
+/** The card as a drawing in points, its top-left at (0, 0). */
+export function cardScene(layout: Layout, c: CardContent): SceneNode {
+  const b = layout.blocks;
+  const f = layout.fonts;
+  const W = layout.page.widthIn * PT_PER_IN;
+  const H = layout.page.heightIn * PT_PER_IN;
+  // the smallest text on a card: 6 pt, dark enough to read in print (tests/cli/legibility.test.ts)
+  const small = Math.max(MIN_TEXT_PT, f.sizePt - 1);
+  const card = createScene(W, H).attr({ "font-family": "Noto Sans, sans-serif" });
+  card.rect().attr({ x: 0.25, y: 0.25, width: W - 0.5, height: H - 0.5, fill: "#ffffff", stroke: "#9a9a9a", "stroke-width": 0.5, "stroke-dasharray": "3 3", class: "sa-cut" });
+  setText(card, c.title, pt(b.title), { sizePt: f.titleSizePt, weight: "bold", leading: 1.15 });
+  setText(card, c.summary, pt(b.summary), { sizePt: f.sizePt - 0.5, fill: "#333333", leading: 1.2 });
+  if (c.drawings) {
+    const p = pt(b.viewPitcher), q = pt(b.viewCatcher);
+    const keyH = f.sizePt * 1.3;
+    nestScene(card, c.drawings.pitcher, p.x, p.y, p.w, p.h - keyH);
+    nestScene(card, c.drawings.catcher, q.x, q.y, q.w, q.h - keyH);
+    setText(card, CARD_KEY, { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: small, fill: "#333333" });
+    // whole sentences only: on a small card the last ones (where the axis goes, then the thumb) give way
+    const style = { sizePt: f.sizePt, leading: 1.2, paragraphGap: 0.25 };
+    const box = pt(b.howTo);
+    let lines = [...c.howTo];
+    while (lines.length > 2 && textHeight(lines.join("\n"), box.w, style) > box.h) lines = lines.slice(0, -1);
+    setText(card, lines.join("\n"), box, style);
+  } else {
+    // no grip to show: the words take the drawings' place
+    const p = pt(b.viewPitcher), h = pt(b.howTo);
+    const x0 = Math.min(p.x, h.x), x1 = Math.max(p.x + p.w, h.x + h.w);
+    setText(card, c.howTo.join("\n"), { x: x0, y: p.y, w: x1 - x0, h: Math.max(p.h, h.h) }, { sizePt: f.sizePt + 1, leading: 1.25, paragraphGap: 0.4 });
+  }
+  const cmp = pt(b.compare);
+  const cap = small;
+  const capH = setText(card, COMPARE_CAPTION, { ...cmp, h: cap * 2.6 }, { sizePt: cap, fill: "#333333", leading: 1.15 }).heightPt;
+  setTable(card, COMPARE_COLUMNS(c.want), c.compare, { ...cmp, y: cmp.y + capH + cap * 0.2, h: cmp.h - capH - cap * 0.2 }, f.sizePt, c.ownRow);
+  setText(card, c.technical, pt(b.technical), { sizePt: small, fill: "#333333", leading: 1.15 });
+  setText(card, CAUTION_SHORT, pt(b.caution), { sizePt: small, fill: "#7a2f1d", leading: 1.2 });
+  return card;
+}
+
+/** Origins (inches) of the cards of a sheet or atlas page, row by row, the grid centred across the page. */
 export function cardOrigins(page: Layout): [number, number][] {
   const card = page.card!;
   const g = page.grid!;
@@ -71,4 +112,14 @@ export function cardOrigins(page: Layout): [number, number][] {
     for (let col = 0; col < g.columns; col++) out.push([left + col * (card.page.widthIn + g.gapIn), page.marginIn + r * (card.page.heightIn + g.gapIn)]);
   }
   return out;
+}
+
+/** Places card drawings on a page drawing at the sheet's grid origins. */
+export function placeCards(page: SceneNode, layout: Layout, cards: readonly SceneNode[]): void {
+  const origins = cardOrigins(layout);
+  const card = layout.card!;
+  cards.forEach((c, k) => {
+    const [x, y] = origins[k];
+    nestScene(page, c, x * PT_PER_IN, y * PT_PER_IN, card.page.widthIn * PT_PER_IN, card.page.heightIn * PT_PER_IN);
+  });
 }

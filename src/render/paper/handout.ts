@@ -1,77 +1,187 @@
 /**
  * The clinic handout for players: two pages of plain words (ours) on what spin and
- * seams do, with two figures the tool draws from the real model: the in-band seam
- * share on each side of the spin axis through one turn, for the symmetric four-seam
- * hold and for an asymmetric orientation.
+ * seams do, in the same words as the cards (story.ts, words.ts), with two figures
+ * the seam-force model computes: the instantaneous seam push through one turn
+ * (forceTimeline) for the four-seam hold and the two-seam hold, as a share of the
+ * ball's weight at the handout's example speed. The sentences about the figures are
+ * built from the same numbers. A header carries the clinic's name, date and contact.
  */
-import { findLandmarks } from "../../../geometry/landmarks.js";
-import { latLonToVector } from "../../../geometry/ballCoords.js";
-import { DEG } from "../../../geometry/units.js";
-import type { Band } from "../../sampling/band.js";
-import { measureOrientation } from "../../sampling/measure.js";
+import { BALL_MASS_KG, BALL_RADIUS_M } from "../../../geometry/ball.js";
+import type { SeamSamples } from "../../../geometry/seamSamples.js";
+import { DEG, M_PER_S_PER_MPH } from "../../../geometry/units.js";
+import type { SeamModel } from "../../physics/seamModel/model.js";
+import { seamForceNewtons } from "../../physics/seamModel/newtons.js";
+import type { SeamModelValues } from "../../physics/seamModel/parameters.js";
+import { forceTimeline } from "../../physics/seamModel/turn.js";
+import { findReferenceAxes } from "../../screening/references.js";
 import { fixed } from "../numbers.js";
+import { createScene, nestScene, type SceneNode } from "../scene.js";
+import { pdfOfPages, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
-import { addPage, drawSvg, finish, newDocument, PT_PER_IN, textInBox } from "./pdfDoc.js";
-import { renderTimelineSvg } from "./timelineChart.js";
-import { CAUTION_LONG } from "./words.js";
+import { PT_PER_IN } from "./pdfScene.js";
+import { modelStory } from "./story.js";
+import { setText, textHeight, type BoxPt } from "./textLayout.js";
+import { timelineScene } from "./timelineChart.js";
+import { CAUTION_LONG, HOLD_WORDS, SEAM_PICTURE } from "./words.js";
+
+/** The clinic's own lines for the header (any may be left out). */
+export interface Clinic {
+  readonly name?: string;
+  readonly date?: string;
+  readonly contact?: string;
+}
 
 export interface HandoutInput {
   readonly layout: Layout;
-  readonly band: Band;
-  readonly bandCenterDeg: number;
-  readonly bandWidthDeg: number;
-  readonly seamShape: number;
-  readonly seamPoints: number;
+  readonly model: SeamModel;
+  readonly values: SeamModelValues;
+  readonly seam: SeamSamples;
+  readonly clinic?: Clinic;
 }
 
-/** The asymmetric example: an axis 30 deg off the curve's equator, with 10 deg of gyro (a screened sinker's neighbourhood). */
-export const HANDOUT_ASYMMETRIC_AXIS = latLonToVector(30, 100);
-export const HANDOUT_ASYMMETRIC_GYRO_DEG = 10;
+/** The figures' example pitch: a 92 mph fastball with backspin and 10 deg of gyro, in standard sea-level air (common practice for a fastball, no source). */
+export const HANDOUT_SPEED_MPH = 92;
+export const HANDOUT_GYRO_DEG = 10;
+export const HANDOUT_AIR_DENSITY_KG_M3 = 1.225;
+const G_M_PER_S2 = 9.80665;
+const PHASES = 360;
 
-export async function renderHandoutPdf(input: HandoutInput): Promise<{ bytes: Buffer; pages: number }> {
+export interface HandoutFigure {
+  readonly hold: "four-seam" | "two-seam";
+  /** Push across the spin axis and along the Magnus direction through a turn, % of the ball's weight. */
+  readonly acrossPct: Float64Array;
+  readonly magnusPct: Float64Array;
+  readonly meanAcrossPct: number;
+  readonly meanMagnusPct: number;
+  /** Largest size of the push at any instant, %. */
+  readonly peakPct: number;
+}
+
+/** The two figures' numbers, from the model. */
+export function handoutFigures(model: SeamModel, seam: SeamSamples): HandoutFigure[] {
+  const weightN = BALL_MASS_KG * G_M_PER_S2;
+  const toPct = (c: number) => (100 * seamForceNewtons(c, HANDOUT_AIR_DENSITY_KG_M3, BALL_RADIUS_M, HANDOUT_SPEED_MPH * M_PER_S_PER_MPH)) / weightN;
+  return findReferenceAxes(seam).map((ref) => {
+    const t = forceTimeline(model, ref.axis, HANDOUT_GYRO_DEG * DEG, PHASES);
+    const acrossPct = t.across.map(toPct);
+    const magnusPct = t.alongMagnus.map(toPct);
+    let sa = 0, sm = 0, peak = 0;
+    for (let i = 0; i < PHASES; i++) {
+      sa += acrossPct[i];
+      sm += magnusPct[i];
+      peak = Math.max(peak, Math.hypot(acrossPct[i], magnusPct[i]));
+    }
+    return { hold: ref.name, acrossPct, magnusPct, meanAcrossPct: sa / PHASES, meanMagnusPct: sm / PHASES, peakPct: peak };
+  });
+}
+
+const pt = (xIn: number, yIn: number, wIn: number, hIn: number): BoxPt => ({ x: xIn * PT_PER_IN, y: yIn * PT_PER_IN, w: wIn * PT_PER_IN, h: hIn * PT_PER_IN });
+
+/** What the figures show, in words built from their numbers. */
+export function figureWords(figs: readonly HandoutFigure[]): string {
+  const d = (f: HandoutFigure) => `${fixed(Math.hypot(f.meanAcrossPct, f.meanMagnusPct), 0)} %`;
+  const [four, two] = [figs.find((f) => f.hold === "four-seam")!, figs.find((f) => f.hold === "two-seam")!];
+  const mean = (f: HandoutFigure) => Math.hypot(f.meanAcrossPct, f.meanMagnusPct);
+  const steadier = mean(two) > mean(four) ? two : four;
+  const other = steadier === two ? four : two;
+  return (
+    `The two figures come from the model itself, for a ${HANDOUT_SPEED_MPH} mph fastball with backspin (and ${HANDOUT_GYRO_DEG}\u00b0 of gyro, as most have). Each line is the seam's push at one moment of a turn, as a share of the ball's weight: across the spin axis (for backspin, sideways) and along the spin's own lift (up or down). ` +
+    `With the ${other.hold} hold the push swings back and forth through every turn (at its largest ${fixed(other.peakPct, 0)} % of the ball's weight) and averages only ${d(other)}: the pushes nearly cancel. ` +
+    `With the ${steadier.hold} hold the push stays on one side for most of the turn and averages ${d(steadier)} (at its largest ${fixed(steadier.peakPct, 0)} %): that steady push is what moves the pitch at the plate.`
+  );
+}
+
+/** One figure as a drawing: the push through a turn for a classic hold. */
+export function figureScene(h: HandoutFigure): SceneNode {
+  return timelineScene(
+    [
+      { label: "across the spin axis", values: h.acrossPct, color: "#1f4f5a" },
+      { label: "along the lift", values: h.magnusPct, color: "#9a3c18" },
+    ],
+    { title: `${h.hold} hold: the push through one turn`, valueLabel: "% of the ball's weight", tick: (v) => `${fixed(v, 0)} %`, idPrefix: h.hold === "four-seam" ? "fs" : "ts" },
+  );
+}
+
+function page(L: Layout): Page {
+  const scene = createScene(L.page.widthIn * PT_PER_IN, L.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
+  scene.rect().attr({ x: 0, y: 0, width: L.page.widthIn * PT_PER_IN, height: L.page.heightIn * PT_PER_IN, fill: "#ffffff", stroke: "none" });
+  return { widthIn: L.page.widthIn, heightIn: L.page.heightIn, scene };
+}
+
+/** The header band: the clinic's name, date and contact; returns its height, inches. */
+function header(p: Page, L: Layout, clinic: Clinic | undefined, pageNo: number): number {
+  const m = L.marginIn;
+  const w = L.page.widthIn - 2 * m;
+  const f = L.fonts;
+  const top = Math.max(0.3, m - 0.35);
+  const left = [clinic?.name, clinic?.date].filter((x): x is string => !!x).join(" \u00b7 ") || "Pitching clinic";
+  setText(p.scene, left, pt(m, top, w * 0.7, 0.25), { sizePt: f.sizePt, weight: "bold", fill: "#333333" });
+  setText(p.scene, `page ${pageNo} of 2`, pt(m + w * 0.7, top, w * 0.3, 0.25), { sizePt: f.sizePt - 1.5, fill: "#555555", align: "end" });
+  if (clinic?.contact) setText(p.scene, clinic.contact, pt(m, top + 0.2, w, 0.22), { sizePt: f.sizePt - 1.5, fill: "#555555" });
+  const y = top + (clinic?.contact ? 0.42 : 0.26);
+  p.scene.path(`M${m * PT_PER_IN} ${y * PT_PER_IN}L${(m + w) * PT_PER_IN} ${y * PT_PER_IN}`).attr({ stroke: "#b9b2a5", "stroke-width": 0.75, fill: "none" });
+  return y + 0.1;
+}
+
+/** Paragraphs from `yIn` down; returns where they end, inches. */
+function paragraphs(p: Page, L: Layout, yIn: number, paras: readonly string[], sizePt = L.fonts.sizePt): number {
+  const m = L.marginIn;
+  const w = (L.page.widthIn - 2 * m) * PT_PER_IN;
+  let y = yIn * PT_PER_IN;
+  const style = { sizePt, leading: 1.3 };
+  for (const para of paras) {
+    const h = textHeight(para, w, style);
+    setText(p.scene, para, { x: m * PT_PER_IN, y, w, h: h + sizePt }, style);
+    y += h + sizePt * 0.6;
+  }
+  return y / PT_PER_IN;
+}
+
+export function handoutPages(input: HandoutInput): Page[] {
   const L = input.layout;
   const f = L.fonts;
   const m = L.marginIn;
   const w = L.page.widthIn - 2 * m;
-  const opts = { band: input.band, seamShape: input.seamShape, seamPoints: input.seamPoints };
-  const four = measureOrientation({ axis: findLandmarks(input.seamShape).find((l) => l.name === "waist-A")!.direction, gyroRad: 0 }, opts);
-  const odd = measureOrientation({ axis: HANDOUT_ASYMMETRIC_AXIS, gyroRad: HANDOUT_ASYMMETRIC_GYRO_DEG * DEG }, opts);
-  const lo = input.bandCenterDeg - input.bandWidthDeg / 2;
-  const hi = input.bandCenterDeg + input.bandWidthDeg / 2;
-  const doc = newDocument(L, "Why the same spin can move differently");
-  textInBox(doc, "Why the same spin can move differently", { xIn: m, yIn: m, wIn: w, hIn: 0.5 }, { font: f.bold, sizePt: f.titleSizePt });
-  const body = [
-    "Spin bends the path (Magnus). A spinning ball drags the air around with it. Backspin makes the air leave the ball a little downward, so the ball is pushed up: a fastball seems to rise against what gravity alone would do. Sidespin pushes it sideways. Only the part of the spin that is across the flight does this; the rest (gyro spin, like a bullet's) adds no push.",
-    `Seams move the wake (the seam-shifted wake). Air flowing over the ball stays attached to its surface for a while, then breaks away at a line about ${fixed(lo, 0)} to ${fixed(hi, 0)} degrees back from the very front of the ball. A raised seam sitting near that line makes the air break away early on that side. If that happens on one side more than the other, the wake behind the ball shifts, and the ball is pushed toward the side the seam left alone.`,
-    "Why the classic holds average out. As the ball turns, its seams sweep past that break-away line. On a four-seam or two-seam hold the seam spends the same time near the line on both sides of the spin axis, so the pushes cancel over each turn. Some other orientations keep more seam near the line on one side for most of every turn: those give a steady extra push, usually across the direction that spin alone moves the ball.",
-    "The two figures below come from the tool's own model. Each line is the share of the seam sitting near the break-away line on one side of the spin axis, through one full turn. On the left (four-seam hold) the two sides match on average; on the right (an orientation tipped 30 degrees off the classic one, with a little gyro) one side keeps more seam near the line, turn after turn.",
-  ];
-  doc.font(f.body).fontSize(f.sizePt).fillColor("#1b1b1b").text(body.join("\n\n"), m * PT_PER_IN, (m + 0.65) * PT_PER_IN, { width: w * PT_PER_IN, lineGap: 2, paragraphGap: 4 });
-  const chart = (title: string, t: typeof four, id: string) =>
-    renderTimelineSvg(
-      [
-        { label: "axis side +", values: t.timeline!.axisPlus, color: "#1f4f5a" },
-        { label: "axis side -", values: t.timeline!.axisMinus, color: "#b5532b" },
-      ],
-      { title, idPrefix: id, yMax: 0.3 },
-    );
-  drawSvg(doc, chart("four-seam hold: the sides balance", four, "fs"), L.blocks.figureSymmetric);
-  drawSvg(doc, chart("tipped hold: one side keeps more seam", odd, "as"), L.blocks.figureAsymmetric);
-  const cap = `Turn averages: four-seam ${fixed(100 * four.axisPlus, 1)} % / ${fixed(100 * four.axisMinus, 1)} %; tipped hold ${fixed(100 * odd.axisPlus, 1)} % / ${fixed(100 * odd.axisMinus, 1)} % of the seam in the band on the + / - side.`;
-  textInBox(doc, cap, { xIn: m, yIn: L.blocks.figureSymmetric.yIn + L.blocks.figureSymmetric.hIn + 0.1, wIn: w, hIn: 0.4 }, { font: f.body, sizePt: f.sizePt - 1.5, color: "#333333" });
-  addPage(doc, L);
-  textInBox(doc, "Trying a new grip safely", { xIn: m, yIn: m, wIn: w, hIn: 0.5 }, { font: f.bold, sizePt: f.titleSizePt - 2 });
-  const safe = [
-    "Start easy. Learn the grip playing catch at short distance and low effort. Watch how the ball moves before you add speed.",
-    "Build up slowly. Add distance, effort and number of throws over weeks, not in one session. Keep your usual rest days.",
-    "Listen to your arm. Stop at pain, tingling, numbness or a loss of control, and tell your coach.",
-    "Get help. Work with a qualified pitching coach, and see a licensed athletic trainer, physiotherapist or physician about any arm trouble.",
-    "Play by the rules. Use a legal ball and legal grips for your league. Never scratch, cut, mark or otherwise change the ball.",
-    "Remember what the model is. These pictures show a simple model of the air around a ball, not a measurement of your ball or your arm. Your league's rules and your coaches' and medical staff's advice come first.",
-  ];
-  doc.font(f.body).fontSize(f.sizePt).fillColor("#1b1b1b").text(safe.map((s) => `-  ${s}`).join("\n\n"), m * PT_PER_IN, (m + 0.6) * PT_PER_IN, { width: w * PT_PER_IN, lineGap: 2 });
-  doc.moveDown(1.5);
-  doc.font(f.bold).fontSize(f.sizePt).fillColor("#7a2f1d").text("Cautions", { width: w * PT_PER_IN });
-  doc.font(f.body).fontSize(f.sizePt - 1).fillColor("#7a2f1d").text(CAUTION_LONG.join(" "), { width: w * PT_PER_IN, lineGap: 1.5 });
-  return { bytes: await finish(doc), pages: 2 };
+  const figs = handoutFigures(input.model, input.seam);
+  const p1 = page(L);
+  let y = header(p1, L, input.clinic, 1);
+  setText(p1.scene, "Why the same spin can move differently", pt(m, y, w, 0.45), { sizePt: f.titleSizePt, weight: "bold" });
+  y += 0.5;
+  const fig = L.blocks.figureSymmetric;
+  y = paragraphs(p1, L, y, [
+    "Spin bends the path (Magnus). A spinning ball drags the air round with it. Backspin makes the air leave the ball a little downward, so the ball is pushed up: a fastball seems to rise against what gravity alone would do. Sidespin pushes it sideways. Only the part of the spin across the flight does this; the rest (gyro spin, like a bullet's) adds no lift.",
+    `${SEAM_PICTURE} The ${HOLD_WORDS["four-seam"]}. The ${HOLD_WORDS["two-seam"]}.`,
+    `Seams move the air too (the seam-shifted wake). ${modelStory(input.values)}`,
+    figureWords(figs),
+  ], f.sizePt - 0.5);
+  const figTop = Math.max(y + 0.05, fig.yIn);
+  const figH = Math.min(fig.hIn, L.page.heightIn - m - 0.35 - figTop);
+  const [four, two] = [figs.find((x) => x.hold === "four-seam")!, figs.find((x) => x.hold === "two-seam")!];
+  const a = L.blocks.figureSymmetric, b = L.blocks.figureAsymmetric;
+  nestScene(p1.scene, figureScene(four), a.xIn * PT_PER_IN, figTop * PT_PER_IN, a.wIn * PT_PER_IN, figH * PT_PER_IN);
+  nestScene(p1.scene, figureScene(two), b.xIn * PT_PER_IN, figTop * PT_PER_IN, b.wIn * PT_PER_IN, figH * PT_PER_IN);
+  setText(p1.scene, `Figures: computed by the seam-force model at ${HANDOUT_SPEED_MPH} mph in standard sea-level air, ${HANDOUT_GYRO_DEG}\u00b0 of gyro; the ball's weight is ${fixed(BALL_MASS_KG * 1000, 0)} g.`, pt(m, figTop + figH + 0.05, w, 0.3), { sizePt: f.sizePt - 2, fill: "#555555" });
+  const p2 = page(L);
+  y = header(p2, L, input.clinic, 2);
+  setText(p2.scene, "Trying a new grip safely", pt(m, y, w, 0.45), { sizePt: f.titleSizePt - 2, weight: "bold" });
+  y += 0.5;
+  y = paragraphs(p2, L, y, [
+    "-  Start easy. Learn the grip playing catch at short distance and low effort. Watch how the ball moves before you add speed.",
+    "-  Build up slowly. Add distance, effort and number of throws over weeks, not in one session. Keep your usual rest days.",
+    "-  Listen to your arm. Stop at pain, tingling, numbness or a loss of control, and tell your coach.",
+    "-  Get help. Work with a qualified pitching coach, and see a licensed athletic trainer, physiotherapist or physician about any arm trouble.",
+    "-  Play by the rules. Use a legal ball and legal grips for your league. Never scratch, cut, mark or otherwise change the ball.",
+    "-  Remember what the model is. These pictures show a simple model of the air round a ball, not a measurement of your ball or your arm. Your league's rules and your coaches' and medical staff's advice come first.",
+  ]);
+  setText(p2.scene, "Cautions", pt(m, y + 0.1, w, 0.3), { sizePt: f.sizePt, weight: "bold", fill: "#7a2f1d" });
+  const cw = w * PT_PER_IN;
+  const cy = (y + 0.4) * PT_PER_IN;
+  const text = CAUTION_LONG.join(" ");
+  setText(p2.scene, text, { x: m * PT_PER_IN, y: cy, w: cw, h: textHeight(text, cw, { sizePt: f.sizePt - 1 }) + f.sizePt }, { sizePt: f.sizePt - 1, fill: "#7a2f1d" });
+  return [p1, p2];
+}
+
+export async function renderHandoutPdf(input: HandoutInput): Promise<{ bytes: Buffer; pages: number }> {
+  const pages = handoutPages(input);
+  return { bytes: await pdfOfPages(pages, "Why the same spin can move differently"), pages: pages.length };
 }

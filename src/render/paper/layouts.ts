@@ -1,11 +1,13 @@
 /**
  * Page layouts as data (templates/layouts/*.json), checked on load.
  *
- * A layout names a page size in inches, a margin, fonts (pdfkit's standard PDF
- * fonts) and, per kind, the blocks it places (x, y from the page's top-left corner,
- * width and height, all inches):
- *   card     title, summary, viewHeld, viewFlow, numbers, fingers, caution
- *   sheet    several cards of layout `card` on one page in a `grid`
+ * A layout names a page size in inches, a margin, font sizes (the face is always
+ * the embedded Noto Sans, render/fonts.ts) and, per kind, the blocks it places (x, y
+ * from the page's top-left corner, width and height, all inches):
+ *   card     title, summary, viewPitcher, viewCatcher, howTo, compare, technical,
+ *            caution (no two may overlap)
+ *   sheet    several cards of layout `card` on one page in a `grid` that fits inside
+ *            the margins
  *   atlas    a `card` layout and `grid` for the candidate pages, plus map and mapNotes
  *   handout  figureSymmetric, figureAsymmetric
  * A staff adds a layout by dropping a file in templates/layouts/; every problem is
@@ -46,14 +48,11 @@ export class LayoutError extends Error {
   }
 }
 
-export const STANDARD_FONTS = [
-  "Helvetica", "Helvetica-Bold", "Helvetica-Oblique", "Helvetica-BoldOblique",
-  "Times-Roman", "Times-Bold", "Times-Italic", "Times-BoldItalic",
-  "Courier", "Courier-Bold", "Courier-Oblique", "Courier-BoldOblique",
-];
+/** The face names a layout may give (the embedded Unicode face, regular and bold). */
+export const LAYOUT_FONTS = { body: "NotoSans", bold: "NotoSans-Bold" } as const;
 
 const REQUIRED_BLOCKS: Record<LayoutKind, readonly string[]> = {
-  card: ["title", "summary", "viewHeld", "viewFlow", "numbers", "fingers", "caution"],
+  card: ["title", "summary", "viewPitcher", "viewCatcher", "howTo", "compare", "technical", "caution"],
   sheet: [],
   atlas: ["map", "mapNotes"],
   handout: ["figureSymmetric", "figureAsymmetric"],
@@ -87,14 +86,15 @@ export function validateLayout(raw: unknown, file: string, resolve: (name: strin
   const widthIn = num(page.widthIn, file, "page.widthIn", 1, 20, "in");
   const heightIn = num(page.heightIn, file, "page.heightIn", 1, 20, "in");
   const marginIn = num(o.marginIn, file, "marginIn", 0, Math.min(widthIn, heightIn) / 4, "in");
-  check(typeof o.fonts === "object" && o.fonts !== null, file, `"fonts" must be an object with body, bold, sizePt, titleSizePt`);
+  check(typeof o.fonts === "object" && o.fonts !== null && !Array.isArray(o.fonts), file, `"fonts" must be an object with sizePt and titleSizePt`);
   const f = o.fonts as Record<string, unknown>;
-  for (const k of ["body", "bold"]) {
-    check(STANDARD_FONTS.includes(f[k] as string), file, `"fonts.${k}" is ${JSON.stringify(f[k])}; expected one of ${STANDARD_FONTS.join(", ")}`);
+  for (const k of Object.keys(f)) check(["body", "bold", "sizePt", "titleSizePt"].includes(k), file, `unknown field "fonts.${k}"; expected body, bold, sizePt, titleSizePt`);
+  for (const k of ["body", "bold"] as const) {
+    check(f[k] === undefined || f[k] === LAYOUT_FONTS[k], file, `"fonts.${k}" is ${JSON.stringify(f[k])}; expected ${LAYOUT_FONTS[k]} (the embedded Unicode face) or nothing`);
   }
   const fonts = {
-    body: f.body as string,
-    bold: f.bold as string,
+    body: LAYOUT_FONTS.body as string,
+    bold: LAYOUT_FONTS.bold as string,
     sizePt: num(f.sizePt, file, "fonts.sizePt", 4, 40, "pt"),
     titleSizePt: num(f.titleSizePt, file, "fonts.titleSizePt", 4, 72, "pt"),
   };
@@ -113,6 +113,16 @@ export function validateLayout(raw: unknown, file: string, resolve: (name: strin
     };
     check(box.xIn + box.wIn <= widthIn + 1e-9 && box.yIn + box.hIn <= heightIn + 1e-9, file, `block "${name}" runs off the ${widthIn} x ${heightIn} in page`);
     blocks[name] = box;
+  }
+  if (kind === "card") {
+    const names = Object.keys(blocks);
+    for (let i = 0; i < names.length; i++) {
+      for (let j = i + 1; j < names.length; j++) {
+        const a = blocks[names[i]], c = blocks[names[j]];
+        const overlap = a.xIn < c.xIn + c.wIn - 1e-9 && c.xIn < a.xIn + a.wIn - 1e-9 && a.yIn < c.yIn + c.hIn - 1e-9 && c.yIn < a.yIn + a.hIn - 1e-9;
+        check(!overlap, file, `blocks "${names[i]}" and "${names[j]}" overlap; expected each block in its own place on the card`);
+      }
+    }
   }
   let card: Layout | undefined;
   let grid: Layout["grid"];
@@ -172,6 +182,25 @@ export function loadLayout(dir: string, name: string, seen: readonly string[] = 
   const layout = validateLayout(raw, basename(file), (other) => loadLayout(dir, other, [...seen, name]));
   if (layout.name !== name) throw new LayoutError(`layout ${file}: "name" is "${layout.name}" but the file is ${name}.json`);
   return layout;
+}
+
+/** Loads and checks a layout from a file path; a sheet's or atlas's card layout is named from `dir`. */
+export function loadLayoutFile(path: string, dir: string): Layout {
+  if (!existsSync(path)) throw new LayoutError(`layout file "${path}" not found; expected a layout name (${listLayouts(dir).join(", ")}) or a path to a .json layout`);
+  let bytes: Uint8Array;
+  try {
+    bytes = readFileSync(path);
+  } catch (err) {
+    throw new LayoutError(`layout ${path}: cannot read the file (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
+  }
+  let raw: unknown;
+  try {
+    raw = parseStrictJson(bytes, `layout ${path}`).value;
+  } catch (err) {
+    if (err instanceof InputError) throw new LayoutError(err.message);
+    throw err;
+  }
+  return validateLayout(raw, basename(path), (other) => loadLayout(dir, other));
 }
 
 export function listLayouts(dir: string): string[] {

@@ -1,65 +1,66 @@
 /**
- * The two ball drawings of a grip card, from a screened orientation:
- *   "as held"   seen from behind the ball at release, looking toward the plate, field
- *               up at the top: the finger pads face the viewer;
- *   "the flow"  seen from the side, across both the flight line and the push line:
- *               the separation band (a ring about the flight line) shows as a strip
- *               and the push arrow (the direction of the seam movement) lies in the page.
- * Directions go from the field frame to the ball frame through the release rotation
- * of the hand model (src/screening/hand.ts).
+ * The two ball drawings of a grip card, from a grip in the screen report
+ * (src/screening/report.ts: its axis, release rotation and finger pads):
+ *   "your view"       the pitcher's own view at release: behind the ball, looking
+ *                     toward the plate, field up at the top, so the fingertips point
+ *                     up the ball's back and the thumb is beneath; the fingers at their
+ *                     real pad sizes (src/screening/hand.ts PAD_SIZE_IN);
+ *   "catcher's view"  from the plate, looking back at the pitcher: the face of the
+ *                     ball that comes at the hitter, the fingers behind it.
+ * Both show the spin axis, the seam push at the plate (its direction) and which side
+ * is the arm side. Directions go from the field frame to the ball frame through the
+ * release rotation of the hand model.
  */
-import { cross3 as cross, dot3 as dot, type Vec3 } from "../../../geometry/vec.js";
-import type { Band } from "../../sampling/band.js";
-import { applyRotation, transposeRotation } from "../../screening/hand.js";
-import type { ScreenedOrientation } from "../../screening/screen.js";
-import { renderBallSvg } from "../ballDrawing.js";
+import type { Vec3 } from "../../../geometry/vec.js";
+import { applyRotation, PAD_SIZE_IN, transposeRotation, type Finger } from "../../screening/hand.js";
+import type { OrientationReport, ScreenReport } from "../../screening/report.js";
+import { ballScene } from "../ballDrawing.js";
+import type { FingerMark } from "../ballOverlays.js";
 import { viewFromDirections } from "../projection.js";
+import type { SceneNode } from "../scene.js";
 
-const PAD_RADIUS_IN = 0.3;
-const PAD_LABELS: Record<string, string> = { index: "I", middle: "M", thumb: "T" };
+const LABELS: Record<string, string> = { index: "I", middle: "M", ring: "R", thumb: "T" };
+/** Seam samples for a card's drawings: about 0.035 in apart on the ball, below a printed dot at a card's 1.5 in ball. */
+const CARD_SEAM_POINTS = 256;
 
 export interface CardDrawings {
-  readonly held: string;
-  readonly flow: string;
+  readonly pitcher: SceneNode;
+  readonly catcher: SceneNode;
 }
 
-export function cardDrawings(o: ScreenedOrientation, band: Band, seamShape: number, sizePx = 300, idPrefix = "card"): CardDrawings {
-  const toBall = transposeRotation(o.grip.ballToField);
+export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: number, sizePx = 300, idPrefix = "card"): CardDrawings {
+  const toBall = transposeRotation(o.release.ballToField);
   const b = (v: Vec3) => applyRotation(toBall, v);
   const up = b([0, 0, 1]);
-  const pads = o.grip.pads.map((p) => ({ direction: p.direction, label: PAD_LABELS[p.finger] ?? p.finger, radiusIn: PAD_RADIUS_IN }));
-  // the push: the direction of the seam movement at the plate (plate plane: x toward the catcher's right, z up)
-  const push: Vec3 = [o.seamMovement.horizontalM, 0, o.seamMovement.verticalM];
-  const pushBall = b(push);
-  const hasPush = Math.hypot(...push) > 1e-9;
-  const held = renderBallSvg(
+  const fingers: FingerMark[] = o.fingers.map((f) => {
+    const size = PAD_SIZE_IN[f.finger as Finger] ?? PAD_SIZE_IN.index;
+    return { direction: f.direction, pointing: f.pointing, widthIn: size.widthIn, lengthIn: size.lengthIn, label: LABELS[f.finger] ?? f.finger, working: f.working };
+  });
+  // the seam movement at the plate (plate plane: x toward the catcher's right, z up)
+  const push: Vec3 = [o.seamMovement.horizontalIn, 0, o.seamMovement.verticalIn];
+  const hasPush = Math.hypot(...push) > 0.05;
+  const pushOverlay = (label?: string) => (hasPush ? { push: { direction: b(push), frame: "ball" as const, ...(label ? { label } : {}) } } : {});
+  // the arm side is field -x for a right-hander; the pitcher's right is -x, the catcher's right +x
+  const armOnPitchersRight = r.input.pitch.hand === "right";
+  const pitcher = ballScene(
     {
       seamShape,
       view: viewFromDirections(b([0, 1, 0]), up),
-      overlays: { spinAxis: o.axis, fingerPads: pads, ...(hasPush ? { push: { direction: pushBall, frame: "ball" as const, label: "push" } } : {}) },
-      caption: "as held: from behind, at release",
+      overlays: { spinAxis: o.axis, fingers, ...pushOverlay("push") },
+      caption: "your view (fingertips up)",
+      sides: armOnPitchersRight ? { left: "glove side", right: "arm side" } : { left: "arm side", right: "glove side" },
     },
-    { sizePx, seamPoints: 512, legend: false, idPrefix: `${idPrefix}-h` },
+    { sizePx, seamPoints: CARD_SEAM_POINTS, legend: false, idPrefix: `${idPrefix}-p` },
   );
-  // the flow view looks across both the flight line and the push line, so the band (a
-  // ring about the flight line) shows as a strip and the push arrow lies in the page
-  const v: Vec3 = [0, -1, 0];
-  const a = push;
-  let side = cross(v, Math.hypot(...a) > 1e-12 ? a : [0, 0, 1]);
-  if (Math.hypot(...side) < 1e-9) side = [1, 0, 0];
-  if (side[2] < 0 || (side[2] === 0 && side[0] < 0)) side = [-side[0], -side[1], -side[2]];
-  const sideUp: Vec3 = Math.abs(side[2]) > 0.9 ? [0, 1, 0] : [0, 0, 1];
-  const flowView = viewFromDirections(b(side), b(sideUp));
-  const flightInView = [dot(flowView.right, b(v)), dot(flowView.up, b(v))];
-  const heading = Math.abs(flightInView[0]) >= Math.abs(flightInView[1]) ? (flightInView[0] > 0 ? "right" : "left") : flightInView[1] > 0 ? "top" : "bottom";
-  const flow = renderBallSvg(
+  const catcher = ballScene(
     {
       seamShape,
-      view: flowView,
-      overlays: { spinAxis: o.axis, flowBand: { flowDirection: b([0, -1, 0]), band }, ...(hasPush ? { push: { direction: pushBall, frame: "ball" as const, label: "push" } } : {}) },
-      caption: `the flow: flight toward the ${heading}`,
+      view: viewFromDirections(b([0, -1, 0]), up),
+      overlays: { spinAxis: o.axis, fingers, ...pushOverlay() },
+      caption: "the catcher's view",
+      sides: armOnPitchersRight ? { left: "arm side", right: "glove side" } : { left: "glove side", right: "arm side" },
     },
-    { sizePx, seamPoints: 512, legend: false, idPrefix: `${idPrefix}-f` },
+    { sizePx, seamPoints: CARD_SEAM_POINTS, legend: false, idPrefix: `${idPrefix}-c` },
   );
-  return { held, flow };
+  return { pitcher, catcher };
 }
