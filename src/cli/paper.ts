@@ -3,7 +3,6 @@ import { join } from "node:path";
 import type { Argv } from "yargs";
 import type { InputRef, OutputFormat } from "../io/outputPlan.js";
 import type { Layout } from "../render/paper/layouts.js";
-import { projectRoot } from "../version.js";
 import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
 import { planRun, print, progress, writeOutput, type PlannedOutput, type WantedOutput } from "./output.js";
 import { InputError } from "../io/errors.js";
@@ -19,7 +18,7 @@ async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback
   const { layoutPath } = await import("../jobs/paper.js");
   const given = typeof argv.layout === "string" ? argv.layout : layout.name;
   const inputs: InputRef[] = [...inputFiles(argv), { option: "--layout", path: given.endsWith(".json") ? layoutPath(given) : layoutPath(layout.name) }];
-  const planned = planRun([{ option: "--out", path: argv.out ?? join(projectRoot(), "out", fallback), format }, ...(more ?? [])], inputs);
+  const planned = planRun([{ option: "--out", path: argv.out ?? join("out", fallback), format }, ...(more ?? [])], inputs);
   return more === undefined ? planned[0]! : { main: planned[0]!, more: planned.slice(1) };
 }
 
@@ -76,7 +75,7 @@ export function registerPaper(y: Argv): Argv {
         const out = await planPaper(argv, job.layout, "atlas.pdf", "pdf");
         const made = await runAtlas(job, progress());
         writeOutput(out, made.bytes);
-        wrote(out, ` (${made.pages} pages, ${made.pitches} pitch(es))`);
+        wrote(out, ` (${made.pages} pages, ${made.pitches === 1 ? "1 pitch" : `${made.pitches} pitches`})`);
       },
     )
     .command(
