@@ -181,7 +181,7 @@ async function main(): Promise<void> {
   for (let i = 0; i < rows; i++) {
     const g = (-20 + (65 * ((i * 0.618034) % 1))) * DEG;
     const e = explainer.explain({ pitch: { ...sinker, gyroRad: g }, observedArmSideM: 0.42, observedUpM: 0.3 });
-    sink += e.residualArmSideM;
+    sink += e.residual.armSideM;
   }
   const explainRowsPerSecond = rows / ((performance.now() - t1) / 1000);
   // the demo staff's atlas, as `seam-atlas atlas --demo` makes it (default settings, top 4)

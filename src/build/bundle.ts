@@ -3,7 +3,8 @@
  * or run in a browser.
  *
  * 1. The command line (src/cli/main.ts) into out/build/cli/: one ES module plus a
- *    chunk per command family, so `--help` reads one small file and each command
+ *    chunk per command family, and explain's worker thread (src/jobs/explainWorker.ts,
+ *    out/build/cli/explainWorker.js, sharing the chunks), so `--help` reads one small file and each command
  *    loads only its own stack. Packages whose code reads files next to itself at run
  *    time (pdfkit's fonts, svgdom's), the browser-only three.js and the worker-pool
  *    package stay outside the bundle and load from node_modules when a command needs them.
@@ -34,7 +35,11 @@ async function bundleCli(root: string): Promise<void> {
   const outdir = join(root, "out", "build", "cli");
   rmSync(outdir, { recursive: true, force: true });
   await esbuild.build({
-    entryPoints: [join(root, "src", "cli", "main.ts")],
+    // the command line, and the worker thread explain's batch runs (its own entry: a worker loads a file)
+    entryPoints: [
+      { in: join(root, "src", "cli", "main.ts"), out: "main" },
+      { in: join(root, "src", "jobs", "explainWorker.ts"), out: "explainWorker" },
+    ],
     absWorkingDir: root,
     bundle: true,
     splitting: true,
