@@ -35,8 +35,8 @@ import { turnAverage } from "./seamModel/turn.js";
 export const REFINE_THROWS = 400;
 /** Compass search: first step (grid spacings), smallest step (rad), most evaluations. */
 const REFINE_FIRST_STEP = 0.5;
-const REFINE_MIN_STEP_RAD = 0.05 * DEG;
-const REFINE_MAX_EVALUATIONS = 80;
+const REFINE_MIN_STEP_RAD = 0.1 * DEG;
+const REFINE_MAX_EVALUATIONS = 40;
 const PROPER_ROTATIONS = SEAM_SYMMETRIES.filter((g) => g.proper);
 
 /** The running numbers of one pitch type. */

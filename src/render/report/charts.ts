@@ -72,16 +72,17 @@ function tickStep(span: number, target: number): number {
 
 /** A range covering the values and [lo, hi], widened to whole steps. */
 function niceRange(values: number[], lo: number, hi: number, step: number): [number, number] {
-  const min = Math.min(lo, ...values);
-  const max = Math.max(hi, ...values);
+  // a mark on the frame's edge is half hidden: keep a fifth of a step clear
+  const min = Math.min(lo, ...values) - step / 5;
+  const max = Math.max(hi, ...values) + step / 5;
   return [Math.floor(min / step) * step, Math.ceil(max / step) * step];
 }
 
-function legend(draw: Container, pitcher: ReportPitcher, top: number, extra: { label: string; draw: (g: Container, x: number, y: number) => void }[]): void {
+function legend(draw: Container, pitcher: ReportPitcher, top: number, extra: { label: string; swatchPx?: number; draw: (g: Container, x: number, y: number) => void }[]): void {
   const g = draw.group().attr({ class: "sa-legend" });
   let x = PLOT.left;
   let y = top;
-  const items = [
+  const items: { label: string; swatchPx?: number; draw: (g: Container, x: number, y: number) => void }[] = [
     ...pitcher.types.map((t, i) => ({
       label: `${t.pitch} (${t.rows})`,
       draw: (c: Container, cx: number, cy: number) => {
@@ -92,13 +93,14 @@ function legend(draw: Container, pitcher: ReportPitcher, top: number, extra: { l
     ...extra,
   ];
   for (const item of items) {
-    const w = 22 + 7.2 * item.label.length;
+    const sw = item.swatchPx ?? 17;
+    const w = sw + 5 + 7.2 * item.label.length;
     if (x + w > WIDTH - 10 && x > PLOT.left) {
       x = PLOT.left;
       y += 20;
     }
     item.draw(g, x, y - 4);
-    addText(g, x + 17, y, item.label, { sizePx: 12.5, fill: INK });
+    addText(g, x + sw, y, item.label, { sizePx: 12.5, fill: INK });
     x += w + 10;
   }
 }
@@ -163,6 +165,7 @@ export function movementChartSvg(pitcher: ReportPitcher, opts: { basis: "trade" 
   legend(draw, pitcher, PLOT.top + f.ph + 62, [
     {
       label: "spin predicts (open) -> observed (filled)",
+      swatchPx: 26,
       draw: (c, x, y) => {
         mark(c, "circle", x + 2, y, 3.4, { fill: "#ffffff", stroke: INK, "stroke-width": 1.2 });
         c.line(x + 6, y, x + 13, y).attr({ stroke: INK, "stroke-width": 1 });
@@ -190,7 +193,9 @@ export function directionChartSvg(pitcher: ReportPitcher, opts: { gapFlagMinutes
   const values = pts.flatMap((p) => [p.x, p.y]);
   const lo = values.length ? Math.min(...values) : 0;
   const hi = values.length ? Math.max(...values) : 720;
-  const step = tickStep(Math.max(60, hi - lo), 6);
+  // clock ticks on whole quarter hours, half hours or hours
+  const span = Math.max(60, hi - lo);
+  const step = [15, 30, 60, 90, 120, 180].find((s) => span / s <= 7) ?? 180;
   const r: [number, number] = [Math.floor((lo - step / 2) / step) * step, Math.ceil((hi + step / 2) / step) * step];
   const label = (v: number) => formatClock(((v % 720) + 720) % 720);
   const f = frame(draw, r, r, step, step, label, label);

@@ -105,16 +105,16 @@ function ballSvg(axis: Vec3, seamShape: number, idPrefix: string): string {
 
 function tablePages(doc: Doc, r: ReportModel, p: ReportPitcher, idBase: string): void {
   const perPage = Math.floor((PAGE.h - 2 * M - 1.45) / TABLE_ROW_IN);
-  const cols = { type: M, rows: M + 1.75, residual: M + 2.45, balls: M + 4.6 };
-  const ballW = 2.0;
+  const cols = { type: M, rows: M + 1.6, residual: M + 2.2, balls: M + 4.3 };
+  const ballW = 1.9;
   for (let start = 0; start < p.types.length; start += perPage) {
     newPage(doc);
     heading(doc, `${p.name}: seam orientations per pitch type${start > 0 ? " (continued)" : ""}`, `one orientation fitted to all throws of each pitch type; ${basisWords(r)}`);
     let y = M + 0.75;
     const head = (s: string, x: number, w: number) => text(doc, s, x, y, w, { size: 9.5, bold: true, color: MUTED });
-    head("pitch type", cols.type, 1.7);
-    head("throws", cols.rows, 0.65);
-    head("residual (mean, spread)", cols.residual, 2.1);
+    head("pitch type", cols.type, 1.55);
+    head("throws", cols.rows, 0.55);
+    head("residual (mean, spread)", cols.residual, 2.05);
     head("best orientations (ball seen from the spin axis; miss)", cols.balls, 6);
     y += 0.25;
     doc.moveTo(M * PT, y * PT).lineTo((PAGE.w - M) * PT, y * PT).lineWidth(0.6).strokeColor("#999999").stroke();
@@ -122,8 +122,8 @@ function tablePages(doc: Doc, r: ReportModel, p: ReportPitcher, idBase: string):
       const t = p.types[i];
       const top = y + 0.08;
       const mk = PITCH_MARKS[i % PITCH_MARKS.length];
-      text(doc, t.pitch, cols.type, top, 1.7, { size: 12, bold: true, color: mk.color });
-      text(doc, String(t.rows), cols.rows, top, 0.65, { size: 11 });
+      text(doc, t.pitch, cols.type, top, 1.55, { size: 12, bold: true, color: mk.color, hIn: 1.3 });
+      text(doc, String(t.rows), cols.rows, top, 0.55, { size: 11 });
       const res = t.residual;
       text(
         doc,
@@ -131,13 +131,13 @@ function tablePages(doc: Doc, r: ReportModel, p: ReportPitcher, idBase: string):
           (t.reach.beyondReach ? `\nBEYOND REACH: seams reach at most ${fixed(t.reach.alongResidualIn, 1)} in that way` : `\nseams can reach ${fixed(t.reach.alongResidualIn, 1)} in that way`),
         cols.residual,
         top,
-        2.1,
+        2.05,
         { size: 9.5, color: t.reach.beyondReach ? WARN : INK },
       );
       t.orientations.slice(0, 3).forEach((o, k) => {
         const x = cols.balls + k * ballW;
-        svgAt(doc, ballSvg(o.axis, r.seamShape, `${idBase}-b${i}-${k}`), x, top - 0.05, 1.05, 1.05);
-        text(doc, `#${k + 1} ${o.latLon}\nnear ${o.landmark}\nmiss ${fixed(o.fitErrorIn, 1)} in`, x + 1.05, top + 0.1, ballW - 1.1, { size: 8.5 });
+        svgAt(doc, ballSvg(o.axis, r.seamShape, `${idBase}-b${i}-${k}`), x, top - 0.05, 0.95, 0.95);
+        text(doc, `#${k + 1}\n${o.latLon}\nnear ${o.landmark}\nmiss ${fixed(o.fitErrorIn, 1)} in`, x + 0.98, top + 0.05, ballW - 1.0, { size: 8.5 });
       });
       if (t.orientations.length === 0) text(doc, "no orientation fitted", cols.balls, top, 3, { size: 9.5, color: MUTED });
       y += TABLE_ROW_IN;
