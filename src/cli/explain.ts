@@ -18,7 +18,7 @@ export function registerExplain(y: Argv): Argv {
           .option("move-arm", textOption("observed horizontal movement toward the arm side, inches"))
           .option("move-right", textOption("observed horizontal movement toward the catcher's right (the field's +x), inches (instead of --move-arm)"))
           .option("movement-basis", textOption("trade: induced vertical and horizontal break over the window --window-ft; release: at the plate against a spinless flight", "trade"))
-          .option("window-ft", textOption("trade basis: where the movement window starts, ft from home plate (10 to 55)", "50"))
+          .option("window-ft", textOption("trade basis: where the movement window starts, ft from home plate (10 to 55) [default: 50]"))
           .option("gap-flag", textOption("flag a gap between spin-based and observed direction larger than this, minutes of clock (1 to 360)", "20"))
           .option("model", textOption("a seam-force model profile (JSON; see README) [default: the built-in defaults]"))
           .option("csv-in", textOption("a CSV of tracked pitches (our column keys, or --columns; see README); the pitch flags do not go with it"))

@@ -110,9 +110,9 @@ function explainSettings(request: Request): ExplainSettings {
 function batchFormat(option: string, value: unknown, allowed: readonly ("csv" | "json")[], what: string): { path: string; format: "csv" | "json" } {
   const path = optionPath(option, value);
   const named = formatOfPath(path);
-  if (named === "csv" || named === "json") {
-    if (!allowed.includes(named)) throw new InputError(`--${option} ${quote(path)}: ${what} is written as ${allowed.join(" or ")}; expected a name ending in ${allowed.map((f) => `.${f}`).join(" or ")}`);
-    return { path, format: named };
+  if (named !== undefined) {
+    if (!(allowed as readonly string[]).includes(named)) throw new InputError(`--${option} ${quote(path)}: the extension names ${named}, but ${what} is written as ${allowed.join(" or ")}; expected a name ending in ${allowed.map((f) => `.${f}`).join(" or ")}`);
+    return { path, format: named as "csv" | "json" };
   }
   if (path !== "" && writesStraight(path)) return { path, format: allowed[0] };
   if (path !== "" && !isFolder(path)) throw new InputError(`--${option} ${quote(path)} names no format; expected a name ending in ${allowed.map((f) => `.${f}`).join(" or ")}`);
