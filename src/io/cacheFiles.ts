@@ -21,9 +21,10 @@
  * folder, a full disk) is skipped without a word: the run only loses speed.
  */
 import { createHash, randomBytes } from "node:crypto";
-import { closeSync, constants, mkdirSync, openSync, readFileSync, renameSync, unlinkSync, writeSync } from "node:fs";
+import { closeSync, constants, openSync, readFileSync, renameSync, unlinkSync, writeSync } from "node:fs";
 import { isAbsolute, join } from "node:path";
 import { projectRoot } from "../version.js";
+import { ensureFolder } from "./folders.js";
 
 const MAGIC = Buffer.from("SACACHE1", "latin1");
 const HASH_BYTES = 32;
@@ -87,7 +88,8 @@ export function writeCacheEntry(path: string, header: string, payload: Uint8Arra
   const temp = join(folder, `.${randomBytes(6).toString("hex")}.tmp`);
   let fd: number | undefined;
   try {
-    mkdirSync(folder, { recursive: true });
+    // one level at a time (folders.ts: Node's recursive mkdir never returns under /proc)
+    ensureFolder(folder, "the cache");
     fd = openSync(temp, constants.O_CREAT | constants.O_EXCL | constants.O_WRONLY, 0o644);
     const bytes = encodeCacheEntry(header, payload);
     let done = 0;
