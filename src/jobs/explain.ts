@@ -177,6 +177,19 @@ function nearest(axis: Vec3) {
   return { name: near.landmark.name, angleDeg: near.angleRad / DEG };
 }
 
+/** A grid orientation's words (nearest landmark, latitude/longitude), kept by its index: a batch meets the same few hundred again and again. */
+const orientationWords = new Map<string, { landmark: { name: string; angleDeg: number }; latLon: string }>();
+function wordsOf(index: number, axis: Vec3) {
+  const key = `${index}:${axis[0]},${axis[1]},${axis[2]}`;
+  let w = orientationWords.get(key);
+  if (!w) {
+    if (orientationWords.size > 100_000) orientationWords.clear();
+    w = { landmark: nearest(axis), latLon: formatLatLon(vectorToLatLon(axis)) };
+    orientationWords.set(key, w);
+  }
+  return w;
+}
+
 const armUp = (a: { armSideM: number; upM: number }) => ({ armSideIn: IN(a.armSideM), upIn: IN(a.upM) });
 
 /** The basis and window in words and numbers, for every output. */
@@ -206,8 +219,7 @@ export function explanationNumbers(e: Explanation) {
     matches: e.matches.map((m, i) => ({
       rank: i + 1,
       axis: m.axis,
-      latLon: formatLatLon(vectorToLatLon(m.axis)),
-      landmark: nearest(m.axis),
+      ...wordsOf(m.index, m.axis),
       seam: { armSideIn: IN(m.seamArmSideM), upIn: IN(m.seamUpM) },
       fitErrorIn: IN(m.fitErrorM),
       seamCoefficient: m.coefficient,
