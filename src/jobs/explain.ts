@@ -178,16 +178,14 @@ function nearest(axis: Vec3) {
 }
 
 /** A grid orientation's words (nearest landmark, latitude/longitude), kept by its index: a batch meets the same few hundred again and again. */
-const orientationWords = new Map<string, { landmark: { name: string; angleDeg: number }; latLon: string }>();
+const orientationWords = new Map<number, { axis: Vec3; words: { landmark: { name: string; angleDeg: number }; latLon: string } }>();
 function wordsOf(index: number, axis: Vec3) {
-  const key = `${index}:${axis[0]},${axis[1]},${axis[2]}`;
-  let w = orientationWords.get(key);
-  if (!w) {
-    if (orientationWords.size > 100_000) orientationWords.clear();
-    w = { landmark: nearest(axis), latLon: formatLatLon(vectorToLatLon(axis)) };
-    orientationWords.set(key, w);
-  }
-  return w;
+  const known = orientationWords.get(index);
+  // an index names one cell of one grid: a run with another grid finds another axis there
+  if (known && known.axis[0] === axis[0] && known.axis[1] === axis[1] && known.axis[2] === axis[2]) return known.words;
+  const words = { landmark: nearest(axis), latLon: formatLatLon(vectorToLatLon(axis)) };
+  orientationWords.set(index, { axis, words });
+  return words;
 }
 
 const armUp = (a: { armSideM: number; upM: number }) => ({ armSideIn: IN(a.armSideM), upIn: IN(a.upM) });

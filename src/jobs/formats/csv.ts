@@ -1,13 +1,22 @@
 /** Every CSV table the tool writes, built from job results (one row per record, a header first). */
 import { vectorToLatLon } from "../../../geometry/ballCoords.js";
-import { csvLine } from "../../io/csv.js";
+import { csvCellText, csvLine } from "../../io/csv.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { M_PER_FT } from "../../../geometry/units.js";
-import { fixed } from "../../render/numbers.js";
 import type { ExplainedRow, PitchTypeNumbers } from "../explain.js";
 
-/** One RFC 4180 record without its line end (formula cells neutralised: io/csvWriter.ts). */
-const csvRow = (values: readonly unknown[]) => csvLine(values).slice(0, -1);
+const NEEDS_QUOTES = /[",\r\n]/;
+
+/**
+ * One RFC 4180 record without its line end (formula cells neutralised: io/csvWriter.ts).
+ * A record none of whose cells needs quotes is the cells joined by commas, the bytes
+ * csv-stringify writes for it; only the others go through csv-stringify (a batch writes
+ * thousands of rows a second).
+ */
+const csvRow = (values: readonly unknown[]) => {
+  const cells = values.map(csvCellText);
+  return cells.some((c) => NEEDS_QUOTES.test(c)) ? csvLine(values).slice(0, -1) : cells.join(",");
+};
 
 const SCREEN_COLUMNS = [
   "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "scoreIn", "seamArmSideIn", "seamVerticalIn", "seamClock",
@@ -32,8 +41,8 @@ export function screenCsv(reports: readonly ScreenReport[]): string {
 }
 
 /** Rounded for people: 0.1 in, 0.1 deg (and mph, percent), no minus on zero. */
-const r1 = (x: number | null) => (x === null ? "" : Number(fixed(x, 1)));
-const r0 = (x: number | null) => (x === null ? "" : Number(fixed(x, 0)));
+const r1 = (x: number | null) => (x === null ? "" : Math.round(x * 10) / 10 || 0);
+const r0 = (x: number | null) => (x === null ? "" : Math.round(x) || 0);
 
 /** The batch's CSV header for `top` matches per row (our keys; the inputs echoed first, normalised). */
 export function explainCsvHeader(top: number): string {
