@@ -66,6 +66,8 @@ export { airState, type AirConditions, type AirState } from "./physics/air.js";
 export { simulateFlight, type FlightOptions, type FlightResult, type Launch } from "./physics/flight.js";
 export { flyPitch, type PitchFlight } from "./physics/pitchFlight.js";
 export { tradeMovement } from "./physics/tradeMovement.js";
+export { Explainer, type Explanation, type ExplainOptions, type MovementBasis, type TrackedPitch } from "./physics/explain.js";
+export { fitPitchType, PitchTypeAccumulator, type PitchTypeFit } from "./physics/explainFit.js";
 export {
   coefficientMap, defaultProfile, forceTimeline, resolveProfile, SEAM_MODEL_PARAMETERS, seamModel, turnAverage,
   type SeamModel, type SeamModelProfile, type TurnAverage,

@@ -3,7 +3,8 @@
  * or run in a browser.
  *
  * 1. The command line (src/cli/main.ts) into out/build/cli/: one ES module plus a
- *    chunk per command family, so `--help` reads one small file and each command
+ *    chunk per command family, and explain's worker thread (src/jobs/explainWorker.ts,
+ *    out/build/cli/explainWorker.js, sharing the chunks), so `--help` reads one small file and each command
  *    loads only its own stack. Packages whose code reads files next to itself at run
  *    time (pdfkit's fonts, svgdom's), the browser-only three.js and the worker-pool
  *    package stay outside the bundle and load from node_modules when a command needs them.
@@ -34,10 +35,12 @@ async function bundleCli(root: string): Promise<void> {
   const outdir = join(root, "out", "build", "cli");
   rmSync(outdir, { recursive: true, force: true });
   await esbuild.build({
-    // the screening worker (src/jobs/screenWorker.ts) is an entry of its own, beside the chunks that load it
+    // the command line and its worker threads (each its own entry: a worker loads a file): the atlas's screening
+    // worker beside the chunks that load it, and the worker explain's batch runs
     entryPoints: [
       { in: join(root, "src", "cli", "main.ts"), out: "main" },
       { in: join(root, "src", "jobs", "screenWorker.ts"), out: "chunks/screenWorker" },
+      { in: join(root, "src", "jobs", "explainWorker.ts"), out: "explainWorker" },
     ],
     absWorkingDir: root,
     bundle: true,

@@ -16,13 +16,15 @@ const text = (describe: string, defaultValue?: string) => ({ type: "string" as c
 /** The pitch: flags, a pitch file or the demo staff. */
 export function withPitchOptions<T>(y: Argv<T>) {
   return y
-    .option("hand", text("throwing hand: right or left"))
+    .option("hand", text("throwing hand: right, left, R or L"))
     .option("speed", text("release speed, mph"))
     .option("spin", text("spin rate, rpm"))
     .option("tilt", text("tilt as a clock reading H:MM (12:00 = pure backspin)"))
+    .option("tilt-deg", text("tilt in degrees clockwise from 12:00 as seen from --view, 0 to below 360 (instead of --tilt)"))
     .option("view", text("whose view the clock is read from: pitcher (behind the pitcher) or catcher"))
     .option("gyro", text("gyro angle, deg (positive: the axis's positive end leans toward the plate) [default: 0]"))
-    .option("efficiency", text("spin efficiency, percent (instead of --gyro; gyro taken positive)"))
+    .option("efficiency", text("spin efficiency, percent (instead of --gyro; below 100 it needs --gyro-sign)"))
+    .option("gyro-sign", text("the gyro's sign with --efficiency: pos (the axis's positive end leans toward the plate) or neg"))
     .option("want", text("wanted direction of the seam movement: arm, glove, up, down or any (its size) [default: any]"))
     .option("name", text("a label for the pitch"))
     .option("pitch", text("a pitch file (one pitch or a staff; see README)"))

@@ -1,76 +1,72 @@
 /**
- * The explain job: a tracked pitch's movement against what its spin predicts, and
- * the seam orientations that would account for the rest; one pitch, or a CSV of
- * tracked pitches streamed through in bounded memory.
+ * The explain job: a tracked pitch's movement against what its spin predicts, the
+ * seam orientations that would account for the rest, and the spin-based against the
+ * observed direction; one pitch, or a CSV of tracked pitches streamed through
+ * (explainColumns.ts: our keys and --columns; explainBatch.ts: blocks on worker
+ * threads), with a per-pitch-type summary (one orientation fitted to all throws of
+ * a pitch: physics/explainFit.ts) and the bullpen report (render/report/).
  *
- * Batch input (CSV, header required, columns by name, units in the names):
- *   pitcher, pitch (optional labels), hand (right|left), speed_mph, spin_rpm,
- *   tilt (H:MM), view (pitcher|catcher, default pitcher), gyro_deg or efficiency_pct
- *   (default gyro 0), move_arm_in, move_up_in (observed movement with gravity
- *   removed: inches toward the arm side, and up).
- * The CSV is read by io/csv.ts (RFC 4180: quoted commas, quotes and line breaks,
- * CRLF, a leading BOM); a record that cannot be read, or a row with a bad value,
- * is one bad row with its line. Numbers are decimal only (io/numbers.ts).
+ * Basis (--movement-basis): trade (default: induced vertical break and horizontal
+ * break over the window from --window-ft, default 50 ft, to the front of the plate)
+ * or release (the plate crossing against the spinless flight). Every output names the
+ * basis and the window.
  */
 import { statSync } from "node:fs";
 import { formatLatLon, vectorToLatLon } from "../../geometry/ballCoords.js";
+import { armSideSign } from "../../geometry/frames.js";
 import { findLandmarks, nearestLandmark } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
-import { DEG, M_PER_IN } from "../../geometry/units.js";
+import { DEG, M_PER_FT, M_PER_IN } from "../../geometry/units.js";
+import type { Vec3 } from "../../geometry/vec.js";
+import { cacheFolder } from "../io/cacheFiles.js";
 import { isBadRecord, readCsv, type CsvProgress, type CsvReader } from "../io/csv.js";
 import { InputError } from "../io/errors.js";
-import { parseDecimal } from "../io/numbers.js";
 import { formatOfPath, writesStraight } from "../io/outputPlan.js";
 import { quote } from "../io/quote.js";
-import { DEFAULT_EXPLAIN_GRID_DEG, DEFAULT_EXPLAIN_TOP, Explainer, type Explanation } from "../physics/explain.js";
+import { DEFAULT_EXPLAIN_GRID_DEG, DEFAULT_EXPLAIN_TOP, DEFAULT_GAP_FLAG_MINUTES, EXPLAIN_TOP_RANGE, MOVEMENT_BASES, type Explanation, type MovementBasis } from "../physics/explain.js";
+import { fitPitchType, PitchTypeAccumulator, type PitchTypeFit } from "../physics/explainFit.js";
 import type { Pitch } from "../screening/pitch.js";
 import type { PitchEcho } from "../screening/report.js";
-import { buildPitch, pitchesFromRequest, PITCH_FLAGS, type RawPitch } from "./request/pitch.js";
-import { airConditions } from "./request/settings.js";
+import { autoThreads, BLOCK_ROWS, blockRunner, explainerFor, IN_FLIGHT_PER_THREAD, packRows, type BlockResult, type ExplainSettings, type PackedRow } from "./explainBatch.js";
+import { MOVEMENT_LIMIT_IN, parseColumnsOption, readRow, resolveColumns, type BatchRow, type ColumnMap } from "./explainColumns.js";
+import { modelChoice } from "./request/model.js";
+import { pitchesFromRequest, PITCH_FLAGS } from "./request/pitch.js";
+import { airConditions, samplerSettings, windowStart } from "./request/settings.js";
 import { oneOf, optionPath, parseInRange, parseIntegerInRange, parseNumber, type Request } from "./request/values.js";
 
 const IN = (m: number) => m / M_PER_IN;
-const COLUMN_FIELDS: Record<string, string> = {
-  pitcher: "pitcher",
-  pitch: "name",
-  hand: "hand",
-  speed_mph: "speedMph",
-  spin_rpm: "spinRpm",
-  tilt: "tilt",
-  view: "view",
-  gyro_deg: "gyroDeg",
-  efficiency_pct: "efficiencyPct",
-};
-/** The numeric columns and the unit each is read in. */
-const NUMERIC: Record<string, string> = { speed_mph: "mph", spin_rpm: "rpm", gyro_deg: "degrees", efficiency_pct: "percent", move_arm_in: "inches", move_up_in: "inches" };
-const REQUIRED = ["hand", "speed_mph", "spin_rpm", "tilt", "move_arm_in", "move_up_in"];
-export const INPUT_COLUMNS = [...Object.keys(COLUMN_FIELDS), "move_arm_in", "move_up_in"];
-/** Largest observed movement accepted either way, inches. */
-const MOVEMENT_LIMIT_IN = 60;
 
-export interface ExplainSettings {
-  readonly gridDeg: number;
-  readonly top: number;
-  readonly explainer: Explainer;
-}
-
-export interface ExplainOneJob extends ExplainSettings {
+export interface ExplainOneJob {
   readonly kind: "one";
+  readonly settings: ExplainSettings;
   readonly pitch: Pitch;
   readonly echo: PitchEcho;
   readonly source?: string;
+  /** Observed movement on the basis, inches: toward the arm side, and up. */
   readonly moveArmIn: number;
   readonly moveUpIn: number;
 }
 
-export interface ExplainBatchJob extends ExplainSettings {
+export interface ExplainBatchJob {
   readonly kind: "batch";
+  readonly settings: ExplainSettings;
   readonly csvIn: string;
   /** --out as typed (planned by the caller). */
   readonly out: string;
   readonly format: "csv" | "json";
   readonly onBadRow: "skip" | "stop";
+  /** --columns: key -> the user's header. */
+  readonly columns: Readonly<Record<string, string>>;
+  /** --summary FILE (.json or .csv), planned by the caller. */
+  readonly summary?: { readonly path: string; readonly format: "json" | "csv" };
+  /** --report FILE.pdf and --report-svg DIR. */
+  readonly report?: string;
+  readonly reportSvg?: string;
+  /** Worker threads: a number, or "auto" (by the file's size). */
+  readonly threads: number | "auto";
 }
+
+export type ExplainJob = ExplainOneJob | ExplainBatchJob;
 
 function isFolder(path: string): boolean {
   try {
@@ -81,18 +77,54 @@ function isFolder(path: string): boolean {
 }
 
 /** Options that only a batch (--csv-in) reads. */
-const BATCH_ONLY = ["on-bad-row", "format"];
+const BATCH_ONLY = ["on-bad-row", "format", "columns", "summary", "report", "report-svg", "threads"];
 /** Options that only one pitch reads (the CSV gives every pitch and its movement). */
-const ONE_ONLY = [...PITCH_FLAGS, "pitch", "pitch-name", "demo", "move-arm", "move-up", "json"];
+const ONE_ONLY = [...PITCH_FLAGS, "pitch", "pitch-name", "demo", "move-arm", "move-right", "move-up", "json"];
 
-export function parseExplain(request: Request): ExplainOneJob | ExplainBatchJob {
-  const given = (k: string) => request[k] !== undefined && request[k] !== false;
+/** The settings both modes share: grid, top, basis, window, air, model, cache. */
+function explainSettings(request: Request): ExplainSettings {
   const gridDeg = parseInRange("grid", request.grid ?? DEFAULT_EXPLAIN_GRID_DEG, 1, 15, "deg");
-  const top = parseIntegerInRange("top", request.top ?? DEFAULT_EXPLAIN_TOP, 1, 20);
-  const make = () => new Explainer({ gridSpacingRad: gridDeg * DEG, top, air: airConditions(request) });
+  const top = parseIntegerInRange("top", request.top ?? DEFAULT_EXPLAIN_TOP, EXPLAIN_TOP_RANGE[0], EXPLAIN_TOP_RANGE[1]);
+  const basis = oneOf("movement-basis", request["movement-basis"] ?? "trade", MOVEMENT_BASES) as MovementBasis;
+  if (basis === "release" && request["window-ft"] !== undefined) {
+    throw new InputError(`--window-ft goes with --movement-basis trade (the release basis has no window); leave it out or use the trade basis`);
+  }
+  const choice = modelChoice(request);
+  const sampler = samplerSettings(request, choice.profile);
+  const gap = parseInRange("gap-flag", request["gap-flag"] ?? DEFAULT_GAP_FLAG_MINUTES, 1, 360, "minutes of clock");
+  const cache = request.cache === undefined ? cacheFolder() : optionPath("cache", request.cache);
+  if (cache === "") throw new InputError(`--cache "": the path is empty; expected a folder for the coefficient maps, or none`);
+  return {
+    gridDeg,
+    top,
+    basis,
+    windowStartM: windowStart(request),
+    air: airConditions(request),
+    profile: choice.profile,
+    seamShape: sampler.seamShape ?? DEFAULT_SEAM_SHAPE,
+    gapFlagMinutes: gap,
+    cacheFolder: cache === "none" ? null : cache,
+  };
+}
+
+function batchFormat(option: string, value: unknown, allowed: readonly ("csv" | "json")[], what: string): { path: string; format: "csv" | "json" } {
+  const path = optionPath(option, value);
+  const named = formatOfPath(path);
+  if (named !== undefined) {
+    if (!(allowed as readonly string[]).includes(named)) throw new InputError(`--${option} ${quote(path)}: the extension names ${named}, but ${what} is written as ${allowed.join(" or ")}; expected a name ending in ${allowed.map((f) => `.${f}`).join(" or ")}`);
+    return { path, format: named as "csv" | "json" };
+  }
+  if (path !== "" && writesStraight(path)) return { path, format: allowed[0] };
+  if (path !== "" && !isFolder(path)) throw new InputError(`--${option} ${quote(path)} names no format; expected a name ending in ${allowed.map((f) => `.${f}`).join(" or ")}`);
+  return { path, format: allowed[0] };
+}
+
+export function parseExplain(request: Request): ExplainJob {
+  const given = (k: string) => request[k] !== undefined && request[k] !== false;
   if (request["csv-in"] !== undefined) {
     const stray = ONE_ONLY.find(given);
     if (stray) throw new InputError(`--${stray} cannot be combined with --csv-in; the CSV gives every pitch and its movement`);
+    const settings = explainSettings(request);
     const onBadRow = oneOf("on-bad-row", request["on-bad-row"] ?? "skip", ["skip", "stop"] as const);
     if (request.out === undefined) throw new InputError(`--csv-in needs --out FILE (.csv or .json, or - for standard output) for the results`);
     const out = optionPath("out", request.out);
@@ -107,59 +139,120 @@ export function parseExplain(request: Request): ExplainOneJob | ExplainBatchJob 
             : undefined;
     // an empty --out or a folder is the output plan's to refuse, in its own words
     if (!format && out !== "" && !isFolder(out)) throw new InputError(`--out ${quote(out)} names no batch format; expected a .csv or .json file, or --format csv|json`);
-    return { kind: "batch", csvIn: optionPath("csv-in", request["csv-in"]), out, format: format ?? "csv", onBadRow, gridDeg, top, explainer: make() };
+    const columns = parseColumnsOption(request.columns);
+    const summary = request.summary === undefined ? undefined : batchFormat("summary", request.summary, ["json", "csv"], "the summary");
+    const report = request.report === undefined ? undefined : optionPath("report", request.report);
+    const reportSvg = request["report-svg"] === undefined ? undefined : optionPath("report-svg", request["report-svg"]);
+    const threads = request.threads === undefined || request.threads === "auto" ? "auto" : parseIntegerInRange("threads", request.threads, 0, 64);
+    return { kind: "batch", settings, csvIn: optionPath("csv-in", request["csv-in"]), out, format: format ?? "csv", onBadRow, columns, summary, report, reportSvg, threads };
   }
   const batchOnly = BATCH_ONLY.find(given);
   if (batchOnly) throw new InputError(`--${batchOnly} goes with --csv-in FILE (a batch); leave it out for one pitch`);
-  if (request["move-arm"] === undefined || request["move-up"] === undefined) {
-    throw new InputError(`--move-arm and --move-up (observed movement, inches) are needed, or --csv-in FILE for a batch`);
+  if (request["move-arm"] !== undefined && request["move-right"] !== undefined) throw new InputError(`give --move-arm or --move-right, not both`);
+  if (request["move-up"] === undefined || (request["move-arm"] === undefined && request["move-right"] === undefined)) {
+    throw new InputError(`--move-up and --move-arm (or --move-right) are needed (observed movement, inches), or --csv-in FILE for a batch`);
   }
+  const settings = explainSettings(request);
   const { pitches, source } = pitchesFromRequest(request);
   if (pitches.length !== 1) throw new InputError(`explain takes one pitch; the file has ${pitches.length} (choose one with --pitch-name, or use --csv-in)`);
-  const moveArmIn = parseNumber("move-arm", request["move-arm"], "inches");
   const moveUpIn = parseNumber("move-up", request["move-up"], "inches");
-  if (!(Math.abs(moveArmIn) <= MOVEMENT_LIMIT_IN && Math.abs(moveUpIn) <= MOVEMENT_LIMIT_IN)) {
-    throw new InputError(`observed movement ${moveArmIn}, ${moveUpIn} in is out of range; expected at most ${MOVEMENT_LIMIT_IN} in each way`);
+  const horizontalOption = request["move-arm"] !== undefined ? "move-arm" : "move-right";
+  const horizontal = parseNumber(horizontalOption, request[horizontalOption], "inches");
+  for (const [option, x] of [["move-up", moveUpIn], [horizontalOption, horizontal]] as const) {
+    if (!(Math.abs(x) <= MOVEMENT_LIMIT_IN)) throw new InputError(`--${option} ${x} in is out of range; expected at most ${MOVEMENT_LIMIT_IN} in either way`);
   }
-  return { kind: "one", pitch: pitches[0].pitch, echo: pitches[0].echo, source, moveArmIn, moveUpIn, gridDeg, top, explainer: make() };
+  const { pitch, echo } = pitches[0];
+  const moveArmIn = horizontalOption === "move-arm" ? horizontal : armSideSign(pitch.hand) * horizontal;
+  return { kind: "one", settings, pitch, echo, source, moveArmIn, moveUpIn };
 }
 
 export function runExplainOne(job: ExplainOneJob): Explanation {
-  return job.explainer.explain({ pitch: job.pitch, observedArmSideM: job.moveArmIn * M_PER_IN, observedUpM: job.moveUpIn * M_PER_IN });
+  return explainerFor(job.settings).explain({ pitch: job.pitch, observedArmSideM: job.moveArmIn * M_PER_IN, observedUpM: job.moveUpIn * M_PER_IN });
 }
 
-/** The explanation in user units: the one form JSON, CSV and the terminal read. */
+let landmarkList: ReturnType<typeof findLandmarks> | undefined;
+function nearest(axis: Vec3) {
+  landmarkList ??= findLandmarks(DEFAULT_SEAM_SHAPE);
+  const near = nearestLandmark(landmarkList, axis);
+  return { name: near.landmark.name, angleDeg: near.angleRad / DEG };
+}
+
+/** A grid orientation's words (nearest landmark, latitude/longitude), kept by its index: a batch meets the same few hundred again and again. */
+const orientationWords = new Map<number, { axis: Vec3; words: { landmark: { name: string; angleDeg: number }; latLon: string } }>();
+function wordsOf(index: number, axis: Vec3) {
+  const known = orientationWords.get(index);
+  // an index names one cell of one grid: a run with another grid finds another axis there
+  if (known && known.axis[0] === axis[0] && known.axis[1] === axis[1] && known.axis[2] === axis[2]) return known.words;
+  const words = { landmark: nearest(axis), latLon: formatLatLon(vectorToLatLon(axis)) };
+  orientationWords.set(index, { axis, words });
+  return words;
+}
+
+const armUp = (a: { armSideM: number; upM: number }) => ({ armSideIn: IN(a.armSideM), upIn: IN(a.upM) });
+
+/** The basis and window in words and numbers, for every output. */
+export function basisNumbers(settings: ExplainSettings) {
+  return { basis: settings.basis, windowFt: settings.basis === "trade" ? settings.windowStartM / M_PER_FT : null };
+}
+
+/** The explanation in user units: the one form JSON, CSV, the terminal and the report read. */
 export function explanationNumbers(e: Explanation) {
-  const landmarks = findLandmarks(DEFAULT_SEAM_SHAPE);
+  const d = e.direction;
   return {
-    magnus: { armSideIn: IN(e.magnusArmSideM), upIn: IN(e.magnusUpM) },
-    residual: { armSideIn: IN(e.residualArmSideM), upIn: IN(e.residualUpM) },
-    seamPerUnitCoefficient: {
-      alongAxis: { armSideIn: IN(e.unitA.armSideM), upIn: IN(e.unitA.upM) },
-      alongMagnus: { armSideIn: IN(e.unitM.armSideM), upIn: IN(e.unitM.upM) },
+    basis: e.basis,
+    windowFt: e.windowStartM === null ? null : e.windowStartM / M_PER_FT,
+    predicted: armUp(e.predicted),
+    magnus: armUp(e.magnus),
+    drag: armUp(e.drag),
+    residual: armUp(e.residual),
+    reach: { alongResidualIn: IN(e.reachM), beyondReach: e.beyondReach },
+    direction: {
+      spinBased: d.spinBased?.text ?? null,
+      observed: d.observed?.text ?? null,
+      gapMinutes: d.differenceMinutes,
+      gapDeg: d.differenceDeg,
+      flagged: e.gapFlagged,
     },
-    matches: e.matches.map((m, i) => {
-      const near = nearestLandmark(landmarks, m.axis);
-      return {
-        rank: i + 1,
-        axis: m.axis,
-        latLon: formatLatLon(vectorToLatLon(m.axis)),
-        landmark: { name: near.landmark.name, angleDeg: near.angleRad / DEG },
-        seam: { armSideIn: IN(m.seamArmSideM), upIn: IN(m.seamUpM) },
-        fitErrorIn: IN(m.fitErrorM),
-        seamCoefficient: m.coefficient,
-      };
-    }),
+    seamPerUnitCoefficient: { alongAxis: armUp(e.unitA), alongMagnus: armUp(e.unitM) },
+    matches: e.matches.map((m, i) => ({
+      rank: i + 1,
+      axis: m.axis,
+      ...wordsOf(m.index, m.axis),
+      seam: { armSideIn: IN(m.seamArmSideM), upIn: IN(m.seamUpM) },
+      fitErrorIn: IN(m.fitErrorM),
+      seamCoefficient: m.coefficient,
+    })),
   };
 }
 
 export type ExplanationNumbers = ReturnType<typeof explanationNumbers>;
 
-/** One explained row of a batch. */
+/** A pitch type's fit in user units (the summary's JSON and CSV, and the report). */
+export function pitchTypeNumbers(pitcher: string, pitch: string, hand: string, fit: PitchTypeFit) {
+  return {
+    pitcher,
+    pitch,
+    hand,
+    rows: fit.rows,
+    orientations: fit.orientations.map((o, i) => ({
+      rank: i + 1,
+      axis: o.axis,
+      latLon: formatLatLon(vectorToLatLon(o.axis)),
+      landmark: nearest(o.axis),
+      fitErrorIn: IN(o.fitErrorM),
+      seam: { armSideIn: IN(o.seamArmSideM), upIn: IN(o.seamUpM) },
+    })),
+    residual: { armSideIn: IN(fit.residual.armSideM), verticalIn: IN(fit.residual.upM), sdArmSideIn: IN(fit.residual.sdArmSideM), sdVerticalIn: IN(fit.residual.sdUpM) },
+    reach: { alongResidualIn: IN(fit.reachM), beyondReach: fit.beyondReach },
+  };
+}
+
+export type PitchTypeNumbers = ReturnType<typeof pitchTypeNumbers>;
+
+/** One explained row of a batch: its line, every input echoed, and the numbers. */
 export interface ExplainedRow {
   readonly line: number;
-  readonly pitcher: string;
-  readonly pitch: string;
+  readonly echo: PitchEcho;
   readonly moveArmIn: number;
   readonly moveUpIn: number;
   readonly numbers: ExplanationNumbers;
@@ -173,11 +266,32 @@ export interface BatchEvents {
   progress(done: number, read: CsvProgress): void;
 }
 
+/** One throw as the report draws it (a sample per pitch type: REPORT_POINTS). */
+export interface ReportPoint {
+  readonly observed: { armSideIn: number; upIn: number };
+  readonly predicted: { armSideIn: number; upIn: number };
+  /** Clock minutes (pitch's view) of the spin-based and observed directions, or null. */
+  readonly spinMinutes: number | null;
+  readonly observedMinutes: number | null;
+}
+
+/** Points per pitch type the report keeps (the first ones; the summary uses every row). */
+export const REPORT_POINTS = 400;
+
+export interface PitchTypeResult {
+  readonly numbers: PitchTypeNumbers;
+  readonly view: string;
+  readonly points: readonly ReportPoint[];
+}
+
 export interface BatchSummary {
   readonly done: number;
   readonly skipped: number;
   /** The bad row that stopped the run under --on-bad-row stop. */
   readonly stoppedAt?: string;
+  readonly threads: number;
+  /** Per pitcher and pitch type, when --summary or --report asked for it. */
+  readonly pitchTypes?: readonly PitchTypeResult[];
 }
 
 /** A column name that a byte-order mark got into, in words; "" if none did. */
@@ -188,87 +302,132 @@ function bomInName(name: string): string {
   return "";
 }
 
-/** Checks the header's names: every required column there, no unknown one. */
-function checkHeader(names: readonly string[], label: string): void {
-  const expected = `expected the columns ${INPUT_COLUMNS.join(", ")}`;
-  const unknown = names.filter((c) => !INPUT_COLUMNS.includes(c));
-  // a byte-order mark in a name also hides a required column: name the mark first
-  const marked = unknown.find((c) => bomInName(c) !== "");
-  if (marked !== undefined) throw new InputError(`${label}: the header has the unknown column ${quote(marked)}${bomInName(marked)}; ${expected}`);
-  const missing = REQUIRED.filter((c) => !names.includes(c));
-  if (missing.length) throw new InputError(`${label}: the header lacks column "${missing[0]}"; ${expected}`);
-  if (unknown.length) throw new InputError(`${label}: the header has the unknown column ${quote(unknown[0])}; ${expected}`);
-}
-
 /** How messages name the batch's CSV. */
 function batchLabel(job: ExplainBatchJob): string {
   return `--csv-in ${quote(job.csvIn)}`;
 }
 
-function rowPitch(cells: Readonly<Record<string, string>>, lineNo: number, label: string): { pitch: Pitch; moveArmIn: number; moveUpIn: number; label: [string, string] } {
-  const where = (col: string) => `${label} line ${lineNo}, column "${col}"`;
-  const get = (col: string) => cells[col] ?? "";
-  for (const col of REQUIRED) if (get(col) === "") throw new InputError(`${where(col)}: the cell is empty; expected ${NUMERIC[col] ? `a number of ${NUMERIC[col]}` : `a ${col}`}`);
-  const number = (col: string) => parseDecimal(get(col), `${where(col)}:`, `a number of ${NUMERIC[col]}`);
-  const raw: RawPitch = {};
-  for (const [col, field] of Object.entries(COLUMN_FIELDS)) {
-    if (get(col) === "") continue;
-    raw[field] = NUMERIC[col] ? number(col) : get(col);
-  }
-  const colOf: Record<string, string> = Object.fromEntries(Object.entries(COLUMN_FIELDS).map(([c, f]) => [f, c]));
-  const { pitch } = buildPitch(raw, (field) => where(colOf[field] ?? field));
-  const moveArmIn = number("move_arm_in");
-  const moveUpIn = number("move_up_in");
-  const limit = MOVEMENT_LIMIT_IN;
-  for (const [col, x] of [["move_arm_in", moveArmIn], ["move_up_in", moveUpIn]] as const) {
-    if (Math.abs(x) > limit) throw new InputError(`${where(col)}: ${x} in is out of range; expected at most ${limit} inches either way`);
-  }
-  return { pitch, moveArmIn, moveUpIn, label: [get("pitcher"), get("pitch")] };
-}
-
 /**
- * Opens the batch's CSV and reads and checks its header, before any output is
- * made: a missing file, a folder, an unreadable or empty file, a header that
- * cannot be read or lacks a column is one InputError, and nothing is written.
+ * Opens the batch's CSV and reads and checks its header against the column map,
+ * before any output is made: a missing file, a folder, an unreadable or empty file,
+ * a header that cannot be read or lacks a column is one InputError, and nothing is written.
  */
-export async function openExplainBatch(job: ExplainBatchJob): Promise<CsvReader> {
+export async function openExplainBatch(job: ExplainBatchJob): Promise<{ reader: CsvReader; columns: ColumnMap }> {
   const label = batchLabel(job);
-  const reader = readCsv(job.csvIn, { label });
+  const reader = readCsv(job.csvIn, { label, extraCells: "ignore" });
   try {
-    checkHeader(await reader.header(), label);
+    const header = await reader.header();
+    const marked = header.find((c) => bomInName(c) !== "");
+    if (marked !== undefined) throw new InputError(`${label}: the header has the unknown column ${quote(marked)}${bomInName(marked)}; expected the column names without it`);
+    return { reader, columns: resolveColumns(header, job.columns, label) };
   } catch (err) {
     reader.close();
     throw err;
   }
-  return reader;
 }
 
-/** Streams the batch: one row in, one row out through `events`; a bad row is skipped or stops the run (job.onBadRow). */
-export async function runExplainBatch(job: ExplainBatchJob, reader: CsvReader, events: BatchEvents): Promise<BatchSummary> {
+interface Group {
+  readonly pitcher: string;
+  readonly pitch: string;
+  readonly hand: string;
+  readonly view: string;
+  readonly acc: PitchTypeAccumulator;
+  readonly points: ReportPoint[];
+}
+
+/**
+ * Streams the batch: rows in blocks through the runner, out through `events` in file
+ * order; a bad row is skipped or stops the run (job.onBadRow), the rows before it kept.
+ */
+export async function runExplainBatch(job: ExplainBatchJob, opened: { reader: CsvReader; columns: ColumnMap }, events: BatchEvents): Promise<BatchSummary> {
+  const { reader, columns } = opened;
   const label = batchLabel(job);
+  const wantGroups = job.summary !== undefined || job.report !== undefined || job.reportSvg !== undefined;
+  const threads = job.threads === "auto" ? autoThreads(reader.progress().totalBytes) : job.threads;
+  const runner = await blockRunner(job.settings, threads);
+  const groups: Group[] = [];
+  const groupIndex = new Map<string, number>();
+  const explainer = wantGroups ? explainerFor(job.settings) : undefined;
   let done = 0;
   let skipped = 0;
   let stoppedAt: string | undefined;
-  for await (const item of reader) {
-    let row;
-    try {
-      if (isBadRecord(item)) throw new InputError(item.error);
-      row = rowPitch(item.cells, item.line, label);
-    } catch (err) {
-      if (!(err instanceof InputError || err instanceof RangeError)) throw err;
-      const message = err instanceof RangeError ? `${label} line ${item.line}: ${err.message}` : err.message;
-      if (job.onBadRow === "stop") {
-        stoppedAt = message;
-        break;
+  type Pending = { rows: BatchRow[]; lines: number[]; groups: number[]; result: Promise<BlockResult> };
+  const pending: Pending[] = [];
+  let block: { rows: BatchRow[]; lines: number[]; groups: number[] } = { rows: [], lines: [], groups: [] };
+
+  const finish = async (p: Pending) => {
+    const r = await p.result;
+    for (const s of r.sums) groups[s.group].acc.addSums(s.sums);
+    for (let i = 0; i < p.rows.length; i++) {
+      const row = p.rows[i];
+      const e = r.explanations[i];
+      const g = p.groups[i];
+      if (g >= 0) {
+        const grp = groups[g];
+        grp.acc.addThrow(r.fits[i]);
+        if (grp.points.length < REPORT_POINTS) {
+          grp.points.push({
+            observed: { armSideIn: row.moveArmIn, upIn: row.moveUpIn },
+            predicted: armUp(e.predicted),
+            spinMinutes: e.direction.spinBased?.minutes ?? null,
+            observedMinutes: e.direction.observed?.minutes ?? null,
+          });
+        }
       }
-      skipped++;
-      events.skipped(message);
-      continue;
+      await events.row({ line: p.lines[i], echo: row.echo, moveArmIn: row.moveArmIn, moveUpIn: row.moveUpIn, numbers: explanationNumbers(e) });
+      done++;
     }
-    const e = job.explainer.explain({ pitch: row.pitch, observedArmSideM: row.moveArmIn * M_PER_IN, observedUpM: row.moveUpIn * M_PER_IN });
-    await events.row({ line: item.line, pitcher: row.label[0], pitch: row.label[1], moveArmIn: row.moveArmIn, moveUpIn: row.moveUpIn, numbers: explanationNumbers(e) });
-    done++;
     events.progress(done, reader.progress());
+  };
+  const send = async () => {
+    if (block.rows.length === 0) return;
+    const packed: PackedRow[] = block.rows.map((r, i) => ({ pitch: r.pitch, observedArmSideM: r.moveArmIn * M_PER_IN, observedUpM: r.moveUpIn * M_PER_IN, group: block.groups[i] }));
+    pending.push({ ...block, result: runner.run(packRows(packed), wantGroups) });
+    // a rejected block is awaited in order below; keep it from being reported unhandled meanwhile
+    pending[pending.length - 1].result.catch(() => {});
+    block = { rows: [], lines: [], groups: [] };
+    while (pending.length >= Math.max(1, runner.threads) * IN_FLIGHT_PER_THREAD) await finish(pending.shift()!);
+  };
+  try {
+    for await (const item of reader) {
+      let row: BatchRow;
+      try {
+        if (isBadRecord(item)) throw new InputError(item.error);
+        row = readRow(item.cells, columns, item.line, label);
+      } catch (err) {
+        if (!(err instanceof InputError || err instanceof RangeError)) throw err;
+        const message = err instanceof RangeError ? `${label} line ${item.line}: ${err.message}` : err.message;
+        if (job.onBadRow === "stop") {
+          stoppedAt = message;
+          break;
+        }
+        skipped++;
+        events.skipped(message);
+        continue;
+      }
+      let g = -1;
+      if (wantGroups) {
+        const key = `${row.echo.pitcher}\u0000${row.echo.name}`;
+        const found = groupIndex.get(key);
+        if (found !== undefined) g = found;
+        else {
+          g = groups.length;
+          groupIndex.set(key, g);
+          groups.push({ pitcher: row.echo.pitcher, pitch: row.echo.name, hand: row.echo.hand, view: row.echo.view, acc: new PitchTypeAccumulator(explainer!.orientations), points: [] });
+        }
+      }
+      block.rows.push(row);
+      block.lines.push(item.line);
+      block.groups.push(g);
+      if (block.rows.length >= BLOCK_ROWS) await send();
+    }
+    await send();
+    while (pending.length) await finish(pending.shift()!);
+  } finally {
+    await runner.close();
   }
-  return { done, skipped, stoppedAt };
+  const pitchTypes = wantGroups
+    ? groups.map((g) => ({ numbers: pitchTypeNumbers(g.pitcher, g.pitch, g.hand, fitPitchType(explainer!, g.acc)), view: g.view, points: g.points }))
+    : undefined;
+  return { done, skipped, stoppedAt, threads: runner.threads, ...(pitchTypes ? { pitchTypes } : {}) };
 }

@@ -74,7 +74,10 @@ export interface PitchEcho {
   speedMph: number;
   spinRpm: number;
   tilt: string;
+  /** The tilt as given in degrees clockwise from 12:00, when it was given so. */
+  tiltDeg?: number;
   view: string;
+  /** Signed (geometry/frames.ts): positive when the axis's positive end leans toward the plate. */
   gyroDeg: number;
   efficiencyPct: number;
   want: string;

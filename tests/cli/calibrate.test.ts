@@ -199,7 +199,7 @@ describe("seam-atlas calibrate", () => {
     ["a tracked row with an unknown hand", () => {
       writeFileSync(at("hand.csv"), "hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in\nmiddle,90,2200,1:30,1,0,0,1,1\n");
       return ["--tracked", at("hand.csv"), "--fit", "scale", "--on-bad-row", "stop"];
-    }, /line 2, column hand: "hand" is "middle"; expected one of right, left/],
+    }, /line 2, column hand: "hand" is "middle"; expected right, left, R or L/],
   ];
   for (const [what, args, message] of bad) {
     it(`rejects ${what}: one line, exit 2, no file written`, () => {

@@ -27,7 +27,7 @@ const STAFF = Buffer.from(
       team: "Fuzz Club",
       pitchers: [
         { name: "Ana Ruiz", hand: "right", pitches: [{ name: "sinker", speedMph: 92, spinRpm: 2150, tilt: "1:45", gyroDeg: 10, want: "arm" }] },
-        { name: "Bo Li", hand: "left", pitches: [{ name: "slider", speedMph: 84.5, spinRpm: 2400, tilt: "2:30", view: "catcher", efficiencyPct: 40, want: "down" }] },
+        { name: "Bo Li", hand: "left", pitches: [{ name: "slider", speedMph: 84.5, spinRpm: 2400, tilt: "2:30", view: "catcher", efficiencyPct: 40, gyroSign: "pos", want: "down" }] },
       ],
     },
     null,

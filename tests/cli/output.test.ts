@@ -144,7 +144,7 @@ describe("explain's batch CSV", () => {
     expect(r.stderr.trim().split("\n")).toHaveLength(1);
     expect(r.stderr).toMatch(/^seam-atlas: stopped at --csv-in ".*stop\.csv" line 3, column "move_up_in": "NaN" is not a number; expected a number of inches \(1 row\(s\) before it written to ".*stop\.json"\)\n$/);
     const doc = JSON.parse(readFileSync(out, "utf8")); // RFC 8259: a whole document
-    expect(doc.rows.map((x: { pitcher: string }) => x.pitcher)).toEqual(["A"]);
+    expect(doc.rows.map((x: { input: { pitch: { pitcher: string } } }) => x.input.pitch.pitcher)).toEqual(["A"]);
     expect(temps(tmp)).toEqual([]);
   });
 });

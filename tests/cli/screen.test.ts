@@ -78,7 +78,7 @@ describe("seam-atlas screen", () => {
     ["wrong units", staff(`{ "name": "sinker", "speedKph": 148, "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedKph" is not read; give speedMph \(mph\)/],
     ["a number as text", staff(`{ "name": "sinker", "speedMph": "92 mph", "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedMph" must be a number of mph/],
     ["a bad tilt", staff(`{ "name": "sinker", "speedMph": 92, "spinRpm": 2150, "tilt": "13:45" }`), /line 7 .*tilt "13:45"/],
-    ["an unknown hand", `{ "name": "x", "hand": "both", "speedMph": 92, "spinRpm": 2150, "tilt": "1:45" }`, /line 1 .*"hand" is "both"; expected one of right, left/],
+    ["an unknown hand", `{ "name": "x", "hand": "both", "speedMph": 92, "spinRpm": 2150, "tilt": "1:45" }`, /line 1 .*"hand" is "both"; expected right, left, R or L/],
   ];
   for (const [what, text, message] of badFiles) {
     it(`rejects a pitch file with ${what}: one line naming the field and line, exit 2`, () => {

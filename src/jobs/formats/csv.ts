@@ -1,11 +1,22 @@
 /** Every CSV table the tool writes, built from job results (one row per record, a header first). */
 import { vectorToLatLon } from "../../../geometry/ballCoords.js";
-import { csvLine } from "../../io/csv.js";
+import { csvCellText, csvLine } from "../../io/csv.js";
 import type { ScreenReport } from "../../screening/report.js";
-import type { ExplainedRow } from "../explain.js";
+import { M_PER_FT } from "../../../geometry/units.js";
+import type { ExplainedRow, PitchTypeNumbers } from "../explain.js";
 
-/** One RFC 4180 record without its line end (formula cells neutralised: io/csvWriter.ts). */
-const csvRow = (values: readonly unknown[]) => csvLine(values).slice(0, -1);
+const NEEDS_QUOTES = /[",\r\n]/;
+
+/**
+ * One RFC 4180 record without its line end (formula cells neutralised: io/csvWriter.ts).
+ * A record none of whose cells needs quotes is the cells joined by commas, the bytes
+ * csv-stringify writes for it; only the others go through csv-stringify (a batch writes
+ * thousands of rows a second).
+ */
+const csvRow = (values: readonly unknown[]) => {
+  const cells = values.map(csvCellText);
+  return cells.some((c) => NEEDS_QUOTES.test(c)) ? csvLine(values).slice(0, -1) : cells.join(",");
+};
 
 const SCREEN_COLUMNS = [
   "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "scoreIn", "seamArmSideIn", "seamVerticalIn", "seamClock",
@@ -29,22 +40,33 @@ export function screenCsv(reports: readonly ScreenReport[]): string {
   return rows.join("\n") + "\n";
 }
 
-/** The batch's CSV header for `top` matches per row. */
+/** Rounded for people: 0.1 in, 0.1 deg (and mph, percent), no minus on zero. */
+const r1 = (x: number | null) => (x === null ? "" : Math.round(x * 10) / 10 || 0);
+const r0 = (x: number | null) => (x === null ? "" : Math.round(x) || 0);
+
+/** The batch's CSV header for `top` matches per row (our keys; the inputs echoed first, normalised). */
 export function explainCsvHeader(top: number): string {
   return csvRow([
-    "line", "pitcher", "pitch", "magnus_arm_in", "magnus_up_in", "residual_arm_in", "residual_up_in",
+    "line", "pitcher", "pitch", "hand", "speed_mph", "spin_rpm", "tilt", "view", "gyro_deg", "efficiency_pct", "observed_arm_in", "observed_up_in",
+    "basis", "window_ft", "predicted_arm_in", "predicted_up_in", "magnus_arm_in", "magnus_up_in", "drag_arm_in", "drag_up_in", "residual_arm_in", "residual_up_in",
+    "spin_clock", "observed_clock", "gap_min", "gap_deg", "gap_flag", "reach_in", "beyond_reach",
     ...Array.from({ length: top }, (_, i) => [`match${i + 1}_lat_deg`, `match${i + 1}_lon_deg`, `match${i + 1}_landmark`, `match${i + 1}_seam_arm_in`, `match${i + 1}_seam_up_in`, `match${i + 1}_fit_error_in`]).flat(),
   ]) + "\n";
 }
 
 export function explainCsvRow(r: ExplainedRow): string {
   const j = r.numbers;
+  const e = r.echo;
   return (
     csvRow([
-      r.line, r.pitcher, r.pitch, j.magnus.armSideIn, j.magnus.upIn, j.residual.armSideIn, j.residual.upIn,
+      r.line, e.pitcher, e.name, e.hand, r1(e.speedMph), r0(e.spinRpm), e.tilt, e.view, r1(e.gyroDeg), r1(e.efficiencyPct), r1(r.moveArmIn), r1(r.moveUpIn),
+      j.basis, j.windowFt === null ? "" : r1(j.windowFt), r1(j.predicted.armSideIn), r1(j.predicted.upIn), r1(j.magnus.armSideIn), r1(j.magnus.upIn),
+      r1(j.drag.armSideIn), r1(j.drag.upIn), r1(j.residual.armSideIn), r1(j.residual.upIn),
+      j.direction.spinBased ?? "", j.direction.observed ?? "", r0(j.direction.gapMinutes), r1(j.direction.gapDeg), j.direction.flagged ? "yes" : "no",
+      r1(j.reach.alongResidualIn), j.reach.beyondReach ? "yes" : "no",
       ...j.matches.flatMap((m) => {
         const ll = vectorToLatLon(m.axis);
-        return [ll.latDeg, ll.lonDeg, m.landmark.name, m.seam.armSideIn, m.seam.upIn, m.fitErrorIn];
+        return [r1(ll.latDeg), r1(ll.lonDeg), m.landmark.name, r1(m.seam.armSideIn), r1(m.seam.upIn), r1(m.fitErrorIn)];
       }),
     ]) + "\n"
   );
@@ -69,4 +91,23 @@ export function calibrateResidualsCsv(o: CalibrateOutcome): string {
     out.push(csvRow([row.kind, row.line, row.label, ...(row.kind === "lab" ? [...values, ...blank] : [...blank, ...values])]));
   }
   return out.join("\n") + "\n";
+}
+
+/** The per-pitch-type summary as CSV: one row per pitch type and orientation (best first). */
+export function explainSummaryCsv(settings: { basis: string; windowStartM: number }, pitchTypes: readonly PitchTypeNumbers[]): string {
+  const rows = [
+    csvRow([
+      "pitcher", "pitch", "hand", "rows", "basis", "window_ft", "rank", "lat_deg", "lon_deg", "landmark", "fit_error_in", "seam_arm_in", "seam_up_in",
+      "residual_arm_in", "residual_up_in", "residual_sd_arm_in", "residual_sd_up_in", "reach_in", "beyond_reach",
+    ]),
+  ];
+  const windowFt = settings.basis === "trade" ? r1(settings.windowStartM / M_PER_FT) : "";
+  for (const p of pitchTypes) {
+    const common = [r1(p.residual.armSideIn), r1(p.residual.verticalIn), r1(p.residual.sdArmSideIn), r1(p.residual.sdVerticalIn), r1(p.reach.alongResidualIn), p.reach.beyondReach ? "yes" : "no"];
+    for (const o of p.orientations) {
+      const ll = vectorToLatLon(o.axis);
+      rows.push(csvRow([p.pitcher, p.pitch, p.hand, p.rows, settings.basis, windowFt, o.rank, r1(ll.latDeg), r1(ll.lonDeg), o.landmark.name, r1(o.fitErrorIn), r1(o.seam.armSideIn), r1(o.seam.upIn), ...common]));
+    }
+  }
+  return rows.join("\n") + "\n";
 }

@@ -8,7 +8,9 @@ import { DEG, M_PER_FT, M_PER_IN, PA_PER_HPA } from "../../../geometry/units.js"
 import { TOOL_NAME, TOOL_VERSION } from "../../version.js";
 import type { Measurement } from "../../sampling/measure.js";
 import type { ScreenResult } from "../../screening/screen.js";
-import type { ExplainOneJob, ExplainedRow, ExplanationNumbers } from "../explain.js";
+import { basisNumbers, type ExplainOneJob, type ExplainedRow, type ExplanationNumbers, type PitchTypeNumbers } from "../explain.js";
+import type { ExplainSettings } from "../explainBatch.js";
+import type { PitchEcho } from "../../screening/report.js";
 import { flightNumbers, type FlightOutcome } from "../flight.js";
 import { FORCE_TIMELINE_PHASES, type ForceResult } from "../force.js";
 import type { LandmarksResult } from "../landmarks.js";
@@ -133,21 +135,37 @@ export function flightDocument(o: FlightOutcome) {
   };
 }
 
+/** What every explain document says about its settings: basis, window, model, grid. */
+function explainSettingsJson(settings: ExplainSettings) {
+  return { ...basisNumbers(settings), model: { name: settings.profile.name, hash: settings.profile.hash }, gridDeg: settings.gridDeg, gapFlagMinutes: settings.gapFlagMinutes };
+}
+
+/** A pitch's echo with the observed movement (inches on the basis). */
+function explainInput(echo: PitchEcho, moveArmIn: number, moveUpIn: number) {
+  return { pitch: echo, observed: { armSideIn: moveArmIn, upIn: moveUpIn } };
+}
+
 export function explainDocument(job: ExplainOneJob, n: ExplanationNumbers) {
-  return { ...head("explain"), input: { pitch: job.echo, moveArmIn: job.moveArmIn, moveUpIn: job.moveUpIn }, ...n };
+  return { ...head("explain"), settings: explainSettingsJson(job.settings), input: explainInput(job.echo, job.moveArmIn, job.moveUpIn), ...n };
 }
 
 /** The opening of a streamed batch document; rows follow, comma-separated, then `batchJsonClose`. */
-export function batchJsonOpen(): string {
-  return `{"tool":${JSON.stringify(TOOL_NAME)},"version":${JSON.stringify(TOOL_VERSION)},"command":"explain","rows":[\n`;
+export function batchJsonOpen(settings: ExplainSettings): string {
+  const h = JSON.stringify({ ...head("explain"), settings: explainSettingsJson(settings) });
+  return `${h.slice(0, -1)},"rows":[\n`;
 }
 
 export function batchJsonRow(r: ExplainedRow, first: boolean): string {
-  return `${first ? "" : ",\n"}${JSON.stringify({ line: r.line, pitcher: r.pitcher, pitch: r.pitch, moveArmIn: r.moveArmIn, moveUpIn: r.moveUpIn, ...r.numbers })}`;
+  return `${first ? "" : ",\n"}${JSON.stringify({ line: r.line, input: explainInput(r.echo, r.moveArmIn, r.moveUpIn), ...r.numbers })}`;
 }
 
 export function batchJsonClose(): string {
   return `\n]}\n`;
+}
+
+/** The per-pitch-type summary (--summary FILE.json). */
+export function explainSummaryDocument(settings: ExplainSettings, pitchTypes: readonly PitchTypeNumbers[], rows: { done: number; skipped: number }) {
+  return { ...head("explain"), summary: "per pitcher and pitch type", settings: explainSettingsJson(settings), rows, pitches: pitchTypes };
 }
 
 export function forceDocument(r: ForceResult) {

@@ -163,14 +163,26 @@ export function flightText(o: FlightOutcome): string {
 }
 
 export function explainText(job: ExplainOneJob, n: ExplanationNumbers): string {
+  const e = job.echo;
+  const basis = n.basis === "trade" ? `trade basis: induced vertical break and horizontal break over the last ${fixed(n.windowFt ?? 0, 0)} ft` : "release basis: at the plate against the spinless flight";
+  const d = n.direction;
+  const gap =
+    d.gapMinutes === null
+      ? "-"
+      : `${signed(d.gapMinutes, 0)} min (${signed(d.gapDeg ?? 0, 1)} deg)${d.flagged ? `: more than ${fixed(job.settings.gapFlagMinutes, 0)} min, a sign of seam effects` : ""}`;
   const lines = [
+    `  pitch          ${e.pitcher ? `${e.pitcher}, ` : ""}${e.name}: ${e.hand}, ${fixed(e.speedMph, 1)} mph, ${fixed(e.spinRpm, 0)} rpm, tilt ${e.tilt} (${e.view}'s view), gyro ${signed(e.gyroDeg, 1)} deg`,
+    `  movement       ${basis}`,
     `  observed       ${formatMovementIn(job.moveArmIn)} in arm side, ${formatMovementIn(job.moveUpIn)} in up (gravity removed)`,
-    `  spin predicts  ${formatMovementIn(n.magnus.armSideIn)} in arm side, ${formatMovementIn(n.magnus.upIn)} in up (Magnus)`,
-    `  left over      ${formatMovementIn(n.residual.armSideIn)} in arm side, ${formatMovementIn(n.residual.upIn)} in up`,
+    `  spin predicts  ${formatMovementIn(n.predicted.armSideIn)} in arm side, ${formatMovementIn(n.predicted.upIn)} in up` +
+      (n.basis === "trade" ? ` (Magnus ${formatMovementIn(n.magnus.armSideIn)} / ${formatMovementIn(n.magnus.upIn)}, drag's own ${formatMovementIn(n.drag.armSideIn)} / ${formatMovementIn(n.drag.upIn)})` : " (Magnus)"),
+    `  left over      ${formatMovementIn(n.residual.armSideIn)} in arm side, ${formatMovementIn(n.residual.upIn)} in up` +
+      (n.reach.beyondReach ? `: beyond what any seam orientation reaches (at most ${fixed(n.reach.alongResidualIn, 1)} in that way)` : ""),
+    `  direction      spin-based ${d.spinBased ?? "-"}, observed ${d.observed ?? "-"} (${e.view}'s view); gap ${gap}`,
     `  seam orientations that would give it (best first):`,
     ...n.matches.map(
       (m) =>
-        `    #${m.rank}  ${m.latLon.padEnd(14)} near ${m.landmark.name} (${fixed(m.landmark.angleDeg, 0)} deg): seam ${formatMovementIn(m.seam.armSideIn)} in arm side, ${formatMovementIn(m.seam.upIn)} in up; misses by ${fixed(m.fitErrorIn, 2)} in`,
+        `    #${m.rank}  ${m.latLon.padEnd(14)} near ${m.landmark.name} (${fixed(m.landmark.angleDeg, 0)} deg): seam ${formatMovementIn(m.seam.armSideIn)} in arm side, ${formatMovementIn(m.seam.upIn)} in up; misses by ${fixed(m.fitErrorIn, 1)} in`,
     ),
   ];
   return lines.join("\n") + "\n";
