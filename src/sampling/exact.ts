@@ -17,8 +17,9 @@
  *
  * The Magnus split m = w x v / |w x v| gives q . m = rho sin(psi_q - phi): odd about
  * phi' = 0, while the band set is even. Hence, exactly, magnusPlus = magnusMinus =
- * seamInBand / 2 and the asymmetry has no Magnus component (alongMagnus = 0): the
- * time-averaged seam picture can only push along +-a, across the Magnus direction.
+ * seamInBand / 2 and the occupancy asymmetry has no Magnus component (alongMagnus = 0):
+ * the turn-averaged band occupancy splits only along +-a. (It is seam occupancy, not
+ * the push: the seam-force model, src/physics/seamModel/, gives a force along both.)
  *
  * The seam integral is the periodic trapezoid rule on the arc-length samples.
  *
