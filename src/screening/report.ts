@@ -14,7 +14,7 @@ import { findLandmarks } from "../../geometry/landmarks.js";
 import { angleBetween } from "../../geometry/vec.js";
 import { FINGER_PATTERNS, pitchKindFromName, type PitchKind } from "./hand.js";
 import { turnFromHold } from "./holdTurn.js";
-import { REACH_FLOOR, type ScreenResult, type ScreenedOrientation } from "./screen.js";
+import { REACH_FLOOR, type RankBy, type ScreenResult, type ScreenedOrientation } from "./screen.js";
 
 export interface FingerReport {
   finger: string;
@@ -89,7 +89,7 @@ export interface ScreenReport {
     settings: {
       gridSpacingDeg: number;
       spreadDeg: number;
-      rank: string;
+      rank: RankBy;
       top: number;
       fingerSpacingIn: number;
       seamShape: number;
@@ -192,16 +192,9 @@ function orientationReport(r: ScreenResult, o: ScreenedOrientation, rank?: numbe
   };
 }
 
-/** Best seam movement toward each of the four directions over the grid (the screen's per-cell movement). */
+/** Best seam movement toward each of the four directions (the screen's reach: grid and flown grips). */
 function reachByDirection(r: ScreenResult): ScreenReport["reach"]["directions"] {
-  let arm = 0, glove = 0, up = 0, down = 0;
-  for (let i = 0; i < r.armSideM.length; i++) {
-    const a = r.armSideM[i], v = r.verticalM[i];
-    if (a > arm) arm = a;
-    if (-a > glove) glove = -a;
-    if (v > up) up = v;
-    if (-v > down) down = -v;
-  }
+  const { arm, glove, up, down } = r.reach.directions;
   const strongest = r.reach.strongestM;
   const one = (m: number) => ({ bestTowardIn: m / M_PER_IN, pct: strongest > 0 ? (100 * m) / strongest : 0 });
   return { arm: one(arm), glove: one(glove), up: one(up), down: one(down) };

@@ -136,7 +136,13 @@ export interface ScreenResult {
   /** Seam movement per unit coefficient along a and along Magnus (trade basis), m. */
   readonly unit: { readonly across: TradeBreak; readonly alongMagnus: TradeBreak };
   /** Best movement toward the wanted direction over the grid, as a share of the strongest movement anywhere (1 for "any"). */
-  readonly reach: { readonly wantFraction: number; readonly bestTowardM: number; readonly strongestM: number };
+  readonly reach: {
+    readonly wantFraction: number;
+    readonly bestTowardM: number;
+    readonly strongestM: number;
+    /** The best seam movement toward each of the four directions, m (0 when none points that way). */
+    readonly directions: { readonly arm: number; readonly glove: number; readonly up: number; readonly down: number };
+  };
   readonly candidates: readonly ScreenedOrientation[];
   readonly references: readonly ScreenedOrientation[];
   readonly grid: SphereGrid;
@@ -301,6 +307,31 @@ function coverFor(b: number): CoverModel {
   return coverCache.get(b, () => coverModel(b));
 }
 
+/**
+ * How far the seams reach: the extremes of the seam movement over the grid (the linear
+ * map) and over the orientations flown in full (the listed grips and holds), so that no
+ * printed grip ever beats the "strongest" it is compared with.
+ */
+function reachOf(want: Want, armSideM: Float64Array, verticalM: Float64Array, flown: readonly ScreenedOrientation[]): ScreenResult["reach"] {
+  let strongest = 0, bestToward = 0, arm = 0, glove = 0, up = 0, down = 0;
+  const take = (a: number, v: number) => {
+    strongest = Math.max(strongest, Math.hypot(a, v));
+    bestToward = Math.max(bestToward, scoreOf(want, a, v));
+    arm = Math.max(arm, a);
+    glove = Math.max(glove, -a);
+    up = Math.max(up, v);
+    down = Math.max(down, -v);
+  };
+  for (let i = 0; i < armSideM.length; i++) take(armSideM[i], verticalM[i]);
+  for (const o of flown) take(o.seamMovement.armSideM, o.seamMovement.verticalM);
+  return {
+    wantFraction: want === "any" ? 1 : strongest > 0 ? bestToward / strongest : 0,
+    bestTowardM: bestToward,
+    strongestM: strongest,
+    directions: { arm, glove, up, down },
+  };
+}
+
 /** Screens one pitch. Throws RangeError for an invalid pitch or settings. */
 export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResult {
   assertPitch(pitch);
@@ -330,22 +361,12 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
   const armSideM = new Float64Array(n);
   const verticalM = new Float64Array(n);
   const scores = new Float64Array(n);
-  let strongest = 0;
-  let bestToward = -Infinity;
-  const wantDir = wantVector(pitch.want);
   for (let i = 0; i < n; i++) {
     const [arm, up] = linearMovement(ctx, map.across[i], map.alongMagnus[i]);
     armSideM[i] = arm;
     verticalM[i] = up;
     scores[i] = scoreOf(pitch.want, arm, up);
-    strongest = Math.max(strongest, Math.hypot(arm, up));
-    bestToward = Math.max(bestToward, scores[i]);
   }
-  const reach = {
-    wantFraction: wantDir === null ? 1 : strongest > 0 ? Math.max(0, bestToward) / strongest : 0,
-    bestTowardM: Math.max(0, bestToward),
-    strongestM: strongest,
-  };
 
   // local maxima, one per orbit of the rotations
   const rep = orbitRepresentatives(grid, true);
@@ -380,6 +401,7 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
   const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
   const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));
+  const reach = reachOf(pitch.want, armSideM, verticalM, [...described, ...references]);
   // the occupancy map is read only by the full sphere-map output (--map): made on first use
   let occupancy: SphereMap | undefined;
   return {

@@ -23,7 +23,7 @@ import { pdfOfPages, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
 import { PT_PER_IN } from "./pdfScene.js";
 import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
-import { CAUTION_LONG, CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareRow, HOLD_WORDS, movementWords, pitchLabel, pitchSummary, reachWords, SEAM_PICTURE, turnSentence, WANT_WORDS } from "./words.js";
+import { CAUTION_LONG, CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareRow, HOLD_WORDS, movementWords, pitchLabel, pitchSummary, RANK_WORDS, reachWords, robustnessWords, SEAM_PICTURE, turnSentence, WANT_WORDS } from "./words.js";
 import { MODEL_STORY } from "./story.js";
 
 export interface AtlasPitch {
@@ -72,7 +72,7 @@ function bestLine(r: ScreenReport): string {
   const best = r.candidates[0];
   if (r.reach.outOfReach || !best) return reachWords(r);
   const turn = best.fromHold ? ` ${turnSentence(best.fromHold)}` : "";
-  return `Best grip: ${movementWords(r, best)}; robustness ${best.robustness.meanIn.toFixed(1)} / ${best.robustness.p10In.toFixed(1)} in.${turn}`;
+  return `Best grip: ${movementWords(r, best)}; ${robustnessWords(r, best)}.${turn}`;
 }
 
 function coverPages(input: AtlasInput): Page[] {
@@ -162,7 +162,7 @@ function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: numbe
   const rows = [...(r.reach.outOfReach ? [] : r.candidates.map((o) => compareRow(`grip ${o.rank}`, o))), ...r.references.map((o) => compareRow(`${o.reference} hold`, o))];
   y += setText(s, COMPARE_CAPTION, { ...nb, y, h: f.sizePt * 3 }, { sizePt: f.sizePt - 1.5, fill: "#444444" }).heightPt + f.sizePt * 0.3;
   y += setTable(s, COMPARE_COLUMNS(pp.want), rows, { ...nb, y, h: nb.y + nb.h - y }, f.sizePt - 1) + f.sizePt * 0.4;
-  setText(s, `${r.grid.count.toLocaleString("en-US")} spin-axis positions ${r.input.settings.gridSpacingDeg}\u00b0 apart; ${r.maximaFound} distinct best grips found; ranked by ${r.input.settings.rank}.`, { ...nb, y, h: nb.y + nb.h - y }, { sizePt: f.sizePt - 1.5, fill: "#555555" });
+  setText(s, `${r.grid.count.toLocaleString("en-US")} spin-axis positions ${r.input.settings.gridSpacingDeg}\u00b0 apart; ${r.maximaFound} distinct best grips found; ranked by ${RANK_WORDS[r.input.settings.rank]}.`, { ...nb, y, h: nb.y + nb.h - y }, { sizePt: f.sizePt - 1.5, fill: "#555555" });
   return page;
 }
 

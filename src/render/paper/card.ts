@@ -7,6 +7,7 @@
  * rasterised to PNG, so the three read alike.
  */
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
+import { fixed } from "../numbers.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import type { Box, Layout } from "./layouts.js";
 import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
@@ -50,7 +51,7 @@ export function outOfReachContent(report: ScreenReport): CardContent {
     want: report.input.pitch.want,
     compare: compareRows(report),
     ownRow: -1,
-    technical: `Technical: reach ${report.reach.wantPct.toFixed(1)} % of the strongest seam movement (${report.reach.strongestIn.toFixed(2)} in); below 5 % a direction counts as out of reach.`,
+    technical: `Technical: reach ${fixed(report.reach.wantPct, 1)} % of the strongest seam movement (${fixed(report.reach.strongestIn, 1)} in); below 5 % a direction counts as out of reach.`,
   };
 }
 

@@ -12,6 +12,7 @@
  * two close seams. Ball coordinates and landmark names go on a technical line only.
  */
 import { fixed, formatMovementIn } from "../numbers.js";
+import type { RankBy } from "../../screening/screen.js";
 import type { FingerReport, HoldTurnReport, OrientationReport, ScreenReport } from "../../screening/report.js";
 
 /** The safety caution every card, sheet, atlas and handout carries (our wording). */
@@ -157,8 +158,24 @@ export function technicalLine(o: OrientationReport): string {
 /** The push of the seams at the plate: "+5.4 in arm side, -6.7 in up (toward 7:30, pitcher's view)". */
 export function movementWords(r: ScreenReport, o: OrientationReport): string {
   const m = o.seamMovement;
-  return `${formatMovementIn(m.armSideIn)} in arm side, ${formatMovementIn(m.verticalIn)} in up${m.clock ? ` (toward ${m.clock}, ${r.input.pitch.view}'s view)` : ""}`;
+  const side = `${fixed(Math.abs(m.armSideIn), 1)} in ${m.armSideIn < 0 ? "glove side" : "arm side"}`;
+  const vertical = `${fixed(Math.abs(m.verticalIn), 1)} in ${m.verticalIn < 0 ? "down" : "up"}`;
+  return `${side}, ${vertical}${m.clock ? ` (toward ${m.clock}, ${r.input.pitch.view}'s view)` : ""}`;
 }
+
+/** How forgiving a grip is, in words: its seam movement toward the wanted direction with the axis off (the screen's robustness). */
+export function robustnessWords(r: ScreenReport, o: OrientationReport): string {
+  const want = r.input.pitch.want;
+  const what = want === "any" ? "of seam movement" : want === "arm" || want === "glove" ? `toward the ${DIRECTION_NAMES[want]}` : DIRECTION_NAMES[want];
+  return `with the axis about ${fixed(r.input.settings.spreadDeg, 0)}\u00b0 off it keeps ${fixed(o.robustness.meanIn, 1)} in ${what} on average, ${fixed(o.robustness.p10In, 1)} in at the 10th percentile`;
+}
+
+/** How the grips were ranked (the screen's --rank), in words. */
+export const RANK_WORDS: Record<RankBy, string> = {
+  blend: "the mean of each grip's seam movement toward the wanted direction and its 10th percentile with the axis off",
+  strength: "seam movement toward the wanted direction",
+  robust: "the 10th percentile of the seam movement toward the wanted direction with the axis off",
+};
 
 /** The comparison table's columns (inches; the caption above the table says so). */
 export const COMPARE_COLUMNS = (want: string) =>
