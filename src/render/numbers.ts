@@ -16,9 +16,9 @@ export function signed(x: number, digits = 5): string {
   return s.startsWith("-") ? s : `+${s}`;
 }
 
-/** A score or push component in thousandths of the seam-asymmetry unit, 2 decimals, signed. */
-export function formatScore(x: number): string {
-  return signed(1000 * x, 2);
+/** A number rounded as `fixed` writes it (for CSV cells people read): the same digits, no minus zero. */
+export function rounded(x: number, digits: number): number {
+  return Number(fixed(x, digits));
 }
 
 /** Inches with 2 decimals. */

@@ -31,17 +31,26 @@ describe("seam-atlas screen", () => {
     expect(j.input.windowFt).toBe(50);
   });
 
-  it("gives the same numbers in CSV, the table and JSON", () => {
+  it("gives the same numbers in CSV, the table and JSON: the CSV and the table as the terminal rounds them (0.1 in), JSON in full", () => {
     const j = JSON.parse(runCli(["screen", ...SINKER, "--grid", "4", "--json"]).stdout);
     const csv = runCli(["screen", ...SINKER, "--grid", "4", "--csv"]).stdout.trim().split("\n");
-    expect(csv[0].split(",")).toContain("scoreIn");
+    const head = csv[0].split(",");
+    expect(head).toEqual(expect.arrayContaining(["toward_want_in", "seam_arm_in", "seam_up_in", "robust_p10_in", "lat_deg", "model_hash"]));
     const first = csv[1].split(",");
-    const col = csv[0].split(",").indexOf("scoreIn");
-    expect(Number(first[col])).toBe(j.candidates[0].score);
+    const c = j.candidates[0];
+    const at = (key: string) => first[head.indexOf(key)];
+    expect(at("row")).toBe("candidate");
+    expect(at("rank")).toBe("1");
+    expect(at("toward_want_in")).toBe(Number(c.score.toFixed(1)).toString());
+    expect(Math.abs(Number(at("toward_want_in")) - c.score)).toBeLessThanOrEqual(0.05 + 1e-12);
+    expect(Math.abs(Number(at("seam_arm_in")) - c.seamMovement.armSideIn)).toBeLessThanOrEqual(0.05 + 1e-12);
+    expect(at("seam_clock")).toBe(c.seamMovement.clock);
     const table = runCli(["screen", ...SINKER, "--grid", "4"]).stdout;
-    const shown = j.candidates[0].score.toFixed(1);
-    expect(table).toContain(`${j.candidates[0].score >= 0 ? "+" : ""}${shown}`);
-    expect(table).toContain(j.candidates[0].seamMovement.clock);
+    const shown = c.score.toFixed(1);
+    expect(table).toContain(`${c.score >= 0 ? "+" : ""}${shown}`);
+    expect(table).toContain(c.seamMovement.clock);
+    // the reference holds follow the candidates, named in the row column
+    expect(csv.slice(1).map((l) => l.split(",")[head.indexOf("row")]).slice(-2)).toEqual(["four-seam", "two-seam"]);
   });
 
   it("screens the demo staff from its file and writes the sphere maps, one per pitch, named PITCHER-PITCH", () => {

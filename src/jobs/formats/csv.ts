@@ -1,6 +1,7 @@
 /** Every CSV table the tool writes, built from job results (one row per record, a header first). */
 import { vectorToLatLon } from "../../../geometry/ballCoords.js";
 import { csvCellText, csvLine } from "../../io/csv.js";
+import { rounded } from "../../render/numbers.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { M_PER_FT } from "../../../geometry/units.js";
 import type { ExplainedRow, PitchTypeNumbers } from "../explain.js";
@@ -19,20 +20,27 @@ const csvRow = (values: readonly unknown[]) => {
 };
 
 const SCREEN_COLUMNS = [
-  "pitcher", "pitch", "kind", "rank", "latDeg", "lonDeg", "landmark", "landmarkAngleDeg", "scoreIn", "seamArmSideIn", "seamVerticalIn", "seamClock",
-  "robustMeanIn", "robustP10In", "rankScoreIn", "crossingsPerRevolution", "seamInBand", "coefficientAcross", "coefficientAlongMagnus", "modelHash",
+  "pitcher", "pitch", "hand", "want", "row", "rank", "lat_deg", "lon_deg", "landmark", "landmark_off_deg",
+  "seam_arm_in", "seam_up_in", "seam_clock", "toward_want_in", "robust_mean_in", "robust_p10_in", "rank_score_in",
+  "passes_per_turn", "seam_in_band_pct", "coef_across", "coef_along_magnus", "model", "model_hash",
 ];
 
+/**
+ * The screen as CSV: one row per candidate (`row` candidate, with its rank) and per
+ * reference hold (`row` four-seam or two-seam), rounded for people as the terminal
+ * shows them (inches and degrees to 0.1, coefficients to 0.0001); JSON keeps full precision.
+ */
 export function screenCsv(reports: readonly ScreenReport[]): string {
   const rows = [csvRow(SCREEN_COLUMNS)];
   for (const r of reports) {
     const p = r.input.pitch;
     for (const o of [...r.candidates, ...r.references]) {
+      const m = o.seamMovement;
       rows.push(
         csvRow([
-          p.pitcher, p.name, o.reference ?? "candidate", o.rank ?? "", o.latLon.latDeg, o.latLon.lonDeg, o.landmark.name, o.landmark.angleDeg, o.score,
-          o.seamMovement.armSideIn, o.seamMovement.verticalIn, o.seamMovement.clock, o.robustness.meanIn, o.robustness.p10In, o.rankScore,
-          o.crossingsPerRevolution, o.occupancy.seamInBand, o.seamForce.across, o.seamForce.alongMagnus, r.input.model.hash,
+          p.pitcher, p.name, p.hand, p.want, o.reference ?? "candidate", o.rank ?? "", r1(o.latLon.latDeg), r1(o.latLon.lonDeg), o.landmark.name, r1(o.landmark.angleDeg),
+          r1(m.armSideIn), r1(m.verticalIn), m.clock, r1(o.score), r1(o.robustness.meanIn), r1(o.robustness.p10In), r1(o.rankScore),
+          o.crossingsPerRevolution, r1(100 * o.occupancy.seamInBand), rounded(o.seamForce.across, 4), rounded(o.seamForce.alongMagnus, 4), r.input.model.name, r.input.model.hash,
         ]),
       );
     }
@@ -40,9 +48,9 @@ export function screenCsv(reports: readonly ScreenReport[]): string {
   return rows.join("\n") + "\n";
 }
 
-/** Rounded for people: 0.1 in, 0.1 deg (and mph, percent), no minus on zero. */
-const r1 = (x: number | null) => (x === null ? "" : Math.round(x * 10) / 10 || 0);
-const r0 = (x: number | null) => (x === null ? "" : Math.round(x) || 0);
+/** Rounded for people as render/numbers.ts writes them (0.1 in, 0.1 deg, mph, percent; whole rpm and minutes). */
+const r1 = (x: number | null) => (x === null ? "" : rounded(x, 1));
+const r0 = (x: number | null) => (x === null ? "" : rounded(x, 0));
 
 /** The batch's CSV header for `top` matches per row (our keys; the inputs echoed first, normalised). */
 export function explainCsvHeader(top: number): string {
