@@ -166,12 +166,12 @@ export function handoutPages(input: HandoutInput): Page[] {
   setText(p2.scene, "Trying a new grip safely", pt(m, y, w, 0.45), { sizePt: f.titleSizePt - 2, weight: "bold" });
   y += 0.5;
   y = paragraphs(p2, L, y, [
-    "-  Start easy. Learn the grip playing catch at short distance and low effort. Watch how the ball moves before you add speed.",
-    "-  Build up slowly. Add distance, effort and number of throws over weeks, not in one session. Keep your usual rest days.",
-    "-  Listen to your arm. Stop at pain, tingling, numbness or a loss of control, and tell your coach.",
-    "-  Get help. Work with a qualified pitching coach, and see a licensed athletic trainer, physiotherapist or physician about any arm trouble.",
-    "-  Play by the rules. Use a legal ball and legal grips for your league. Never scratch, cut, mark or otherwise change the ball.",
-    "-  Remember what the model is. These pictures show a simple model of the air round a ball, not a measurement of your ball or your arm. Your league's rules and your coaches' and medical staff's advice come first.",
+    "\u2022  Start easy. Learn the grip playing catch at short distance and low effort. Watch how the ball moves before you add speed.",
+    "\u2022  Build up slowly. Add distance, effort and number of throws over weeks, not in one session. Keep your usual rest days.",
+    "\u2022  Listen to your arm. Stop at pain, tingling, numbness or a loss of control, and tell your coach.",
+    "\u2022  Get help. Work with a qualified pitching coach, and see a licensed athletic trainer, physiotherapist or physician about any arm trouble.",
+    "\u2022  Play by the rules. Use a legal ball and legal grips for your league. Never scratch, cut, mark or otherwise change the ball.",
+    "\u2022  Remember what the model is. These pictures show a simple model of the air round a ball, not a measurement of your ball or your arm. Your league's rules and your coaches' and medical staff's advice come first.",
   ]);
   setText(p2.scene, "Cautions", pt(m, y + 0.1, w, 0.3), { sizePt: f.sizePt, weight: "bold", fill: "#7a2f1d" });
   const cw = w * PT_PER_IN;
