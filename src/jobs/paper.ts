@@ -239,7 +239,7 @@ export function parseHandout(request: Request): HandoutJob {
     return s;
   };
   // the model and seam settings are checked now, so a bad value stops the run before any output is planned
-  samplerSettings(request);
+  samplerSettings(request, modelChoice(request).profile);
   return { layout, request, clinic: { name: text("clinic"), date: text("date"), contact: text("contact") } };
 }
 

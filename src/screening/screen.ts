@@ -301,8 +301,14 @@ function coverFor(b: number): CoverModel {
   return coverCache.get(b, () => coverModel(b));
 }
 
-/** Screens one pitch. Throws RangeError for an invalid pitch or settings. */
-export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResult {
+/**
+ * Progress of one screen: `done` of `total` steps finished (the sweep of the ball,
+ * then each grip and reference hold flown in full), with what the step was.
+ */
+export type ScreenProgress = (done: number, total: number, stage: "sweep" | "grips") => void;
+
+/** Screens one pitch; `onProgress`, when given, hears each step. Throws RangeError for an invalid pitch or settings. */
+export function screenPitch(pitch: Pitch, settings: ScreenSettings, onProgress?: ScreenProgress): ScreenResult {
   assertPitch(pitch);
   if (!(Number.isInteger(settings.top) && settings.top >= TOP_RANGE[0] && settings.top <= TOP_RANGE[1])) {
     throw new RangeError(`top ${settings.top} must be a whole number from ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
@@ -377,9 +383,16 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
     } else refined.push({ axis, score: r.score });
   }
   refined.sort((p, q) => q.score - p.score);
-  const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
+  const toDescribe = refined.slice(0, settings.top + 2);
+  const held = findReferenceAxes(seam);
+  // one step for the sweep, one for each grip and hold flown
+  const steps = 1 + toDescribe.length + held.length;
+  let done = 1;
+  onProgress?.(done, steps, "sweep");
+  const step = <T>(x: T): T => (onProgress?.(++done, steps, "grips"), x);
+  const described = toDescribe.map((r) => step(describe(ctx, r.axis)));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
-  const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));
+  const references = held.map((r) => step(describe(ctx, canonicalAxis(r.axis), r.name)));
   // the occupancy map is read only by the full sphere-map output (--map): made on first use
   let occupancy: SphereMap | undefined;
   return {
