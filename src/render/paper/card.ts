@@ -9,8 +9,7 @@
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import type { Box, Layout } from "./layouts.js";
-import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
-import { PT_PER_IN } from "./pdfScene.js";
+import { PT_PER_IN, setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
 import { cardDrawings, type CardDrawings } from "./views.js";
 import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareOwnRow, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
 
