@@ -40,6 +40,12 @@ export interface ScreenOutcome {
   readonly screened: readonly ScreenedPitch[];
 }
 
+/** The options that shape a screen besides the pitch (and the model profile): `view` carries them into its page, whose own screens use them. */
+export const SCREEN_SETTINGS = [
+  "grid", "spread", "rank", "finger-spacing", "window-ft", "seam-shape", "seam-points", "top",
+  "elevation-ft", "elevation-m", "temperature-f", "temperature-c", "humidity", "pressure-hpa",
+] as const;
+
 /** How many candidates a command lists: its default, its range, and the fewest it needs. */
 export interface TopChoice {
   readonly fallback?: number;

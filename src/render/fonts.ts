@@ -93,6 +93,11 @@ export function woffToSfnt(woff: Uint8Array): Buffer {
   return out;
 }
 
+/** One subset file of the face as the package ships it (WOFF 1.0 bytes). */
+export function woffFile(subset: FontSubset, weight: FontWeight): Buffer {
+  return readFileSync(join(packageDir(), "files", `noto-sans-${subset}-${weight === "bold" ? 700 : 400}-normal.woff`));
+}
+
 const faces = new BoundedCache<string, FontFace>("Noto Sans subset faces", 2 * FONT_SUBSETS.length);
 
 /** One subset file of the face, unpacked and parsed (cached). */
@@ -100,7 +105,7 @@ export function fontFace(subset: FontSubset, weight: FontWeight): FontFace {
   const w = weight === "bold" ? 700 : 400;
   const key = `NotoSans-${subset}-${w}`;
   return faces.get(key, () => {
-    const sfnt = woffToSfnt(readFileSync(join(packageDir(), "files", `noto-sans-${subset}-${w}-normal.woff`)));
+    const sfnt = woffToSfnt(woffFile(subset, weight));
     const font = fontkit.create(sfnt);
     return {
       key,

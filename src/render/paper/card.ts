@@ -113,6 +113,18 @@ export function cardOrigins(page: Layout): [number, number][] {
   return out;
 }
 
+/** The pages of a sheet layout holding `contents` in order, as many cards to a page as its grid holds (points). */
+export function sheetScenes(layout: Layout, contents: readonly CardContent[]): SceneNode[] {
+  const per = layout.grid!.columns * layout.grid!.rows;
+  const pages: SceneNode[] = [];
+  for (let k = 0; k < contents.length; k += per) {
+    const scene = createScene(layout.page.widthIn * PT_PER_IN, layout.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
+    placeCards(scene, layout, contents.slice(k, k + per).map((c) => cardScene(layout.card!, c)));
+    pages.push(scene);
+  }
+  return pages;
+}
+
 /** Places card drawings on a page drawing at the sheet's grid origins. */
 export function placeCards(page: SceneNode, layout: Layout, cards: readonly SceneNode[]): void {
   const origins = cardOrigins(layout);

@@ -1,0 +1,114 @@
+/// <reference lib="dom" />
+/// <reference lib="webworker" />
+/**
+ * The screen in the page: a web worker made from the page's own script (a blob of
+ * it: the one file carries everything) builds the job from the request exactly as
+ * the command line does (jobs/screenJob.ts with the pitch from the flags,
+ * jobs/request/pitchSpec.ts) with the model profile the page embeds, screens it with
+ * progress, and answers with the document `screen --json` prints, as text.
+ *
+ * Messages, page to worker: { id, request } (options as the command line names them,
+ * values as typed). Worker to page: { id, kind: "progress", done, total, stage },
+ * then { id, kind: "done", json, frame, ms } or { id, kind: "error", message, input }.
+ */
+import { resolveProfile } from "../physics/seamModel/parameters.js";
+import { InputError } from "../io/errors.js";
+import { screenJson, type ToolHead } from "../jobs/formats/screenJson.js";
+import { pitchFromFlags, type PitchFlags } from "../jobs/request/pitchSpec.js";
+import { withBandOptions } from "../jobs/request/profile.js";
+import type { Request } from "../jobs/request/values.js";
+import { screenJobOf, screenOne } from "../jobs/screenJob.js";
+import type { FieldFrameVectors, ViewData } from "../render/page3d/data.js";
+
+/** What the worker needs before its first screen. */
+export interface WorkerSetup {
+  readonly head: ToolHead;
+  readonly model: ViewData["model"];
+}
+
+export type WorkerReply =
+  | { id: number; kind: "progress"; done: number; total: number; stage: string }
+  | { id: number; kind: "done"; json: string; frame: FieldFrameVectors; ms: number }
+  | { id: number; kind: "error"; message: string; input: boolean };
+
+/** The worker's side: answers screen requests until the page closes. */
+export function runScreenWorker(scope: DedicatedWorkerGlobalScope): void {
+  let setup: WorkerSetup | null = null;
+  scope.onmessage = (e: MessageEvent) => {
+    const msg = e.data as { setup?: WorkerSetup; id?: number; request?: Request };
+    if (msg.setup) {
+      setup = msg.setup;
+      return;
+    }
+    const id = msg.id ?? 0;
+    try {
+      if (!setup) throw new Error("the screen worker has no model yet");
+      const s = setup;
+      const t0 = performance.now();
+      const request = msg.request ?? {};
+      const job = screenJobOf(request, {
+        pitches: () => ({ pitches: [pitchFromFlags(request as PitchFlags)] }),
+        profile: () => withBandOptions(resolveProfile(s.model, "the page's model profile"), request),
+      });
+      const screened = screenOne(job, job.pitches[0], (done, total, stage) => scope.postMessage({ id, kind: "progress", done, total, stage } satisfies WorkerReply));
+      const json = JSON.stringify(screenJson(s.head, [screened.report], { fromFile: false }), null, 2) + "\n";
+      const f = screened.result.frame;
+      const frame: FieldFrameVectors = { spinAxis: f.spinAxis, flight: f.flight, pushLine: f.pushLine, magnus: f.magnus, armSide: f.armSide };
+      scope.postMessage({ id, kind: "done", json, frame, ms: performance.now() - t0 } satisfies WorkerReply);
+    } catch (err) {
+      const input = err instanceof InputError || err instanceof RangeError;
+      scope.postMessage({ id, kind: "error", message: (err as Error).message, input } satisfies WorkerReply);
+    }
+  };
+}
+
+export interface ScreenAnswer {
+  /** The document `screen --json` prints, as text (two-space indent, a final line feed). */
+  readonly json: string;
+  readonly frame: FieldFrameVectors;
+  /** Time the worker took, ms. */
+  readonly ms: number;
+}
+
+/** A refused request: the library's one-line message, naming the option ("--speed ..."). */
+export class ScreenInputError extends Error {}
+
+/** The page's side: one worker, requests answered in turn. */
+export class ScreenClient {
+  private readonly worker: Worker;
+  private next = 1;
+  private readonly waiting = new Map<number, { resolve(a: ScreenAnswer): void; reject(e: Error): void; progress?: (done: number, total: number) => void }>();
+
+  constructor(scriptText: string, setup: WorkerSetup) {
+    const url = URL.createObjectURL(new Blob([scriptText], { type: "text/javascript" }));
+    this.worker = new Worker(url);
+    this.worker.onmessage = (e: MessageEvent<WorkerReply>) => this.reply(e.data);
+    this.worker.onerror = (e) => {
+      e.preventDefault();
+      for (const w of this.waiting.values()) w.reject(new Error(`the screen worker stopped: ${e.message}`));
+      this.waiting.clear();
+    };
+    this.worker.postMessage({ setup });
+  }
+
+  /** Screens the request (command-line option names, values as typed). */
+  screen(request: Request, progress?: (done: number, total: number) => void): Promise<ScreenAnswer> {
+    const id = this.next++;
+    return new Promise((resolve, reject) => {
+      this.waiting.set(id, { resolve, reject, progress });
+      this.worker.postMessage({ id, request });
+    });
+  }
+
+  private reply(r: WorkerReply): void {
+    const w = this.waiting.get(r.id);
+    if (!w) return;
+    if (r.kind === "progress") {
+      w.progress?.(r.done, r.total);
+      return;
+    }
+    this.waiting.delete(r.id);
+    if (r.kind === "done") w.resolve({ json: r.json, frame: r.frame, ms: r.ms });
+    else w.reject(r.input ? new ScreenInputError(r.message) : new Error(r.message));
+  }
+}
