@@ -95,7 +95,9 @@ async function bundlePage(root: string): Promise<void> {
     logLevel: "warning",
     metafile: true,
   });
-  const script = result.outputFiles[0].text + licenceNotices(root, Object.keys(result.metafile.inputs));
+  // the page also carries files of the Noto Sans face (render/page3d/build.ts pageFonts): its licence goes with the others
+  const inputs = [...Object.keys(result.metafile.inputs), "node_modules/@fontsource/noto-sans/LICENSE"];
+  const script = result.outputFiles[0].text + licenceNotices(root, inputs);
   writeFileSync(join(outdir, "page.js"), script);
 }
 
