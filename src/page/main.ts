@@ -80,6 +80,8 @@ export interface SeamAtlasApi {
   /** The document `seam-atlas screen --json` prints for these options (the command's names, without dashes; the page's settings fill the rest). */
   screen(options: Readonly<Record<string, string | number>>): Promise<unknown>;
   state(): ViewState;
+  /** What the page prints, as SVG: the chosen grip's card (as `card --svg` writes it) and the sheet's pages; null until built. */
+  printed(): { card: string; sheets: string[] } | null;
 }
 
 declare global {
@@ -215,13 +217,15 @@ function start(script: string): void {
 
   // ---- printing: the chosen grip's card and the sheet, built a moment after a change (and at once before printing) ----
   let printTimer = 0;
+  let printed: { card: string; sheets: string[] } | null = null;
   function buildPrint(): void {
     window.clearTimeout(printTimer);
     const r = report();
     const item = listed[state.orientationIndex];
     if (!r || !item) return;
     const paper = paperSelect.value as Paper;
-    fillPrintArea(printArea, cardSvg(data, r, item), sheetSvgs(data, r, listed.filter((_, i) => ticked.has(i)), paper), paper);
+    printed = { card: cardSvg(data, r, item), sheets: sheetSvgs(data, r, listed.filter((_, i) => ticked.has(i)), paper) };
+    fillPrintArea(printArea, printed.card, printed.sheets, paper);
     state.printReady = true;
   }
   function printSoon(): void {
@@ -387,12 +391,17 @@ function start(script: string): void {
         labelNodes.set(a.key, node);
       }
       if (node.textContent !== a.text) node.textContent = a.text;
-      node.style.color = a.color;
+      // a pad's letter is white on a dark blue pill; the others are in their arrow's colour on the page's ground
+      const pad = a.key.startsWith("pad-");
+      node.classList.toggle("pad", pad);
+      node.style.color = pad ? "" : a.color;
+      // measured while shown: a hidden label has no size
+      node.hidden = false;
       const p = new Vector3().copy(a.world).project(scene.camera);
       const x = ((p.x + 1) / 2) * w;
       const y = ((1 - p.y) / 2) * h;
       hidden.push(p.z > 1 || behindBall(eye, [a.world.x, a.world.y, a.world.z]));
-      boxes.push({ x, y, width: node.offsetWidth || 8 * a.text.length, height: node.offsetHeight || 20 });
+      boxes.push({ x, y, width: node.offsetWidth, height: node.offsetHeight });
     }
     for (const [key, node] of labelNodes) if (!seen.has(key)) node.hidden = true;
     const placed = placeLabels(boxes, w, h, hidden);
@@ -506,6 +515,7 @@ function start(script: string): void {
   window.seamAtlasView = { state: viewState };
   window.seamAtlas = {
     state: viewState,
+    printed: () => (printed ? { card: printed.card, sheets: [...printed.sheets] } : null),
     async screen(options) {
       const request: Record<string, string> = {};
       for (const [k, v] of Object.entries(options ?? {})) {

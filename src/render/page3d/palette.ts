@@ -23,6 +23,8 @@ export const PALETTE = {
   /** A pad that grips a seam, and the thumb and the curled finger (deep blues, to read on the cream cover). */
   finger: "#2457a6",
   fingerOther: "#5b86c4",
+  /** A pad's label: white letters on this. */
+  fingerLabel: "#1d3f73",
   /** A refused value's message beside its field. */
   error: "#ffa394",
   /** The chosen entry of a list, behind the text. */

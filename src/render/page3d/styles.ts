@@ -31,6 +31,7 @@ h3 { font-size: 0.95rem; margin: 10px 0 4px; font-weight: 650; }
 :focus-visible { outline: 3px solid var(--flight); outline-offset: 2px; }
 .ball-labels { position: absolute; inset: 0; pointer-events: none; overflow: hidden; }
 .ball-label { position: absolute; left: 0; top: 0; padding: 1px 6px; border-radius: 4px; background: var(--background); font-size: 13px; font-weight: 650; line-height: 18px; white-space: nowrap; }
+.ball-label.pad { background: var(--finger-label); color: #ffffff; }
 .ball-label[hidden] { display: none; }
 .webgl-message { position: absolute; inset: 0; display: flex; align-items: center; justify-content: center; padding: 24px; text-align: center; background: var(--panel); color: var(--text); }
 .webgl-message[hidden] { display: none; }
