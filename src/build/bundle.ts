@@ -85,6 +85,7 @@ async function bundlePage(root: string): Promise<void> {
     absWorkingDir: root,
     bundle: true,
     write: false,
+    outdir,
     format: "iife",
     minify: true,
     platform: "browser",
@@ -99,6 +100,13 @@ async function bundlePage(root: string): Promise<void> {
   const inputs = [...Object.keys(result.metafile.inputs), "node_modules/@fontsource/noto-sans/LICENSE"];
   const script = result.outputFiles[0].text + licenceNotices(root, inputs);
   writeFileSync(join(outdir, "page.js"), script);
+  // what each package adds to the minified script (esbuild's own accounting), for npm run bench
+  const sizes: Record<string, number> = {};
+  for (const [input, info] of Object.entries(result.metafile.outputs[Object.keys(result.metafile.outputs)[0]].inputs)) {
+    const pkg = /node_modules\/((?:@[^/]+\/)?[^/]+)\//.exec(input)?.[1] ?? "seam-atlas";
+    sizes[pkg] = (sizes[pkg] ?? 0) + info.bytesInOutput;
+  }
+  writeFileSync(join(outdir, "page-sizes.json"), JSON.stringify({ scriptBytes: script.length, bytesInOutput: sizes }, null, 2) + "\n");
 }
 
 async function main(): Promise<void> {

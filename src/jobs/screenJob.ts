@@ -58,6 +58,8 @@ export interface ScreenSources {
   pitches(): { readonly team?: string; readonly pitches: PitchInput[] };
   /** The seam-force profile, with the request's band options already applied. */
   profile(): SeamModelProfile;
+  /** The model for the profile (default: a new one, request/profile.ts buildModel); a caller that screens again and again may keep one per profile. */
+  model?(profile: SeamModelProfile, seamShape: number): SeamModel;
 }
 
 export function screenJobOf(request: Request, sources: ScreenSources, top: TopChoice = {}): ScreenJob {
@@ -70,7 +72,7 @@ export function screenJobOf(request: Request, sources: ScreenSources, top: TopCh
     pitches,
     sampler,
     options: screenOptions(request),
-    model: buildModel(profile, sampler.seamShape),
+    model: (sources.model ?? buildModel)(profile, sampler.seamShape),
     air: airConditions(request),
     windowStartM: windowStart(request),
     top: Math.max(chosen, top.atLeast ?? 1),

@@ -48,7 +48,9 @@ export class MovementDial {
     s.polygon(reach.map((p) => p.join(",")).join(" ")).attr({ fill: PALETTE.flight, "fill-opacity": 0.16, stroke: PALETTE.flight, "stroke-opacity": 0.5, "stroke-width": 1 });
     for (let k = 1; k <= rings; k++) {
       s.circle(2 * k * step * scale).center(CENTRE, CENTRE).attr({ fill: "none", stroke: PALETTE.panelEdge, "stroke-width": 1 });
-      s.text(`${k * step} in`).font({ size: 10, family: "system-ui, sans-serif" }).attr({ fill: PALETTE.muted, x: CENTRE + 3, y: CENTRE - k * step * scale + 11 });
+      // on the ring, up and to the right of the vertical axis, clear of the axis words
+      const a = (60 * Math.PI) / 180;
+      s.text(`${k * step} in`).font({ size: 10, family: "system-ui, sans-serif" }).attr({ fill: PALETTE.muted, x: CENTRE + k * step * scale * Math.cos(a) + 2, y: CENTRE - k * step * scale * Math.sin(a) - 2 });
     }
     s.line(CENTRE - RADIUS - 6, CENTRE, CENTRE + RADIUS + 6, CENTRE).attr({ stroke: PALETTE.panelEdge });
     s.line(CENTRE, CENTRE - RADIUS - 6, CENTRE, CENTRE + RADIUS + 6).attr({ stroke: PALETTE.panelEdge });

@@ -98,6 +98,8 @@ const HOME_ELEVATION_RAD = 34 * DEG;
 const HOME_DISTANCE = 6.6;
 /** The example the page opens with when `view` was given no pitch: the four-seamer of the demo staff (an invented club). */
 const EXAMPLE: PitchEcho = { name: "four-seam", pitcher: "", hand: "right", speedMph: 94, spinRpm: 2350, tilt: "12:45", view: "pitcher", gyroDeg: 5, efficiencyPct: 100 * Math.cos(5 * DEG), want: "any" };
+/** A pad's label shows while the cosine between the pad's outward normal and the line of sight exceeds this (about 78 deg off face-on). */
+const PAD_FACING_MIN = 0.2;
 /** Labels of the finger pads (as the cards mark them). */
 const PAD_LABELS: Record<string, string> = { index: "I", middle: "M", ring: "R", thumb: "T" };
 /** Options a script may give `seamAtlas.screen` (the `screen` command's, less files and outputs). */
@@ -400,7 +402,9 @@ function start(script: string): void {
       const p = new Vector3().copy(a.world).project(scene.camera);
       const x = ((p.x + 1) / 2) * w;
       const y = ((1 - p.y) / 2) * h;
-      hidden.push(p.z > 1 || behindBall(eye, [a.world.x, a.world.y, a.world.z]));
+      // a pad's label only while the pad faces the camera (not just round the ball's edge)
+      const facing = pad ? a.world.clone().normalize().dot(new Vector3().subVectors(cam, a.world).normalize()) : 1;
+      hidden.push(p.z > 1 || behindBall(eye, [a.world.x, a.world.y, a.world.z]) || facing < PAD_FACING_MIN);
       boxes.push({ x, y, width: node.offsetWidth, height: node.offsetHeight });
     }
     for (const [key, node] of labelNodes) if (!seen.has(key)) node.hidden = true;

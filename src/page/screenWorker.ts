@@ -15,7 +15,9 @@ import { resolveProfile } from "../physics/seamModel/parameters.js";
 import { InputError } from "../io/errors.js";
 import { screenJson, type ToolHead } from "../jobs/formats/screenJson.js";
 import { pitchFromFlags, type PitchFlags } from "../jobs/request/pitchSpec.js";
-import { withBandOptions } from "../jobs/request/profile.js";
+import { buildModel, withBandOptions } from "../jobs/request/profile.js";
+import { BoundedCache } from "../../geometry/cache.js";
+import type { SeamModel } from "../physics/seamModel/model.js";
 import type { Request } from "../jobs/request/values.js";
 import { screenJobOf, screenOne } from "../jobs/screenJob.js";
 import type { FieldFrameVectors, ViewData } from "../render/page3d/data.js";
@@ -34,6 +36,8 @@ export type WorkerReply =
 /** The worker's side: answers screen requests until the page closes. */
 export function runScreenWorker(scope: DedicatedWorkerGlobalScope): void {
   let setup: WorkerSetup | null = null;
+  // one model per profile and seam shape, so a pitch with a gyro seen before reuses its coefficient map (src/screening/screen.ts)
+  const models = new BoundedCache<string, SeamModel>("the worker's seam-force models", 4);
   scope.onmessage = (e: MessageEvent) => {
     const msg = e.data as { setup?: WorkerSetup; id?: number; request?: Request };
     if (msg.setup) {
@@ -49,6 +53,7 @@ export function runScreenWorker(scope: DedicatedWorkerGlobalScope): void {
       const job = screenJobOf(request, {
         pitches: () => ({ pitches: [pitchFromFlags(request as PitchFlags)] }),
         profile: () => withBandOptions(resolveProfile(s.model, "the page's model profile"), request),
+        model: (profile, seamShape) => models.get(`${profile.hash}/${seamShape}`, () => buildModel(profile, seamShape)),
       });
       const screened = screenOne(job, job.pitches[0], (done, total, stage) => scope.postMessage({ id, kind: "progress", done, total, stage } satisfies WorkerReply));
       const json = JSON.stringify(screenJson(s.head, [screened.report], { fromFile: false }), null, 2) + "\n";

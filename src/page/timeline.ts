@@ -17,7 +17,7 @@ export interface TimelineSeries {
 
 const W = 360;
 const H = 130;
-const PAD = { left: 40, right: 10, top: 8, bottom: 22 };
+const PAD = { left: 40, right: 16, top: 8, bottom: 22 };
 
 export class TimelinePlot {
   private readonly svg: Svg;

@@ -62,6 +62,7 @@ button:disabled { opacity: 0.6; cursor: progress; }
 figure { margin: 0; background: var(--panel); border: 1px solid var(--panel-edge); border-radius: 8px; padding: 10px 12px; }
 figcaption { color: var(--muted); font-size: 0.82rem; margin-top: 4px; }
 .dial svg, .timeline svg { display: block; width: 100%; height: auto; }
+.dial svg { max-width: 340px; margin: 0 auto; }
 .panel { display: flex; flex-direction: column; gap: 12px; min-width: 0; }
 /* on a screen wide and tall enough the panel scrolls by itself, so the ball stays in view beside the form and the grips */
 @media (min-width: 901px) and (min-height: 560px) { .panel { position: sticky; top: 8px; max-height: calc(100vh - 16px); overflow-y: auto; padding-right: 4px; } }
