@@ -7,12 +7,11 @@ import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFil
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { pathToFileURL } from "node:url";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { formatMovementIn as inches } from "../../src/render/numbers.js";
 import type { ViewData } from "../../src/render/page3d/data.js";
 import { runCli } from "../support/cli.js";
-import { canvasPixels, launchChromium, openPage, pauseAt, RUN_BROWSER_TESTS, shownFigures, viewState } from "../support/browser.js";
+import { canvasPixels, openPage, pauseAt, RUN_BROWSER_TESTS, sharedBrowser, shownFigures, viewState } from "../support/browser.js";
 
 const TIMEOUT_MS = 120_000;
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-view-cli-"));
@@ -114,18 +113,12 @@ describe("seam-atlas view (compiled CLI)", () => {
 });
 
 describe.runIf(RUN_BROWSER_TESTS)("the page `seam-atlas view` writes, in chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchChromium();
-  }, TIMEOUT_MS);
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser(TIMEOUT_MS);
 
   it("opens from file:// with no console errors and no http(s) request, draws the ball, and shows screen --json's numbers", async () => {
     if (!existsSync(page)) expect(runCli(["view", "--demo", "--grid", "6", "--out", page]).code).toBe(0);
     const screen = JSON.parse(runCli(["screen", "--demo", "--grid", "6", "--json"]).stdout);
-    const opened = await openPage(browser, pathToFileURL(page).href);
+    const opened = await openPage(browser(), pathToFileURL(page).href);
     const p = opened.page;
     expect((await viewState(p)).webgl).toBe(true);
     await pauseAt(p, 0);

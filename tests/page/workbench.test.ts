@@ -14,7 +14,7 @@ import { DEG } from "../../geometry/units.js";
 import { listOrientations, type ViewData } from "../../src/render/page3d/data.js";
 import { holdLines } from "../../src/render/paper/words.js";
 import type { ScreenReport } from "../../src/screening/report.js";
-import { launchChromium, openPage, RUN_BROWSER_TESTS, shownFigures, viewState, type OpenedPage } from "../support/browser.js";
+import { launchChromium, openPage, RUN_BROWSER_TESTS, sharedBrowser, shownFigures, viewState, type OpenedPage } from "../support/browser.js";
 import { ROOT, runCli } from "../support/cli.js";
 import { hasTool, pdfPages, pdfPageSizePt, pdfText } from "../support/poppler.js";
 import { compareNumberedText, compareNumbers } from "../support/sameNumbers.js";
@@ -391,13 +391,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the workbench page in chromium (file://, soft
 });
 
 describe.runIf(RUN_BROWSER_TESTS)("a staff page whose wanted direction is out of reach", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchChromium();
-  }, TIMEOUT_MS);
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser(TIMEOUT_MS);
 
   it("says so in the cards' words, lists no grip for it, and offers the classic holds; the staff picker lists the file's pitches", async () => {
     const file = join(tmp, "staff.html");
@@ -411,7 +405,7 @@ describe.runIf(RUN_BROWSER_TESTS)("a staff page whose wanted direction is out of
       pitches: data.pitches.map((p, i) => (i === 1 ? { ...p, report: { ...report, reach: { ...report.reach, wantPct: 2, bestTowardIn: 0.1, outOfReach: true } } } : p)),
     };
     const { pageUrl } = await writePage(marked);
-    const opened = await openPage(browser, pageUrl);
+    const opened = await openPage(browser(), pageUrl);
     const { page } = opened;
     expect(await page.locator("#pitch-select option").count()).toBe(6);
     expect(await page.locator("#staff-picker").isVisible()).toBe(true);
@@ -425,5 +419,27 @@ describe.runIf(RUN_BROWSER_TESTS)("a staff page whose wanted direction is out of
     await shot(page, "8-out-of-reach", true);
     expect(opened.errors).toEqual([]);
     expect(opened.requests.filter((u) => !/^(file|data|blob):/i.test(u))).toEqual([]);
+  }, TIMEOUT_MS);
+});
+
+describe.runIf(RUN_BROWSER_TESTS)("a page written with --model", () => {
+  const browser = sharedBrowser(TIMEOUT_MS);
+
+  it("screens in the page with that profile, as `screen --model` does (and not as the default model does)", async () => {
+    const profile = join(tmp, "lab-profile.json");
+    // an invented lab's profile: within the parameters' ranges (src/physics/seamModel/parameters.ts)
+    writeFileSync(profile, JSON.stringify({ name: "lab-fit", parameters: { scale: 1.4, laminarSeparationDeg: 82, wakePressureCoefficient: -0.35 } }));
+    const file = join(tmp, "model.html");
+    expect(runCli(["view", "--model", profile, "--grid", "6", "--out", file]).code).toBe(0);
+    const opened = await openPage(browser(), pathToFileURL(file).href);
+    await screened(opened.page, 1);
+    const doc = (await opened.page.evaluate((o) => window.seamAtlas!.screen(o), { hand: "right", speed: 92, spin: 2150, tilt: "1:45", gyro: 10, want: "arm", name: "sinker" })) as ScreenReport;
+    const cli = JSON.parse(runCli(["screen", ...SINKER_FLAGS, "--model", profile, "--grid", "6", "--json"]).stdout);
+    expect(compareNumbers(doc, cli, SAME_NUMBER_REL).mismatches).toEqual([]);
+    expect(doc.input.model.name).toBe("lab-fit");
+    const plain = JSON.parse(runCli(["screen", ...SINKER_FLAGS, "--grid", "6", "--json"]).stdout) as ScreenReport;
+    expect(doc.input.model.hash).not.toBe(plain.input.model.hash);
+    expect(Math.abs(doc.candidates[0].score - plain.candidates[0].score)).toBeGreaterThan(0.1);
+    expect(opened.errors).toEqual([]);
   }, TIMEOUT_MS);
 });

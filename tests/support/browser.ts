@@ -8,6 +8,7 @@
  */
 import { existsSync } from "node:fs";
 import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 
 export const CHROMIUM_PATH = "/usr/bin/chromium";
 export const CHROMIUM_ARGS = [
@@ -33,6 +34,21 @@ if (!RUN_BROWSER_TESTS) {
 export async function launchChromium(): Promise<Browser> {
   if (!HAVE_CHROMIUM) throw new Error(`${CHROMIUM_PATH} is missing: the 3-D page tests need Debian's chromium (apt-get install -y chromium)`);
   return chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
+}
+
+/** A chromium for the tests of the enclosing describe block: launched before them, closed after; the getter returns it. */
+export function sharedBrowser(timeoutMs: number): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchChromium();
+  }, timeoutMs);
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error("the shared chromium is not running (launched in beforeAll)");
+    return browser;
+  };
 }
 
 export interface OpenedPage {
