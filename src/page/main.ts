@@ -326,7 +326,7 @@ function start(script: string): void {
       if (fromForm) {
         screenStatus.textContent = `Screened in ${(answer.ms / 1000).toFixed(1)} s: the grips are listed under \u201cGrips for this pitch\u201d.`;
         showPitch(view, "form");
-        element("orientations-title").scrollIntoView({ block: "nearest" });
+        showGrips();
       } else screenStatus.textContent = "";
       return { doc, view };
     } finally {
@@ -334,6 +334,14 @@ function start(script: string): void {
       screenButton.disabled = false;
       progress.hidden = true;
     }
+  }
+
+  /** Brings the list of grips to the top of the panel (which scrolls by itself on a wide screen) or of the window. */
+  function showGrips(): void {
+    const section = element("orientations-title").parentElement!;
+    const panel = section.closest<HTMLElement>(".panel");
+    if (panel && panel.scrollHeight > panel.clientHeight + 1 && getComputedStyle(panel).overflowY === "auto") panel.scrollTop = section.offsetTop - 8;
+    else section.scrollIntoView({ block: "start" });
   }
 
   /** The page's settings with the form's (or a script's) options over them; the air given here replaces the page's. */
