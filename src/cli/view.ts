@@ -1,4 +1,4 @@
-/** `seam-atlas view`: the screen, drawn as one self-contained 3-D page that opens offline from any folder. */
+/** `seam-atlas view`: the workbench, one self-contained page that screens, shows and prints grips offline from any folder. */
 import type { Argv } from "yargs";
 import { DEFAULT_TOP } from "../screening/screen.js";
 import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";

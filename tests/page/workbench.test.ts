@@ -2,7 +2,8 @@
  * The workbench page (src/page/) in a real browser: Debian's chromium with software
  * WebGL, opened from file:// as a coach opens it from a USB stick. A pitch typed into
  * the form is screened in the page and must give what the command line gives; the page
- * prints the card `card` prints. Screenshots of each step go to out/workbench-*.png.
+ * prints the card `card` prints. The tests of the first block run in order on one page,
+ * as a coach's session does. Screenshots of each step go to out/workbench-*.png.
  */
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";

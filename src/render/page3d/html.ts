@@ -115,8 +115,6 @@ export function renderViewHtml(parts: ViewHtmlParts): string {
     // the screen runs in a worker made from the page's own script
     "worker-src blob:",
     "img-src data: blob:",
-    // the card face, handed to the browser from the page's own data
-    "font-src data: blob:",
     "base-uri 'none'",
     "form-action 'none'",
   ].join("; ");

@@ -1,5 +1,5 @@
 /**
- * The 3-D page (src/render/page3d/main.ts, the script the builder bundles) in a real
+ * The workbench page (src/page/main.ts, the script the builder bundles): its 3-D view in a real
  * browser: Debian's chromium with software WebGL, opened from file://.
  */
 import { mkdirSync } from "node:fs";
