@@ -70,6 +70,8 @@ export interface ViewState {
   screens: number;
   lastScreenMs: number | null;
   busy: boolean;
+  /** Whether the screen runs in a worker (false: the browser gave none, so on the page's own thread). */
+  screenInWorker: boolean;
   /** The print area holds the chosen grip's card and the sheet. */
   printReady: boolean;
   /** Ms from the start of navigation to the first frame drawn. */
@@ -521,6 +523,7 @@ function start(script: string): void {
     screens: state.screens,
     lastScreenMs: state.lastScreenMs,
     busy: state.busy,
+    screenInWorker: client.worker !== null,
     printReady: state.printReady,
     firstFrameMs: state.firstFrameMs,
   });

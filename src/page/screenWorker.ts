@@ -33,13 +33,16 @@ export type WorkerReply =
   | { id: number; kind: "done"; json: string; frame: FieldFrameVectors; ms: number }
   | { id: number; kind: "error"; message: string; input: boolean };
 
-/** The worker's side: answers screen requests until the page closes. */
-export function runScreenWorker(scope: DedicatedWorkerGlobalScope): void {
+/**
+ * What answers the page's requests: each message in (a setup, or { id, request }) gives
+ * replies out, by the command line's code. The worker runs one; a browser that gives
+ * the page no worker runs one on the page's own thread.
+ */
+function screenAnswerer(post: (reply: WorkerReply) => void): (msg: { setup?: WorkerSetup; id?: number; request?: Request }) => void {
   let setup: WorkerSetup | null = null;
   // one model per profile and seam shape, so a pitch with a gyro seen before reuses its coefficient map (src/screening/screen.ts)
   const models = new BoundedCache<string, SeamModel>("the worker's seam-force models", 4);
-  scope.onmessage = (e: MessageEvent) => {
-    const msg = e.data as { setup?: WorkerSetup; id?: number; request?: Request };
+  return (msg) => {
     if (msg.setup) {
       setup = msg.setup;
       return;
@@ -55,16 +58,22 @@ export function runScreenWorker(scope: DedicatedWorkerGlobalScope): void {
         profile: () => withBandOptions(resolveProfile(s.model, "the page's model profile"), request),
         model: (profile, seamShape) => models.get(`${profile.hash}/${seamShape}`, () => buildModel(profile, seamShape)),
       });
-      const screened = screenOne(job, job.pitches[0], (done, total, stage) => scope.postMessage({ id, kind: "progress", done, total, stage } satisfies WorkerReply));
+      const screened = screenOne(job, job.pitches[0], (done, total, stage) => post({ id, kind: "progress", done, total, stage }));
       const json = JSON.stringify(screenJson(s.head, [screened.report], { fromFile: false }), null, 2) + "\n";
       const f = screened.result.frame;
       const frame: FieldFrameVectors = { spinAxis: f.spinAxis, flight: f.flight, pushLine: f.pushLine, magnus: f.magnus, armSide: f.armSide };
-      scope.postMessage({ id, kind: "done", json, frame, ms: performance.now() - t0 } satisfies WorkerReply);
+      post({ id, kind: "done", json, frame, ms: performance.now() - t0 });
     } catch (err) {
       const input = err instanceof InputError || err instanceof RangeError;
-      scope.postMessage({ id, kind: "error", message: (err as Error).message, input } satisfies WorkerReply);
+      post({ id, kind: "error", message: (err as Error).message, input });
     }
   };
+}
+
+/** The worker's side: answers screen requests until the page closes. */
+export function runScreenWorker(scope: DedicatedWorkerGlobalScope): void {
+  const answer = screenAnswerer((reply) => scope.postMessage(reply));
+  scope.onmessage = (e: MessageEvent) => answer(e.data);
 }
 
 export interface ScreenAnswer {
@@ -80,20 +89,35 @@ export class ScreenInputError extends Error {}
 
 /** The page's side: one worker, requests answered in turn. */
 export class ScreenClient {
-  private readonly worker: Worker;
+  /** The page's worker, or null when the browser gave none (the screen then runs on the page's own thread). */
+  readonly worker: Worker | null;
+  private readonly send: (msg: { setup?: WorkerSetup; id?: number; request?: Request }) => void;
   private next = 1;
   private readonly waiting = new Map<number, { resolve(a: ScreenAnswer): void; reject(e: Error): void; progress?: (done: number, total: number) => void }>();
 
   constructor(scriptText: string, setup: WorkerSetup) {
-    const url = URL.createObjectURL(new Blob([scriptText], { type: "text/javascript" }));
-    this.worker = new Worker(url);
-    this.worker.onmessage = (e: MessageEvent<WorkerReply>) => this.reply(e.data);
-    this.worker.onerror = (e) => {
-      e.preventDefault();
-      for (const w of this.waiting.values()) w.reject(new Error(`the screen worker stopped: ${e.message}`));
-      this.waiting.clear();
-    };
-    this.worker.postMessage({ setup });
+    let worker: Worker | null = null;
+    try {
+      worker = new Worker(URL.createObjectURL(new Blob([scriptText], { type: "text/javascript" })));
+    } catch {
+      // a browser that refuses a worker made from the page (a strict setting, an old engine): the same code here
+      worker = null;
+    }
+    this.worker = worker;
+    if (worker) {
+      worker.onmessage = (e: MessageEvent<WorkerReply>) => this.reply(e.data);
+      worker.onerror = (e) => {
+        e.preventDefault();
+        for (const w of this.waiting.values()) w.reject(new Error(`the screen worker stopped: ${e.message}`));
+        this.waiting.clear();
+      };
+      this.send = (msg) => worker.postMessage(msg);
+    } else {
+      const answer = screenAnswerer((reply) => this.reply(reply));
+      // a moment later, so the page can show its progress bar first
+      this.send = (msg) => (msg.setup ? answer(msg) : void setTimeout(() => answer(msg), 30));
+    }
+    this.send({ setup });
   }
 
   /** Screens the request (command-line option names, values as typed). */
@@ -101,7 +125,7 @@ export class ScreenClient {
     const id = this.next++;
     return new Promise((resolve, reject) => {
       this.waiting.set(id, { resolve, reject, progress });
-      this.worker.postMessage({ id, request });
+      this.send({ id, request });
     });
   }
 

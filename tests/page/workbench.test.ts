@@ -105,6 +105,7 @@ describe.runIf(RUN_BROWSER_TESTS)("the workbench page in chromium (file://, soft
     expect(await page.locator("h1").textContent()).toContain("seam-atlas workbench");
     expect(await page.locator(".caution").textContent()).toContain("Pitching can injure");
     expect((await viewState(page)).source).toBe("form");
+    expect((await viewState(page)).screenInWorker).toBe(true);
     expect(await page.locator("#screen-progress").isHidden()).toBe(true);
     expect(await page.locator("#orientation-list li").count()).toBeGreaterThan(2);
     await shot(page, "1-opened");
@@ -441,6 +442,27 @@ describe.runIf(RUN_BROWSER_TESTS)("a page written with --model", () => {
     const plain = JSON.parse(runCli(["screen", ...SINKER_FLAGS, "--grid", "6", "--json"]).stdout) as ScreenReport;
     expect(doc.input.model.hash).not.toBe(plain.input.model.hash);
     expect(Math.abs(doc.candidates[0].score - plain.candidates[0].score)).toBeGreaterThan(0.1);
+    expect(opened.errors).toEqual([]);
+  }, TIMEOUT_MS);
+});
+
+describe.runIf(RUN_BROWSER_TESTS)("a browser that gives the page no worker", () => {
+  const browser = sharedBrowser(TIMEOUT_MS);
+
+  it("screens on the page's own thread by the same code: the same document as `screen --json`", async () => {
+    const file = join(tmp, "no-worker.html");
+    expect(runCli(["view", "--grid", "6", "--out", file]).code).toBe(0);
+    const opened = await openPage(browser(), pathToFileURL(file).href, () => {
+      // a browser with workers switched off: the constructor is refused
+      (window as unknown as { Worker: unknown }).Worker = function refused() {
+        throw new Error("workers are switched off");
+      };
+    });
+    await screened(opened.page, 1);
+    expect((await viewState(opened.page)).screenInWorker).toBe(false);
+    const doc = await opened.page.evaluate((o) => window.seamAtlas!.screen(o), { hand: "right", speed: 92, spin: 2150, tilt: "1:45", gyro: 10, want: "arm", name: "sinker" });
+    const cli = JSON.parse(runCli(["screen", ...SINKER_FLAGS, "--grid", "6", "--json"]).stdout);
+    expect(compareNumbers(doc, cli, SAME_NUMBER_REL).mismatches).toEqual([]);
     expect(opened.errors).toEqual([]);
   }, TIMEOUT_MS);
 });

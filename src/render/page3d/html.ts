@@ -112,8 +112,9 @@ export function renderViewHtml(parts: ViewHtmlParts): string {
     "default-src 'none'",
     `script-src ${parts.scriptHash}`,
     `style-src ${parts.styleHash}`,
-    // the screen runs in a worker made from the page's own script
+    // the screen runs in a worker made from the page's own script (child-src for browsers before worker-src)
     "worker-src blob:",
+    "child-src blob:",
     "img-src data: blob:",
     "base-uri 'none'",
     "form-action 'none'",
