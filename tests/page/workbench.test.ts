@@ -111,11 +111,25 @@ describe.runIf(RUN_BROWSER_TESTS)("the workbench page in chromium (file://, soft
     await shot(page, "1-opened");
   }, TIMEOUT_MS);
 
-  it("screens a pitch typed into the form and shows the command line's top candidate, its numbers and the cards' words for it", async () => {
+  it("screens a pitch typed into the form, with a progress bar, and shows the command line's top candidate, its numbers and the cards' words for it", async () => {
     await typeSinker(page);
     const before = (await viewState(page)).screens;
+    // watch the progress bar: shown while the worker screens, its value climbing to 1, hidden after
+    await page.evaluate(() => {
+      const bar = document.getElementById("screen-progress") as HTMLProgressElement;
+      const seen: { shown: boolean; values: number[] } = { shown: false, values: [] };
+      (window as unknown as { progressSeen: typeof seen }).progressSeen = seen;
+      new MutationObserver(() => {
+        if (!bar.hidden) seen.shown = true;
+        seen.values.push(bar.value);
+      }).observe(bar, { attributes: true });
+    });
     await page.click("#screen-button");
     await screened(page, before + 1);
+    const progress = await page.evaluate(() => (window as unknown as { progressSeen: { shown: boolean; values: number[] } }).progressSeen);
+    expect(progress.shown).toBe(true);
+    expect(Math.max(...progress.values)).toBe(1);
+    expect(progress.values.filter((v) => v > 0 && v < 1).length).toBeGreaterThan(2);
     const top = sinker.candidates[0];
     expect(await shownFigures(page)).toMatchObject(expectedFigures(top));
     expect(await page.locator("#orientation-title").textContent()).toBe("sinker: grip 1");
