@@ -25,7 +25,7 @@ h3 { font-size: 0.95rem; margin: 10px 0 4px; font-weight: 650; }
 .layout { display: grid; grid-template-columns: minmax(0, 1fr) minmax(330px, 400px); gap: 16px; padding: 14px 20px; align-items: start; }
 @media (max-width: 900px) { .layout { grid-template-columns: minmax(0, 1fr); padding: 10px 12px; } header.top { padding: 10px 12px; } }
 .canvas-wrap { position: relative; width: 100%; height: min(70vh, 620px); min-height: 300px; border: 1px solid var(--panel-edge); border-radius: 8px; overflow: hidden; }
-@media (max-height: 500px) { .canvas-wrap { height: 82vh; min-height: 260px; } }
+@media (max-height: 500px) { .canvas-wrap { height: 82vh; min-height: 260px; } h1 { font-size: 1.1rem; } .caution { font-size: 0.8rem; padding: 4px 8px; } }
 #ball-canvas { display: block; width: 100%; height: 100%; cursor: grab; touch-action: none; }
 #ball-canvas:active { cursor: grabbing; }
 :focus-visible { outline: 3px solid var(--flight); outline-offset: 2px; }
