@@ -8,7 +8,7 @@
  * Inside, everything is SI and radians (geometry/units.ts converts); the *Spec
  * helpers take the pitch-file form (README) in people's units.
  */
-import { buildPitch, type RawPitch } from "./jobs/request/pitch.js";
+import { buildPitch, type RawPitch } from "./jobs/request/pitchSpec.js";
 import { screenReport, type ScreenReport } from "./screening/report.js";
 import { DEFAULT_SCREEN_OPTIONS, screenPitch, type ScreenSettings } from "./screening/screen.js";
 import { seamModel } from "./physics/seamModel/model.js";

@@ -30,6 +30,7 @@ import { seamModel } from "../physics/seamModel/model.js";
 import { turnAverage } from "../physics/seamModel/turn.js";
 import { calibratableNames, calibrateSeamModel, syntheticLabRows } from "../physics/calibrate/index.js";
 import { defaultProfile, resolveProfile } from "../physics/seamModel/parameters.js";
+import { workbenchFigures } from "./workbench.js";
 
 const BRUTE_STEPS = 720;
 
@@ -276,6 +277,8 @@ async function main(): Promise<void> {
   rmSync(atlasDir, { recursive: true, force: true });
   // the analyst's batch as whole processes (--quick leaves out the 100,000 rows)
   const batches = await explainBatches(process.argv.includes("--quick"));
+  // the workbench page in headless chromium (software WebGL)
+  const workbench = await workbenchFigures();
   const mem = process.memoryUsage();
   const result = {
     tool: "seam-atlas",
@@ -311,6 +314,7 @@ async function main(): Promise<void> {
       iterations: calibration.method.iterations,
       modelEvaluations: calibration.method.evaluations,
     },
+    workbench,
     startup: start,
     memory: { rssMB: Math.round(mem.rss / 1e5) / 10, heapUsedMB: Math.round(mem.heapUsed / 1e5) / 10 },
   };
@@ -340,6 +344,13 @@ async function main(): Promise<void> {
         : []),
       `  atlas, demo staff    ${result.atlas.seconds} s in process, ${result.atlas.pages} pages; \`atlas --demo\` as a whole process ${result.atlas.processSeconds} s (best of 3; target <= 2.5 s)`,
       `  calibrate            ${result.calibrate.seconds} s for ${result.calibrate.rows.toLocaleString("en-US")} lab rows (${result.calibrate.turnAveraged} turn-averaged), ${result.calibrate.parameters} parameters, ${result.calibrate.modelEvaluations} evaluations (target <= 30 s)`,
+      ...("skipped" in workbench
+        ? [`  workbench page       skipped: ${workbench.skipped}`]
+        : [
+            `  workbench page       ${Math.round(workbench.htmlBytes.demo / 1024)} KB with the demo staff, ${Math.round(workbench.htmlBytes.empty / 1024)} KB empty; script ${Math.round(workbench.scriptBytes / 1024)} KB (three.js ${Math.round((workbench.bytesInOutput.three ?? 0) / 1024)} KB tree-shaken, svg.js ${Math.round((workbench.bytesInOutput["@svgdotjs/svg.js"] ?? 0) / 1024)} KB, ours ${Math.round((workbench.bytesInOutput["seam-atlas"] ?? 0) / 1024)} KB)`,
+            `  workbench, first     ${workbench.firstRenderMs} ms to the first frame drawn, headless chromium with software WebGL (best of 3; target < 2,000 ms)`,
+            `  workbench, screen    in the page's worker: ${workbench.pageScreenMs.first} ms the first pitch (worker start included), ${workbench.pageScreenMs.newPitch} ms a new pitch, ${workbench.pageScreenMs.again} ms the same again; Node: ${workbench.nodeScreenMs.newPitch} ms and ${workbench.nodeScreenMs.again} ms (best of 3; target: about 1 s)`,
+          ]),
       `  start, --help        ${start.helpSeconds} s, ${start.helpOverNode}x node -e 0 (${start.nodeSeconds} s; target <= 3x; best of 7 processes)`,
       `  start, measure       ${start.measureSeconds} s for measure --axis waist-A, ${start.measureOverNode}x node -e 0 (target <= 5x)`,
       `  memory               ${result.memory.rssMB} MB resident`,

@@ -8,10 +8,13 @@
  *    loads only its own stack. Packages whose code reads files next to itself at run
  *    time (pdfkit's fonts, svgdom's), the browser-only three.js and the worker-pool
  *    package stay outside the bundle and load from node_modules when a command needs them.
- * 2. The 3-D page's script (src/render/page3d/main.ts with three.js, gl-matrix and
- *    the tool's geometry) into out/build/page/page.js: a minified IIFE with the
- *    bundled packages' licences appended, which `view` inlines into its HTML. The
- *    installed package ships it, so nothing is bundled at run time.
+ * 2. The workbench page's script (src/page/main.ts with three.js, gl-matrix, svg.js
+ *    and the tool's own library: the page runs the screen itself, in a worker made from
+ *    this same script) into out/build/page/page.js: a minified IIFE with the bundled
+ *    packages' licences appended, which `view` inlines into its HTML. The card face's
+ *    text functions are the browser's (src/page/pageFonts.ts stands in for
+ *    src/render/fonts.ts, which reads the font files in Node). The installed package
+ *    ships the script, so nothing is bundled at run time.
  */
 import { existsSync, mkdirSync, rmSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
@@ -58,14 +61,31 @@ async function bundleCli(root: string): Promise<void> {
   });
 }
 
+/** In the page, render/fonts.ts (fontkit over the font files) is src/page/pageFonts.ts (the browser over the files the page carries). */
+function browserFonts(root: string): esbuild.Plugin {
+  const nodeFonts = join(root, "src", "render", "fonts.ts");
+  const pageFonts = join(root, "src", "page", "pageFonts.ts");
+  return {
+    name: "seam-atlas-browser-fonts",
+    setup(build) {
+      build.onResolve({ filter: /(^|\/)fonts\.js$/ }, (args) => {
+        const target = join(args.resolveDir, args.path.replace(/\.js$/, ".ts"));
+        return target === nodeFonts ? { path: pageFonts } : undefined;
+      });
+    },
+  };
+}
+
 async function bundlePage(root: string): Promise<void> {
   const outdir = join(root, "out", "build", "page");
   mkdirSync(outdir, { recursive: true });
   const result = await esbuild.build({
-    entryPoints: [join(root, "src", "render", "page3d", "main.ts")],
+    entryPoints: [join(root, "src", "page", "main.ts")],
+    plugins: [browserFonts(root)],
     absWorkingDir: root,
     bundle: true,
     write: false,
+    outdir,
     format: "iife",
     minify: true,
     platform: "browser",
@@ -76,8 +96,17 @@ async function bundlePage(root: string): Promise<void> {
     logLevel: "warning",
     metafile: true,
   });
-  const script = result.outputFiles[0].text + licenceNotices(root, Object.keys(result.metafile.inputs));
+  // the page also carries files of the Noto Sans face (render/page3d/build.ts pageFonts): its licence goes with the others
+  const inputs = [...Object.keys(result.metafile.inputs), "node_modules/@fontsource/noto-sans/LICENSE"];
+  const script = result.outputFiles[0].text + licenceNotices(root, inputs);
   writeFileSync(join(outdir, "page.js"), script);
+  // what each package adds to the minified script (esbuild's own accounting), for npm run bench
+  const sizes: Record<string, number> = {};
+  for (const [input, info] of Object.entries(result.metafile.outputs[Object.keys(result.metafile.outputs)[0]].inputs)) {
+    const pkg = /node_modules\/((?:@[^/]+\/)?[^/]+)\//.exec(input)?.[1] ?? "seam-atlas";
+    sizes[pkg] = (sizes[pkg] ?? 0) + info.bytesInOutput;
+  }
+  writeFileSync(join(outdir, "page-sizes.json"), JSON.stringify({ scriptBytes: script.length, bytesInOutput: sizes }, null, 2) + "\n");
 }
 
 async function main(): Promise<void> {

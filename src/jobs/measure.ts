@@ -12,6 +12,7 @@ import { parseStrictJson } from "../io/json.js";
 import { quote } from "../io/quote.js";
 import { measureOrientation, type Measurement } from "../sampling/measure.js";
 import { projectRoot } from "../version.js";
+import { modelChoice } from "./request/model.js";
 import { samplerSettings, type SamplerSettings } from "./request/settings.js";
 import { parseAxis, parseDegrees, type ParsedAxis, type Request } from "./request/values.js";
 
@@ -50,7 +51,7 @@ interface DemoOrientation {
 }
 
 export function parseMeasure(request: Request): MeasureJob {
-  const settings = samplerSettings(request);
+  const settings = samplerSettings(request, modelChoice(request).profile);
   if (request.demo) {
     if (request.axis !== undefined) throw new InputError(`--demo measures the demo's own axes; leave out --axis ${quote(String(request.axis))}`);
     if (request.gyro !== undefined) throw new InputError(`--demo measures the demo's own gyro angles; leave out --gyro ${quote(String(request.gyro))}`);

@@ -8,15 +8,13 @@ import { join } from "node:path";
 import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
 import { pitchPages, renderAtlasPdf } from "../render/paper/atlas.js";
-import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "../render/paper/card.js";
+import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
 import { figureScene, handoutFigures, renderHandoutPdf, type Clinic } from "../render/paper/handout.js";
 import { LayoutError, loadLayout, loadLayoutFile, type Layout } from "../render/paper/layouts.js";
-import { PT_PER_IN } from "../render/paper/pdfScene.js";
 import { nearestReachable, WANT_WORDS } from "../render/paper/words.js";
 import { sceneToPng } from "../render/png.js";
-import { createScene } from "../render/scene.js";
 import { sphereMapScene } from "../render/sphereMapDrawing.js";
 import { fixed } from "../render/numbers.js";
 import type { ScreenReport } from "../screening/report.js";
@@ -130,14 +128,7 @@ export function outOfReachMessage(r: ScreenReport): string {
 const cardPage = (layout: Layout, c: CardContent): Page => ({ widthIn: layout.page.widthIn, heightIn: layout.page.heightIn, scene: cardScene(layout, c) });
 
 function sheetPages(layout: Layout, contents: readonly CardContent[]): Page[] {
-  const per = layout.grid!.columns * layout.grid!.rows;
-  const pages: Page[] = [];
-  for (let k = 0; k < contents.length; k += per) {
-    const scene = createScene(layout.page.widthIn * PT_PER_IN, layout.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
-    placeCards(scene, layout, contents.slice(k, k + per).map((c) => cardScene(layout.card!, c)));
-    pages.push({ widthIn: layout.page.widthIn, heightIn: layout.page.heightIn, scene });
-  }
-  return pages;
+  return sheetScenes(layout, contents).map((scene) => ({ widthIn: layout.page.widthIn, heightIn: layout.page.heightIn, scene }));
 }
 
 export async function runCard(job: CardJob): Promise<PaperOutput> {
@@ -239,7 +230,7 @@ export function parseHandout(request: Request): HandoutJob {
     return s;
   };
   // the model and seam settings are checked now, so a bad value stops the run before any output is planned
-  samplerSettings(request);
+  samplerSettings(request, modelChoice(request).profile);
   return { layout, request, clinic: { name: text("clinic"), date: text("date"), contact: text("contact") } };
 }
 

@@ -26,6 +26,8 @@ declare module "fontkit" {
     readonly postscriptName: string;
     readonly familyName: string;
     readonly numGlyphs: number;
+    /** Every code point the cmap maps. */
+    readonly characterSet: readonly number[];
     hasGlyphForCodePoint(codePoint: number): boolean;
     glyphForCodePoint(codePoint: number): Glyph;
     layout(text: string, features?: string[] | Record<string, boolean>): GlyphRun;

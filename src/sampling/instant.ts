@@ -2,7 +2,7 @@
  * The seam's band occupancy at one instant of the turn: the share of the seam's
  * length inside the separation band, split by the side of the across direction a
  * (flow frame and phase convention: geometry/flow.ts). This is what the timelines
- * (`measure`, the 3-D page's live readout) show through a turn; its average over a
+ * (`measure`, the workbench page's live readout) show through a turn; its average over a
  * whole turn is what the exact sampler (exact.ts) computes in closed form.
  */
 import type { SeamSamples } from "../../geometry/seamSamples.js";

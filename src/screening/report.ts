@@ -1,6 +1,6 @@
 /**
  * The screen result in user units (degrees, inches, clock readings): the one form
- * that the JSON, the CSV, the terminal table, the printed cards and the 3-D page all
+ * that the JSON, the CSV, the terminal table, the printed cards and the workbench page all
  * read, so the numbers agree everywhere they appear.
  */
 import { BALL_RADIUS_IN, BALL_RADIUS_M } from "../../geometry/ball.js";

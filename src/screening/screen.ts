@@ -54,6 +54,13 @@ import { DEFAULT_SPREAD_DEG, robustness, type Robustness } from "./robustness.js
 export type RankBy = "blend" | "strength" | "robust";
 export const RANKS: readonly RankBy[] = ["blend", "strength", "robust"];
 
+/**
+ * Progress of one screen (screenPitch's optional last argument): `done` of `total`
+ * steps finished, the sweep of the ball first, then each grip and reference hold
+ * flown in full.
+ */
+export type ScreenProgress = (done: number, total: number, stage: "sweep" | "grips") => void;
+
 export const DEFAULT_GRID_SPACING_DEG = 2;
 export const DEFAULT_TOP = 5;
 /** Accepted screen settings (user units). */
@@ -211,6 +218,8 @@ interface Context {
   readonly cover: CoverModel;
   readonly unit: { readonly across: TradeBreak; readonly alongMagnus: TradeBreak };
   readonly scratch: TurnAverage;
+  /** Called once each grip or hold is flown (the screen's progress). */
+  flown?: () => void;
 }
 
 /** Linear seam movement (arm side, up; m) of a coefficient for the pitch. */
@@ -276,6 +285,7 @@ function describe(ctx: Context, axisIn: Readonly<Vec3>, reference?: ReferenceNam
   const rob = robustness(axis, s.spreadRad, (x, y, z) => linearScore(ctx, x, y, z));
   const rankScore = s.rank === "strength" ? score : s.rank === "robust" ? rob.p10 : 0.5 * (score + rob.p10);
   const near = nearestLandmark(ctx.landmarks, axis);
+  ctx.flown?.();
   return {
     axis,
     landmark: { name: near.landmark.name, angleRad: near.angleRad },
@@ -333,7 +343,7 @@ function reachOf(want: Want, armSideM: Float64Array, verticalM: Float64Array, fl
 }
 
 /** Screens one pitch. Throws RangeError for an invalid pitch or settings. */
-export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResult {
+export function screenPitch(pitch: Pitch, settings: ScreenSettings, onProgress?: ScreenProgress): ScreenResult {
   assertPitch(pitch);
   if (!(Number.isInteger(settings.top) && settings.top >= TOP_RANGE[0] && settings.top <= TOP_RANGE[1])) {
     throw new RangeError(`top ${settings.top} must be a whole number from ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
@@ -398,6 +408,13 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings): ScreenResul
     } else refined.push({ axis, score: r.score });
   }
   refined.sort((p, q) => q.score - p.score);
+  if (onProgress) {
+    // one step for the sweep, one for each grip and classic hold flown
+    const total = 1 + Math.min(refined.length, settings.top + 2) + findReferenceAxes(seam).length;
+    let done = 1;
+    onProgress(done, total, "sweep");
+    ctx.flown = () => onProgress(++done, total, "grips");
+  }
   const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
   const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));

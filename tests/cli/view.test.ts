@@ -3,16 +3,15 @@
  * Needs `registerView` (src/cli/view.ts) registered in src/cli/main.ts: until it is,
  * the first test says so and the rest fail with the command missing.
  */
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { pathToFileURL } from "node:url";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { formatMovementIn as inches } from "../../src/render/numbers.js";
 import type { ViewData } from "../../src/render/page3d/data.js";
 import { runCli } from "../support/cli.js";
-import { canvasPixels, launchChromium, openPage, pauseAt, RUN_BROWSER_TESTS, shownFigures, viewState } from "../support/browser.js";
+import { canvasPixels, openPage, pauseAt, RUN_BROWSER_TESTS, sharedBrowser, shownFigures, viewState } from "../support/browser.js";
 
 const TIMEOUT_MS = 120_000;
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-view-cli-"));
@@ -28,7 +27,7 @@ describe("seam-atlas view (compiled CLI)", () => {
   it("is a registered command (registerView from src/cli/view.ts in src/cli/main.ts)", () => {
     const r = runCli(["view", "--help"]);
     expect(r.code).toBe(0);
-    expect(r.stdout, "`seam-atlas view --help` does not show the view command: register it in src/cli/main.ts").toContain("self-contained 3-D page");
+    expect(r.stdout, "`seam-atlas view --help` does not show the view command: register it in src/cli/main.ts").toContain("self-contained page");
     expect(r.stdout).toContain("--out");
     expect(r.stdout).toContain("--pitch-name");
     expect(r.stdout).toContain("--seam-points");
@@ -45,6 +44,33 @@ describe("seam-atlas view (compiled CLI)", () => {
     expect(data.command).toBe("view");
     expect(data.team).toBe(screen.team);
     expect(data.pitches.map((p) => p.report)).toEqual(screen.pitches);
+  }, TIMEOUT_MS);
+
+  it("writes the workbench with no pitch at all (the page starts from its form): no report embedded, the model profile and the settings given", () => {
+    const out = join(tmp, "empty.html");
+    const r = runCli(["view", "--grid", "4", "--elevation-ft", "5280", "--out", out]);
+    expect(r.stderr).toBe("");
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/^wrote .*empty\.html \(no pitch screened yet: type one into its form, \d+ KB/);
+    const data = embedded(out);
+    expect(data.pitches).toEqual([]);
+    expect(data.fromFile).toBe(false);
+    expect(data.settings).toMatchObject({ grid: "4", "elevation-ft": "5280" });
+    // the built-in profile's name and parameters (src/physics/seamModel/parameters.ts defaults; README's table: laminar 80, turbulent 120)
+    expect(data.model.name).toBe(JSON.parse(runCli(["screen", "--hand", "R", "--speed", "90", "--spin", "2000", "--tilt", "12:00", "--grid", "10", "--top", "1", "--json"]).stdout).input.model.name);
+    expect(data.model.parameters.laminarSeparationDeg).toBe(80);
+    expect(data.model.parameters.turbulentSeparationDeg).toBe(120);
+  }, TIMEOUT_MS);
+
+  it("embeds a --model profile the page's own screens then use (its name and every parameter)", () => {
+    const profile = join(tmp, "lab.json");
+    writeFileSync(profile, JSON.stringify({ name: "lab-fit", parameters: { scale: 1.4, laminarSeparationDeg: 82 } }));
+    const out = join(tmp, "model.html");
+    expect(runCli(["view", "--model", profile, "--out", out]).code).toBe(0);
+    const data = embedded(out);
+    expect(data.model.name).toBe("lab-fit");
+    expect(data.model.parameters.scale).toBe(1.4);
+    expect(data.model.parameters.laminarSeparationDeg).toBe(82);
   }, TIMEOUT_MS);
 
   it("writes to out/view.html under the working folder when --out is not given", () => {
@@ -87,18 +113,12 @@ describe("seam-atlas view (compiled CLI)", () => {
 });
 
 describe.runIf(RUN_BROWSER_TESTS)("the page `seam-atlas view` writes, in chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchChromium();
-  }, TIMEOUT_MS);
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser(TIMEOUT_MS);
 
   it("opens from file:// with no console errors and no http(s) request, draws the ball, and shows screen --json's numbers", async () => {
     if (!existsSync(page)) expect(runCli(["view", "--demo", "--grid", "6", "--out", page]).code).toBe(0);
     const screen = JSON.parse(runCli(["screen", "--demo", "--grid", "6", "--json"]).stdout);
-    const opened = await openPage(browser, pathToFileURL(page).href);
+    const opened = await openPage(browser(), pathToFileURL(page).href);
     const p = opened.page;
     expect((await viewState(p)).webgl).toBe(true);
     await pauseAt(p, 0);

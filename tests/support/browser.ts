@@ -1,5 +1,5 @@
 /**
- * Shared set-up for the 3-D page's browser tests: Debian's chromium driven by
+ * Shared set-up for the workbench page's browser tests: Debian's chromium driven by
  * playwright-core, software WebGL (SwiftShader), and recorders for console errors,
  * page errors and every request the page makes.
  *
@@ -8,6 +8,7 @@
  */
 import { existsSync } from "node:fs";
 import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 
 export const CHROMIUM_PATH = "/usr/bin/chromium";
 export const CHROMIUM_ARGS = [
@@ -26,13 +27,28 @@ export const HAVE_CHROMIUM = existsSync(CHROMIUM_PATH);
 export const RUN_BROWSER_TESTS = HAVE_CHROMIUM || IN_CI;
 
 if (!RUN_BROWSER_TESTS) {
-  console.warn(`skipping the 3-D page's browser tests: ${CHROMIUM_PATH} is missing (apt-get install -y chromium); with CI=true they fail instead`);
+  console.warn(`skipping the workbench page's browser tests: ${CHROMIUM_PATH} is missing (apt-get install -y chromium); with CI=true they fail instead`);
 }
 
 /** A fresh headless chromium (playwright gives each launch its own new profile). */
 export async function launchChromium(): Promise<Browser> {
-  if (!HAVE_CHROMIUM) throw new Error(`${CHROMIUM_PATH} is missing: the 3-D page tests need Debian's chromium (apt-get install -y chromium)`);
+  if (!HAVE_CHROMIUM) throw new Error(`${CHROMIUM_PATH} is missing: the workbench page tests need Debian's chromium (apt-get install -y chromium)`);
   return chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
+}
+
+/** A chromium for the tests of the enclosing describe block: launched before them, closed after; the getter returns it. */
+export function sharedBrowser(timeoutMs: number): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchChromium();
+  }, timeoutMs);
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error("the shared chromium is not running (launched in beforeAll)");
+    return browser;
+  };
 }
 
 export interface OpenedPage {

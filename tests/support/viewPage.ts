@@ -36,14 +36,24 @@ export function demoScreen() {
   return runScreen(parseScreen(DEMO_ARGV));
 }
 
-/** The demo page's data, its HTML and a file:// URL of it written to a fresh temporary folder. */
-export async function buildDemoPage(): Promise<{ data: ViewData; html: string; pageUrl: string }> {
-  const outcome = demoScreen();
-  const data = viewData(outcome.job.team, outcome.screened);
+/** The page's data for a screen outcome, as `view` embeds it (the settings as typed). */
+export function pageData(outcome: ReturnType<typeof demoScreen>, settings: Record<string, string> = { grid: DEMO_ARGV.grid, top: DEMO_ARGV.top }): ViewData {
+  const j = outcome.job;
+  return viewData({ team: j.team, fromFile: j.fromFile, profile: j.model.profile, settings }, outcome.screened);
+}
+
+/** Writes a page to a fresh temporary folder; its file:// URL. */
+export async function writePage(data: ViewData): Promise<{ html: string; pageUrl: string }> {
   const html = await buildViewHtml(data);
   const file = join(mkdtempSync(join(tmpdir(), "seam-atlas-page3d-")), "view.html");
   writeFileSync(file, html);
-  return { data, html, pageUrl: pathToFileURL(file).href };
+  return { html, pageUrl: pathToFileURL(file).href };
+}
+
+/** The demo page's data, its HTML and a file:// URL of it written to a fresh temporary folder. */
+export async function buildDemoPage(): Promise<{ data: ViewData; html: string; pageUrl: string }> {
+  const data = pageData(demoScreen());
+  return { data, ...(await writePage(data)) };
 }
 
 /** The figures the page must show for `o`, in the terminal's formatting (the shared formatting of src/render/numbers.ts). */

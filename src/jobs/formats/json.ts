@@ -16,6 +16,7 @@ import { FORCE_TIMELINE_PHASES, type ForceResult } from "../force.js";
 import type { LandmarksResult } from "../landmarks.js";
 import type { MeasureResult } from "../measure.js";
 import type { ScreenOutcome } from "../screen.js";
+import { screenJson } from "./screenJson.js";
 
 /** Pretty-printed JSON with a trailing newline. */
 export function jsonText(doc: unknown): string {
@@ -67,10 +68,7 @@ export function landmarksDocument(r: LandmarksResult) {
 }
 
 export function screenDocument(o: ScreenOutcome) {
-  const reports = o.screened.map((s) => s.report);
-  return reports.length === 1 && !o.job.fromFile
-    ? { ...head("screen"), ...reports[0] }
-    : { ...head("screen"), ...(o.job.team ? { team: o.job.team } : {}), pitches: reports };
+  return screenJson({ tool: TOOL_NAME, version: TOOL_VERSION }, o.screened.map((s) => s.report), o.job);
 }
 
 /**

@@ -3,14 +3,17 @@
  * with --model (JSON: { "name": ..., "parameters": { "<name>": value } }, read
  * strictly), with --band-center / --band-width overriding the profile's fixation
  * band (the band the sampler and the model share). Every output echoes the
- * profile's name and hash.
+ * profile's name and hash. Reading the file is this module's part; the rest is
+ * request/profile.ts (pure, shared with the workbench page).
  */
 import { readFileSync } from "node:fs";
 import { InputError } from "../../io/errors.js";
 import { parseStrictJson } from "../../io/json.js";
-import { seamModel, type SeamModel } from "../../physics/seamModel/model.js";
-import { defaultProfile, resolveProfile, SEAM_MODEL_PARAMETERS, type SeamModelProfile } from "../../physics/seamModel/parameters.js";
-import { parseInRange, type Request } from "./values.js";
+import { defaultProfile, resolveProfile, type SeamModelProfile } from "../../physics/seamModel/parameters.js";
+import { withBandOptions } from "./profile.js";
+import type { Request } from "./values.js";
+
+export { buildModel } from "./profile.js";
 
 export interface ModelChoice {
   readonly profile: SeamModelProfile;
@@ -37,24 +40,6 @@ export function readProfileFile(path: string): SeamModelProfile {
 /** The profile for a request: --model FILE or the defaults, with the band options applied. */
 export function modelChoice(request: Request): ModelChoice {
   const source = request.model === undefined ? undefined : String(request.model);
-  let profile = source === undefined ? defaultProfile() : readProfileFile(source);
-  const overrides: Record<string, number> = {};
-  const range = (name: string) => SEAM_MODEL_PARAMETERS.find((p) => p.name === name)!;
-  const center = range("bandCenterDeg");
-  const width = range("bandWidthDeg");
-  if (request["band-center"] !== undefined) overrides.bandCenterDeg = parseInRange("band-center", request["band-center"], center.min, center.max, "deg");
-  if (request["band-width"] !== undefined) overrides.bandWidthDeg = parseInRange("band-width", request["band-width"], width.min, width.max, "deg");
-  if (Object.keys(overrides).length) {
-    try {
-      profile = resolveProfile({ name: profile.name, parameters: { ...profile.values, ...overrides } }, "--band-center/--band-width");
-    } catch (err) {
-      throw new InputError((err as Error).message);
-    }
-  }
+  const profile = withBandOptions(source === undefined ? defaultProfile() : readProfileFile(source), request);
   return { profile, source };
-}
-
-/** A model for the profile at the default resolution (the seam shape from the request's sampler settings). */
-export function buildModel(profile: SeamModelProfile, seamShape: number): SeamModel {
-  return seamModel(profile, { seamShape });
 }

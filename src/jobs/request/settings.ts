@@ -24,7 +24,6 @@ import {
 } from "../../physics/launch.js";
 import { bandOf, type SeamModelProfile } from "../../physics/seamModel/parameters.js";
 import type { Band } from "../../sampling/band.js";
-import { modelChoice } from "./model.js";
 import { DEFAULT_FINGER_SPACING_IN, FINGER_SPACING_MAX_IN } from "../../screening/hand.js";
 import { DEFAULT_SPREAD_DEG } from "../../screening/robustness.js";
 import { DEFAULT_GRID_SPACING_DEG, DEFAULT_TOP, GRID_SPACING_RANGE_DEG, RANKS, SPREAD_RANGE_DEG, TOP_RANGE, type RankBy } from "../../screening/screen.js";
@@ -41,8 +40,8 @@ export interface SamplerSettings {
   readonly seamPoints: number;
 }
 
-/** Seam shape, band and seam resolution; the band is the model profile's (after --band-center/--band-width). */
-export function samplerSettings(request: Request, profile: SeamModelProfile = modelChoice(request).profile): SamplerSettings {
+/** Seam shape, band and seam resolution; the band is the model profile's (after --band-center/--band-width: request/model.ts modelChoice). */
+export function samplerSettings(request: Request, profile: SeamModelProfile): SamplerSettings {
   const seamShape =
     request["seam-shape"] === undefined ? DEFAULT_SEAM_SHAPE : parseNumber("seam-shape", request["seam-shape"], "a seam shape b strictly between 0 and 0.5");
   try {

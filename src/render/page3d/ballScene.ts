@@ -5,13 +5,14 @@
  * the flow frame, turned by its pose at the current phase.
  */
 import { AmbientLight, DirectionalLight, Group, Mesh, PerspectiveCamera, Quaternion, Scene, Vector3, WebGLRenderer, type Object3D } from "three";
+import { BALL_RADIUS_IN } from "../../../geometry/ball.js";
 import type { SeamSamples } from "../../../geometry/seamSamples.js";
 import type { Stitches } from "../../../geometry/stitches.js";
 import type { Vec3 } from "../../../geometry/vec.js";
 import type { Band } from "../../sampling/band.js";
 import { coverMesh, seamTube, stitchMesh, type SeamTube } from "./ballMeshes.js";
 import type { FieldFrameVectors } from "./data.js";
-import { aimArrow, arrowMesh, bandGroup, labelSprite } from "./overlays.js";
+import { aimArrow, arrowMesh, bandGroup, padMesh, type PadMark } from "./overlays.js";
 import { hexToInt, PALETTE } from "./palette.js";
 import { BallPose, FIELD_TO_WORLD, flowSpinAxis, flowToFieldQuaternion } from "./sceneMath.js";
 
@@ -28,6 +29,16 @@ const SIDE_LABEL_AZIMUTH_RAD = (40 * Math.PI) / 180;
 const PUSH_AZIMUTH_RAD = (32 * Math.PI) / 180;
 /** A seam-force coefficient below this draws no push arrow: there is no direction to show (dimensionless). */
 const NO_PUSH = 1e-12;
+/** Where a pad's label is anchored: just off the cover, unit-ball lengths. */
+const PAD_LABEL_RADIUS = 1.03;
+
+/** A label's place in the scene: its text, colour and world position (the page lays the labels out on screen). */
+export interface LabelAnchor {
+  readonly key: string;
+  readonly text: string;
+  readonly color: string;
+  readonly world: Vector3;
+}
 
 /** Frees the GPU buffers of everything under `root` (geometries, materials, textures) once it leaves the scene. */
 function dispose(root: Object3D): void {
@@ -68,11 +79,15 @@ export class BallScene {
   private readonly spinArrow = arrowMesh(PALETTE.spinAxis, 2 * SPIN_HALF_LENGTH, 0.014);
   private readonly flightArrow = arrowMesh(PALETTE.flight, FLIGHT_LENGTH);
   private pushArrow: Group | null = null;
-  private readonly spinLabel = labelSprite("spin axis", PALETTE.spinAxis);
-  private readonly flightLabel = labelSprite("flight", PALETTE.flight);
-  private readonly pushLabel = labelSprite("seam push", PALETTE.push);
-  private readonly plusLabel = labelSprite("+ side", PALETTE.sidePlus, 0.13);
-  private readonly minusLabel = labelSprite("\u2212 side", PALETTE.sideMinus, 0.13);
+  // label anchors in the flow frame (the pads': in the ball frame)
+  private readonly spinLabel = new Vector3();
+  private readonly flightLabel = new Vector3(0, 0, ARROW_GAP + FLIGHT_LENGTH + 0.08);
+  private readonly pushLabel = new Vector3();
+  private pushShown = false;
+  private readonly plusLabel = new Vector3();
+  private readonly minusLabel = new Vector3();
+  private readonly pads = new Group();
+  private padMarks: { label: string; color: string; at: Vector3 }[] = [];
 
   constructor(canvas: HTMLCanvasElement) {
     // asked first on a spare canvas, so a browser without WebGL 2 gets our message and no console error from three.js
@@ -87,7 +102,7 @@ export class BallScene {
     const field = new Group();
     field.quaternion.copy(FIELD_TO_WORLD);
     field.add(this.flow);
-    this.flow.add(this.ball, this.spinArrow, this.flightArrow, this.spinLabel, this.flightLabel, this.pushLabel, this.plusLabel, this.minusLabel);
+    this.flow.add(this.ball, this.spinArrow, this.flightArrow);
     this.scene.add(field, new AmbientLight(0xffffff, 0.9));
     // the key light rides with the camera so the side you look at is always lit
     const key = new DirectionalLight(0xffffff, 2.2);
@@ -95,7 +110,6 @@ export class BallScene {
     this.camera.add(key);
     this.scene.add(this.camera);
     aimArrow(this.flightArrow, new Vector3(0, 0, ARROW_GAP), new Vector3(0, 0, 1));
-    this.flightLabel.position.set(0.06, 0, ARROW_GAP + FLIGHT_LENGTH + 0.08);
   }
 
   /** The ball's meshes and the band, rebuilt only when the seam or the band changes. */
@@ -108,7 +122,7 @@ export class BallScene {
       dispose(child);
     }
     this.seam = seamTube(seam);
-    this.ball.add(coverMesh(), this.seam.mesh, stitchMesh(stitches));
+    this.ball.add(coverMesh(), this.seam.mesh, stitchMesh(stitches), this.pads);
     if (this.band) {
       this.flow.remove(this.band);
       dispose(this.band);
@@ -118,8 +132,8 @@ export class BallScene {
     // side labels sit on the band centre line, turned off the a line so the spin axis and push do not cover them
     const r = SIDE_LABEL_RADIUS * Math.sin(band.centerRad);
     const z = SIDE_LABEL_RADIUS * Math.cos(band.centerRad);
-    this.plusLabel.position.set(r * Math.cos(SIDE_LABEL_AZIMUTH_RAD), -r * Math.sin(SIDE_LABEL_AZIMUTH_RAD), z);
-    this.minusLabel.position.set(-r * Math.cos(SIDE_LABEL_AZIMUTH_RAD), -r * Math.sin(SIDE_LABEL_AZIMUTH_RAD), z);
+    this.plusLabel.set(r * Math.cos(SIDE_LABEL_AZIMUTH_RAD), -r * Math.sin(SIDE_LABEL_AZIMUTH_RAD), z);
+    this.minusLabel.set(-r * Math.cos(SIDE_LABEL_AZIMUTH_RAD), -r * Math.sin(SIDE_LABEL_AZIMUTH_RAD), z);
     this.bandCenterRad = band.centerRad;
   }
 
@@ -128,7 +142,7 @@ export class BallScene {
     flowToFieldQuaternion(frame, this.flow.quaternion);
     const w = flowSpinAxis(gyroRad);
     aimArrow(this.spinArrow, w.clone().multiplyScalar(-SPIN_HALF_LENGTH), w);
-    this.spinLabel.position.copy(w.clone().multiplyScalar(SPIN_HALF_LENGTH + 0.06));
+    this.spinLabel.copy(w.clone().multiplyScalar(SPIN_HALF_LENGTH + 0.06));
   }
 
   /**
@@ -144,8 +158,8 @@ export class BallScene {
     }
     this.pushArrow = null;
     const size = Math.hypot(push.across, push.alongMagnus);
-    this.pushLabel.visible = size > NO_PUSH;
-    if (!this.pushLabel.visible) return;
+    this.pushShown = size > NO_PUSH;
+    if (!this.pushShown) return;
     const length = PUSH_MIN_LENGTH + PUSH_SPAN_LENGTH * Math.min(1, size / Math.max(pushScale, NO_PUSH));
     const direction = new Vector3(push.across / size, -push.alongMagnus / size, 0);
     // from the band's centre line on the side it points to, turned a little off that azimuth so that it
@@ -156,7 +170,46 @@ export class BallScene {
     this.pushArrow = arrowMesh(PALETTE.push, length, 0.03);
     aimArrow(this.pushArrow, start, direction);
     this.flow.add(this.pushArrow);
-    this.pushLabel.position.copy(start).addScaledVector(direction, length + 0.06).add(new Vector3(0, 0, -0.12));
+    this.pushLabel.copy(start).addScaledVector(direction, length + 0.04);
+  }
+
+  /**
+   * The finger pads of the grip on the ball (ball frame, src/screening/hand.ts: the
+   * pads' centres, the fingertip direction and the pad sizes in inches), carried round
+   * with the ball; none to clear them.
+   */
+  setPads(marks: readonly PadMark[]): void {
+    for (const child of [...this.pads.children]) {
+      this.pads.remove(child);
+      dispose(child);
+    }
+    this.padMarks = [];
+    for (const m of marks) {
+      this.pads.add(padMesh(m, BALL_RADIUS_IN));
+      const d = new Vector3(m.direction[0], m.direction[1], m.direction[2]).normalize();
+      this.padMarks.push({ label: m.label, color: m.working ? PALETTE.finger : PALETTE.fingerOther, at: d.multiplyScalar(PAD_LABEL_RADIUS) });
+    }
+  }
+
+  showPads(shown: boolean): void {
+    this.pads.visible = shown;
+  }
+
+  /** The labels' places in the world at the current pose (after setPhase). */
+  labelAnchors(): LabelAnchor[] {
+    this.scene.updateMatrixWorld(true);
+    const inFlow = (key: string, text: string, color: string, at: Vector3): LabelAnchor => ({ key, text, color, world: at.clone().applyMatrix4(this.flow.matrixWorld) });
+    const out = [
+      inFlow("flight", "flight", PALETTE.flight, this.flightLabel),
+      inFlow("spin", "spin axis", PALETTE.spinAxis, this.spinLabel),
+      ...(this.pushShown ? [inFlow("push", "seam push", PALETTE.push, this.pushLabel)] : []),
+      inFlow("plus", "+ side", PALETTE.sidePlus, this.plusLabel),
+      inFlow("minus", "\u2212 side", PALETTE.sideMinus, this.minusLabel),
+    ];
+    if (this.pads.visible) {
+      for (const p of this.padMarks) out.push({ key: `pad-${p.label}`, text: p.label, color: p.color, world: p.at.clone().applyMatrix4(this.ball.matrixWorld) });
+    }
+    return out;
   }
 
   /** Turns the ball to phase `phiRad` (radians) of its revolution. */

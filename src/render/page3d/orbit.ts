@@ -49,7 +49,12 @@ export class OrbitControl {
   }
 
   reset(): void {
-    this.view = { ...this.home };
+    this.setView(this.home);
+  }
+
+  /** Goes to `view` (a preset camera). */
+  setView(view: OrbitView): void {
+    this.view = { ...view };
     this.onChange();
   }
 

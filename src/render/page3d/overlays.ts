@@ -3,12 +3,13 @@
  * What is drawn fixed to the air flow (flow frame of src/sampling/brute.ts: v = +z
  * the flight direction, a = +x the push line): the separation band with its two
  * limiting circles theta = c -+ w/2 about v, tinted by side of the a-split, and
- * the arrows with their labels. The ball turns inside these; they never move.
+ * the arrows (their labels are the page's, laid out on the screen so none
+ * overlaps). The ball turns inside these; they never move. The finger pads ride on
+ * the ball.
  */
 import {
   BufferAttribute,
   BufferGeometry,
-  CanvasTexture,
   ConeGeometry,
   CylinderGeometry,
   DoubleSide,
@@ -16,9 +17,6 @@ import {
   Mesh,
   MeshBasicMaterial,
   MeshStandardMaterial,
-  SRGBColorSpace,
-  Sprite,
-  SpriteMaterial,
   TorusGeometry,
   Vector3,
 } from "three";
@@ -122,38 +120,50 @@ export function aimArrow(arrow: Group, start: Vector3, direction: Vector3): void
   arrow.quaternion.setFromUnitVectors(UP, direction.clone().normalize());
 }
 
-/**
- * A text label that always faces the camera. The ball hides it when it is behind
- * the ball, like the arrow it names, so a label never floats over the cover
- * without its arrow.
- */
-export function labelSprite(text: string, color: string, heightWorld = 0.16): Sprite {
-  const fontPx = 44;
-  const canvas = document.createElement("canvas");
-  const probe = canvas.getContext("2d");
-  const font = `600 ${fontPx}px system-ui, "Segoe UI", "DejaVu Sans", sans-serif`;
-  let width = 8 * fontPx;
-  if (probe) {
-    probe.font = font;
-    width = Math.ceil(probe.measureText(text).width) + 24;
+/** A finger pad on the ball: centre and fingertip direction in the ball frame, size in inches. */
+export interface PadMark {
+  readonly direction: readonly [number, number, number];
+  readonly pointing: readonly [number, number, number];
+  readonly widthIn: number;
+  readonly lengthIn: number;
+  readonly label: string;
+  /** Grips a seam to set the spin (drawn darker) or not (the thumb, a curled finger). */
+  readonly working: boolean;
+}
+
+/** Radius the pads are drawn at: above the cover, under the stitches' tops (unit-ball lengths). */
+const PAD_RADIUS = 1.008;
+
+/** A pad as an oval patch lying on the ball: its length along the fingertip direction, its width across, both in inches on a ball of `ballRadiusIn`. */
+export function padMesh(m: PadMark, ballRadiusIn: number): Mesh {
+  const d = new Vector3(...m.direction).normalize();
+  const u = new Vector3(...m.pointing).projectOnPlane(d).normalize();
+  const v = new Vector3().crossVectors(d, u);
+  const a = m.lengthIn / 2 / ballRadiusIn;
+  const b = m.widthIn / 2 / ballRadiusIn;
+  const rings = 6;
+  const around = 36;
+  const positions: number[] = [];
+  const index: number[] = [];
+  const p = new Vector3();
+  positions.push(...d.clone().multiplyScalar(PAD_RADIUS).toArray());
+  for (let r = 1; r <= rings; r++) {
+    for (let k = 0; k < around; k++) {
+      const t = (2 * Math.PI * k) / around;
+      p.copy(d).addScaledVector(u, (a * r * Math.cos(t)) / rings).addScaledVector(v, (b * r * Math.sin(t)) / rings).normalize().multiplyScalar(PAD_RADIUS);
+      positions.push(p.x, p.y, p.z);
+    }
   }
-  canvas.width = width;
-  canvas.height = Math.round(fontPx * 1.5);
-  const ctx = canvas.getContext("2d");
-  if (ctx) {
-    ctx.font = font;
-    ctx.textBaseline = "middle";
-    ctx.lineWidth = 8;
-    ctx.strokeStyle = PALETTE.background;
-    ctx.strokeText(text, 12, canvas.height / 2);
-    ctx.fillStyle = color;
-    ctx.fillText(text, 12, canvas.height / 2);
+  const at = (r: number, k: number) => (r === 0 ? 0 : 1 + (r - 1) * around + (k % around));
+  for (let k = 0; k < around; k++) index.push(0, at(1, k), at(1, k + 1));
+  for (let r = 1; r < rings; r++) {
+    for (let k = 0; k < around; k++) index.push(at(r, k), at(r + 1, k), at(r + 1, k + 1), at(r, k), at(r + 1, k + 1), at(r, k + 1));
   }
-  const texture = new CanvasTexture(canvas);
-  texture.colorSpace = SRGBColorSpace;
-  const sprite = new Sprite(new SpriteMaterial({ map: texture, depthWrite: false, transparent: true }));
-  sprite.scale.set((heightWorld * canvas.width) / canvas.height, heightWorld, 1);
-  sprite.center.set(0, 0.5);
-  sprite.renderOrder = 10;
-  return sprite;
+  const geometry = new BufferGeometry();
+  geometry.setAttribute("position", new BufferAttribute(new Float32Array(positions), 3));
+  geometry.setIndex(index);
+  const material = new MeshBasicMaterial({ color: hexToInt(m.working ? PALETTE.finger : PALETTE.fingerOther), transparent: true, opacity: 0.78, side: DoubleSide, depthWrite: false });
+  const mesh = new Mesh(geometry, material);
+  mesh.renderOrder = 3;
+  return mesh;
 }

@@ -20,6 +20,15 @@ export const PALETTE = {
   spinAxis: "#a68cf0",
   push: "#ff6d8a",
   caution: "#ffd27a",
+  /** A pad that grips a seam, and the thumb and the curled finger (deep blues, to read on the cream cover). */
+  finger: "#2457a6",
+  fingerOther: "#5b86c4",
+  /** A pad's label: white letters on this. */
+  fingerLabel: "#1d3f73",
+  /** A refused value's message beside its field. */
+  error: "#ffa394",
+  /** The chosen entry of a list, behind the text. */
+  chosen: "#26405a",
 } as const;
 
 export type PaletteName = keyof typeof PALETTE;

@@ -1,8 +1,9 @@
 /// <reference lib="dom" />
 /**
  * The side panel's words and numbers, written into the page's elements. Every
- * figure is taken from the embedded screen report and printed with the terminal's
- * rules (numbers.ts), so the page and `seam-atlas screen` show the same digits.
+ * figure is taken from the screen report and printed with the terminal's rules
+ * (numbers.ts), so the page and `seam-atlas screen` show the same digits; the grip is
+ * told in the cards' words (render/paper/words.ts).
  */
 import type { OrientationReport, ScreenReport } from "../../screening/report.js";
 import type { ListedOrientation } from "./data.js";
@@ -24,27 +25,19 @@ export function pitchSummary(report: ScreenReport): string {
   );
 }
 
-/** The fingers as the terminal table words them. */
-export function fingerText(o: OrientationReport): string {
-  return o.fingers
-    .map((f) => `${f.finger} ${fixedDigits(f.seamDistanceIn, 2)} in from seam (${f.region.part === "seam" ? "on the seam" : f.region.near})`)
-    .join("; ");
-}
-
 /** The displayed figures of one orientation, keyed as the page's data-field attributes. */
 export function orientationFigures(o: OrientationReport): [field: string, label: string, value: string][] {
   return [
-    ["score", "Score, in", inches(o.score)],
-    ["push-clock", "Seam movement toward (clock, same view)", o.seamMovement.clock ?? "-"],
-    ["arm-side", "Seam movement toward arm side, in", inches(o.seamMovement.armSideIn)],
+    ["score", "Seam movement toward the wanted direction, in", inches(o.score)],
+    ["arm-side", "Seam movement toward the arm side, in", inches(o.seamMovement.armSideIn)],
     ["up", "Seam movement up, in", inches(o.seamMovement.verticalIn)],
-    ["crossings", "Seam crossings per turn", String(o.crossingsPerRevolution)],
-    ["robust-mean", "Robustness: mean, in", inches(o.robustness.meanIn)],
+    ["push-clock", "It points toward (clock, the pitch's view)", o.seamMovement.clock ?? "-"],
+    ["robust-mean", "Robustness, axis 5\u00b0 off: mean, in", inches(o.robustness.meanIn)],
     ["robust-p10", "Robustness: 10th percentile, in", inches(o.robustness.p10In)],
+    ["crossings", "Seams past the front per turn", String(o.crossingsPerRevolution)],
     ["axis", "Axis on the ball", o.latLon.text],
     ["landmark", "Nearest landmark", `${o.landmark.name} ${fixedDigits(o.landmark.angleDeg, 0)} deg`],
     ["seam-in-band", "Seam in band, turn average (occupancy)", percentText(o.occupancy.seamInBand)],
-    ["fingers", "Fingers", fingerText(o)],
   ];
 }
 
@@ -58,14 +51,19 @@ export function renderFigures(dl: HTMLElement, o: OrientationReport): void {
     const dd = doc.createElement("dd");
     dd.dataset.field = field;
     dd.textContent = value;
-    // sentences read better across the whole panel than squeezed into the number column
-    if (field === "fingers") dt.className = dd.className = "wide";
     dl.append(dt, dd);
   }
 }
 
-/** The list of orientations as pressable buttons; the chosen one is aria-pressed. */
-export function renderOrientationList(ul: HTMLElement, listed: readonly ListedOrientation[], chosen: number, onChoose: (index: number) => void): void {
+/** The list of orientations as pressable buttons, each with its "on the sheet" box; the chosen one is aria-pressed. */
+export function renderOrientationList(
+  ul: HTMLElement,
+  listed: readonly ListedOrientation[],
+  chosen: number,
+  onChoose: (index: number) => void,
+  ticked: ReadonlySet<number> = new Set(),
+  onTick: (index: number, on: boolean) => void = () => {},
+): void {
   const doc = ul.ownerDocument;
   ul.replaceChildren();
   listed.forEach((item, index) => {
@@ -75,13 +73,24 @@ export function renderOrientationList(ul: HTMLElement, listed: readonly ListedOr
     button.dataset.index = String(index);
     button.setAttribute("aria-pressed", String(index === chosen));
     const name = doc.createElement("span");
-    name.textContent = `${item.label}  ${item.orientation.latLon.text}`;
+    name.textContent = item.label;
     const what = doc.createElement("span");
     what.className = "what";
-    what.textContent = `score ${inches(item.orientation.score)} in`;
+    what.textContent = `${inches(item.orientation.score)} in`;
     button.append(name, what);
+    button.setAttribute("aria-label", `${item.label}: ${inches(item.orientation.score)} in of seam movement toward the wanted direction`);
     button.addEventListener("click", () => onChoose(index));
-    li.append(button);
+    const tick = doc.createElement("label");
+    tick.className = "check";
+    const box = doc.createElement("input");
+    box.type = "checkbox";
+    box.className = "sheet-pick";
+    box.dataset.index = String(index);
+    box.checked = ticked.has(index);
+    box.setAttribute("aria-label", `${item.label} on the printed sheet`);
+    box.addEventListener("change", () => onTick(index, box.checked));
+    tick.append(box, doc.createTextNode("sheet"));
+    li.append(button, tick);
     ul.append(li);
   });
 }

@@ -61,3 +61,20 @@ export class BallPose {
     return out.multiplyQuaternions(this.turn, this.q0);
   }
 }
+
+/**
+ * The phase at which the turning ball stands as the hand holds it at release: the
+ * field pose flowToField * turn(w, phi) * ballToFlow(0) equals `ballToField` (row-major,
+ * src/screening/hand.ts) when both map the spin axis to the pitch's spin axis, as the
+ * hand model's release rotation does; phi in [0, 2 pi).
+ */
+export function releasePhase(frame: FieldFrameVectors, axis: Readonly<Vec3>, gyroRad: number, ballToField: readonly number[]): number {
+  const m = ballToField;
+  const release = new Quaternion().setFromRotationMatrix(new Matrix4().set(m[0], m[1], m[2], 0, m[3], m[4], m[5], 0, m[6], m[7], m[8], 0, 0, 0, 0, 1));
+  const q0 = ballToFlowQuaternionAtPhaseZero(axis, gyroRad);
+  const atZero = new Quaternion(q0[0], q0[1], q0[2], q0[3]);
+  const turn = flowToFieldQuaternion(frame).invert().multiply(release).multiply(atZero.invert());
+  const w = flowSpinAxis(gyroRad);
+  const phi = 2 * Math.atan2(turn.x * w.x + turn.y * w.y + turn.z * w.z, turn.w);
+  return ((phi % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+}

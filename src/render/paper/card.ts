@@ -10,8 +10,7 @@ import type { OrientationReport, ScreenReport } from "../../screening/report.js"
 import { fixed } from "../numbers.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import type { Box, Layout } from "./layouts.js";
-import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
-import { PT_PER_IN } from "./pdfScene.js";
+import { PT_PER_IN, setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
 import { cardDrawings, type CardDrawings } from "./views.js";
 import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareOwnRow, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
 
@@ -113,6 +112,18 @@ export function cardOrigins(page: Layout): [number, number][] {
     for (let col = 0; col < g.columns; col++) out.push([left + col * (card.page.widthIn + g.gapIn), page.marginIn + r * (card.page.heightIn + g.gapIn)]);
   }
   return out;
+}
+
+/** The pages of a sheet layout holding `contents` in order, as many cards to a page as its grid holds (points). */
+export function sheetScenes(layout: Layout, contents: readonly CardContent[]): SceneNode[] {
+  const per = layout.grid!.columns * layout.grid!.rows;
+  const pages: SceneNode[] = [];
+  for (let k = 0; k < contents.length; k += per) {
+    const scene = createScene(layout.page.widthIn * PT_PER_IN, layout.page.heightIn * PT_PER_IN).attr({ "font-family": "Noto Sans, sans-serif" });
+    placeCards(scene, layout, contents.slice(k, k + per).map((c) => cardScene(layout.card!, c)));
+    pages.push(scene);
+  }
+  return pages;
 }
 
 /** Places card drawings on a page drawing at the sheet's grid origins. */

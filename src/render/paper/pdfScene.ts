@@ -17,7 +17,9 @@ import { runsWidth, textRuns, type FontFace, type FontWeight } from "../fonts.js
 import { sceneSize, type SceneNode } from "../scene.js";
 
 export type Doc = PDFKit.PDFDocument;
-export const PT_PER_IN = 72;
+import { PT_PER_IN } from "./textLayout.js";
+
+export { PT_PER_IN };
 
 interface Style {
   fill: string;

@@ -34,6 +34,9 @@ export interface SetText {
   readonly cut: number;
 }
 
+/** Points per inch (PDF's user unit). */
+export const PT_PER_IN = 72;
+
 export const INK = "#1b1b1b";
 const ELLIPSIS = "\u2026";
 

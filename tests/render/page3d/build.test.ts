@@ -59,9 +59,11 @@ describe("the 3-D page as a file", () => {
     expect(await buildViewHtml(data)).toBe(html);
   }, PAGE_TIMEOUT_MS);
 
-  it("carries the licence of every package bundled into the script (three.js and gl-matrix)", () => {
+  it("carries the licence of every package bundled into the script (three.js, gl-matrix, svg.js) and of the face it embeds (Noto Sans, SIL Open Font Licence 1.1)", () => {
     expect(html).toContain("/*! Licences of the bundled packages");
     expect(html).toMatch(/\ngl-matrix:\nCopyright \(c\) 2015-\d{4}, Brandon Jones/);
     expect(html).toMatch(/\nthree:\n[^]*?Permission is hereby granted/);
+    expect(html).toMatch(/\n@svgdotjs\/svg\.js:\n[^]*?Permission is hereby granted/);
+    expect(html).toMatch(/\n@fontsource\/noto-sans:\n[^]*?SIL OPEN FONT LICENSE Version 1\.1/);
   });
 });

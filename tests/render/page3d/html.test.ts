@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { cspHash, viewData } from "../../../src/render/page3d/build.js";
+import { cspHash } from "../../../src/render/page3d/build.js";
 import { renderViewHtml } from "../../../src/render/page3d/html.js";
 import { PAGE_CSS } from "../../../src/render/page3d/styles.js";
-import { demoScreen } from "../../support/viewPage.js";
+import { demoScreen, pageData } from "../../support/viewPage.js";
 
 describe("the 3-D page's HTML", () => {
   const outcome = demoScreen();
-  const data = viewData(outcome.job.team, outcome.screened);
+  const data = pageData(outcome);
 
   it("keeps a hostile team or pitcher name inside its JSON block (no '</script>' breaks out)", () => {
     const hostile = `</script><script>alert(1)</script><!--`;

@@ -1,5 +1,5 @@
 /**
- * The 3-D page (src/render/page3d/main.ts, the script the builder bundles) in a real
+ * The workbench page (src/page/main.ts, the script the builder bundles): its 3-D view in a real
  * browser: Debian's chromium with software WebGL, opened from file://.
  */
 import { mkdirSync } from "node:fs";
@@ -177,15 +177,21 @@ describe.runIf(RUN_BROWSER_TESTS)("the 3-D page in chromium (file://, software W
       [...document.querySelectorAll<HTMLInputElement | HTMLSelectElement>("input, select")].filter((e) => e.labels === null || e.labels.length === 0).map((e) => e.id),
     );
     expect(unlabelled).toEqual([]);
-    const buttonsAreButtons = await page.evaluate(() => ["play-toggle", "reset-view", "previous-orientation", "next-orientation"].every((id) => document.getElementById(id)?.tagName === "BUTTON"));
+    const buttonsAreButtons = await page.evaluate(() =>
+      ["play-toggle", "reset-view", "previous-orientation", "next-orientation", "camera-pitcher", "camera-side", "camera-catcher", "release-phase", "screen-button", "print-button"].every(
+        (id) => document.getElementById(id)?.tagName === "BUTTON",
+      ),
+    );
     expect(buttonsAreButtons).toBe(true);
     await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
     const reached = new Set<string>();
-    for (let i = 0; i < 30; i++) {
+    for (let i = 0; i < 90; i++) {
       await page.keyboard.press("Tab");
       reached.add(await page.evaluate(() => document.activeElement?.id || document.activeElement?.tagName || ""));
     }
-    for (const id of ["ball-canvas", "play-toggle", "spin-speed", "phase", "reset-view", "pitch-select", "previous-orientation", "next-orientation"]) expect(reached).toContain(id);
+    const controls = ["ball-canvas", "play-toggle", "spin-speed", "phase", "reset-view", "pitch-select", "previous-orientation", "next-orientation"];
+    const workbench = ["camera-pitcher", "camera-side", "camera-catcher", "release-phase", "show-fingers", "f-name", "f-hand", "f-speed", "f-spin", "f-tilt-as", "f-tilt", "f-view", "f-gyro-as", "f-gyro", "f-want", "f-elevation", "f-temperature", "screen-button", "paper-select", "print-button"];
+    for (const id of [...controls, ...workbench]) expect(reached).toContain(id);
     // Space on the focused play button starts the turn; again stops it
     await page.focus("#play-toggle");
     await page.keyboard.press("Space");

@@ -1,0 +1,106 @@
+/**
+ * The screen job from a request whose pitches and model profile are already in hand:
+ * the settings read from the options as typed, then every pitch screened by the one
+ * seam-force model. Pure (no file is read here), so the command line (jobs/screen.ts,
+ * which reads pitch and profile files) and the workbench page's worker build and run
+ * the same job by the same code, and their numbers cannot disagree.
+ */
+import type { AirConditions } from "../physics/air.js";
+import type { SeamModel } from "../physics/seamModel/model.js";
+import type { SeamModelProfile } from "../physics/seamModel/parameters.js";
+import { screenReport, type ScreenReport } from "../screening/report.js";
+import { screenPitch, type ScreenProgress, type ScreenResult } from "../screening/screen.js";
+import type { PitchInput } from "./request/pitchSpec.js";
+import { buildModel } from "./request/profile.js";
+import { airConditions, samplerSettings, screenOptions, topOption, windowStart, type SamplerSettings, type ScreenOptions } from "./request/settings.js";
+import type { Request } from "./request/values.js";
+
+export interface ScreenJob {
+  readonly team?: string;
+  readonly pitches: readonly PitchInput[];
+  readonly sampler: SamplerSettings;
+  readonly options: ScreenOptions;
+  readonly model: SeamModel;
+  readonly air: AirConditions;
+  readonly windowStartM: number;
+  readonly top: number;
+  /** True when the pitches came from a file or the demo (the JSON then lists pitches). */
+  readonly fromFile: boolean;
+}
+
+/** One screened pitch: the input, the library's result and its user-unit report. */
+export interface ScreenedPitch {
+  readonly input: PitchInput;
+  readonly result: ScreenResult;
+  readonly report: ScreenReport;
+}
+
+export interface ScreenOutcome {
+  readonly job: ScreenJob;
+  readonly screened: readonly ScreenedPitch[];
+}
+
+/** The options that shape a screen besides the pitch (and the model profile): `view` carries them into its page, whose own screens use them. */
+export const SCREEN_SETTINGS = [
+  "grid", "spread", "rank", "finger-spacing", "window-ft", "seam-shape", "seam-points", "top",
+  "elevation-ft", "elevation-m", "temperature-f", "temperature-c", "humidity", "pressure-hpa",
+] as const;
+
+/** How many candidates a command lists: its default, its range, and the fewest it needs. */
+export interface TopChoice {
+  readonly fallback?: number;
+  readonly range?: readonly [number, number];
+  readonly atLeast?: number;
+}
+
+/** Where a job's pitches and profile come from, read in this order after --top (so the first bad option is the one named). */
+export interface ScreenSources {
+  pitches(): { readonly team?: string; readonly pitches: PitchInput[] };
+  /** The seam-force profile, with the request's band options already applied. */
+  profile(): SeamModelProfile;
+  /** The model for the profile (default: a new one, request/profile.ts buildModel); a caller that screens again and again may keep one per profile. */
+  model?(profile: SeamModelProfile, seamShape: number): SeamModel;
+}
+
+export function screenJobOf(request: Request, sources: ScreenSources, top: TopChoice = {}): ScreenJob {
+  const chosen = topOption(request, top.fallback, top.range);
+  const { team, pitches } = sources.pitches();
+  const profile = sources.profile();
+  const sampler = samplerSettings(request, profile);
+  return {
+    team,
+    pitches,
+    sampler,
+    options: screenOptions(request),
+    model: (sources.model ?? buildModel)(profile, sampler.seamShape),
+    air: airConditions(request),
+    windowStartM: windowStart(request),
+    top: Math.max(chosen, top.atLeast ?? 1),
+    fromFile: request.demo === true || request.pitch !== undefined,
+  };
+}
+
+/** Screens every pitch of the job. */
+export function runScreen(job: ScreenJob): ScreenOutcome {
+  return { job, screened: job.pitches.map((p) => screenOne(job, p)) };
+}
+
+/** Screens one pitch of the job; `onProgress` hears each step (src/screening/screen.ts). */
+export function screenOne(job: ScreenJob, input: PitchInput, onProgress?: ScreenProgress): ScreenedPitch {
+  const s = job.sampler;
+  const result = screenPitch(
+    input.pitch,
+    {
+      ...job.options,
+      top: job.top,
+      seamShape: s.seamShape,
+      seamPoints: s.seamPoints,
+      band: s.band,
+      model: job.model,
+      air: job.air,
+      windowStartM: job.windowStartM,
+    },
+    onProgress,
+  );
+  return { input, result, report: screenReport(result, input.echo) };
+}
