@@ -180,8 +180,8 @@ export const RANK_WORDS: Record<RankBy, string> = {
 /** The comparison table's columns (inches; the caption above the table says so). */
 export const COMPARE_COLUMNS = (want: string) =>
   [
-    { title: "grip", share: 1.7 },
-    { title: "arm side", share: 0.95, align: "end" as const },
+    { title: "grip", share: 1.5 },
+    { title: "arm side", share: 1.15, align: "end" as const },
     { title: "up", share: 0.65, align: "end" as const },
     { title: want === "any" ? "size" : want === "arm" || want === "glove" ? `to ${want}` : want, share: 0.9, align: "end" as const },
     { title: "mean / p10", share: 1.35, align: "end" as const },
