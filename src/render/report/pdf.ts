@@ -25,7 +25,7 @@ import { pdfOfPages, type Page } from "../paper/document.js";
 import { pageFontFamily, PT_PER_IN, setText, textHeight, type TextStyle } from "../paper/textLayout.js";
 import { viewFromDirections } from "../projection.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
-import { directionChartScene, movementChartScene, pitchTypeMark } from "./charts.js";
+import { CHART_HEIGHT, CHART_WIDTH, directionChartScene, movementChartScene, pitchTypeMark } from "./charts.js";
 import { basisWords, REPORT_CAUTION, type ReportModel, type ReportPitcher, type ReportPitchType } from "./model.js";
 
 const PAGE = { w: 11, h: 8.5 };
@@ -126,7 +126,8 @@ function chartsPage(r: ReportModel, p: ReportPitcher): Page {
   const bottom = caution(page.scene) - CAUTION_GAP_IN;
   const gap = 0.3;
   const w = (PAGE.w - 2 * M - gap) / 2;
-  const h = bottom - top;
+  // the charts at the top of their room, their own shape kept
+  const h = Math.min(bottom - top, (w * CHART_HEIGHT) / CHART_WIDTH);
   nestScene(page.scene, movementChartScene(p, { basis: r.basis, windowFt: r.windowFt }), P(M), P(top), P(w), P(h));
   nestScene(page.scene, directionChartScene(p, { gapFlagMinutes: r.gapFlagMinutes }), P(M + w + gap), P(top), P(w), P(h));
   return page;
