@@ -43,7 +43,7 @@ const CAUTION_GAP_IN = 0.15;
 const P = (inches: number) => inches * PT_PER_IN;
 
 /** The report's title, as on the cover and in the PDF's metadata. */
-export const REPORT_TITLE = "Bullpen report: movement against spin, and the seams";
+const REPORT_TITLE = "Bullpen report: movement against spin, and the seams";
 
 function blankPage(): Page {
   const scene = createScene(P(PAGE.w), P(PAGE.h)).attr({ "font-family": pageFontFamily() });
@@ -140,7 +140,7 @@ function ballAlongAxis(axis: Vec3, seamShape: number): SceneNode {
 }
 
 /** The residual's words in the table: the mean and spread each way, and how far the seams can reach that way. */
-export function residualWords(t: Pick<ReportPitchType, "residual" | "reach">): string {
+function residualWords(t: Pick<ReportPitchType, "residual" | "reach">): string {
   const res = t.residual;
   return (
     `${signed(res.armSideIn, 1)} in arm side (± ${fixed(res.sdArmSideIn, 1)})\n${signed(res.verticalIn, 1)} in up (± ${fixed(res.sdVerticalIn, 1)})\n` +
