@@ -6,7 +6,7 @@
  *    chunk per command family, and explain's worker thread (src/jobs/explainWorker.ts,
  *    out/build/cli/explainWorker.js, sharing the chunks), so `--help` reads one small file and each command
  *    loads only its own stack. Packages whose code reads files next to itself at run
- *    time (pdfkit's fonts, svgdom's), the browser-only three.js and the worker-pool
+ *    time (pdfkit's fonts), the browser-only three.js and the worker-pool
  *    package stay outside the bundle and load from node_modules when a command needs them.
  * 2. The workbench page's script (src/page/main.ts with three.js, gl-matrix, svg.js
  *    and the tool's own library: the page runs the screen itself, in a worker made from
@@ -23,7 +23,7 @@ import * as esbuild from "esbuild";
 import { licenceNotices } from "./licences.js";
 
 /** Packages the CLI bundle leaves in node_modules. */
-export const CLI_EXTERNAL = ["pdfkit", "svg-to-pdfkit", "svgdom", "@svgdotjs/svg.js", "three", "esbuild", "piscina", "@resvg/resvg-js", "fontkit", "@fontsource/noto-sans"];
+export const CLI_EXTERNAL = ["pdfkit", "@svgdotjs/svg.js", "three", "esbuild", "piscina", "@resvg/resvg-js", "fontkit", "@fontsource/noto-sans"];
 
 function projectRootFrom(file: string): string {
   let dir = dirname(file);

@@ -2,7 +2,9 @@
  * The bullpen report from an explain batch's per-pitch-type results: groups the pitch
  * types by pitcher, builds the report's model (render/report/model.ts) and renders the
  * PDF and, when asked, each chart as SVG (PITCHER-movement.svg, PITCHER-direction.svg,
- * names made unique by io/slugs.ts). Loaded only when a report is asked for (pdfkit).
+ * names made unique by io/slugs.ts): the SVG files are written from the same chart
+ * drawings the PDF pages hold (render/report/charts.ts). Loaded only when a report is
+ * asked for (pdfkit).
  */
 import { uniqueSlugs } from "../io/slugs.js";
 import { directionChartSvg, movementChartSvg } from "../render/report/charts.js";

@@ -1,6 +1,6 @@
 /**
- * Every word on every page of a card, a sheet, a staff sheet, an atlas and the
- * handout sits on enough contrast to read, as poppler renders the PDF at 150 dpi:
+ * Every word on every page of a card, a sheet, a staff sheet, an atlas, the
+ * handout and a bullpen report sits on enough contrast to read, as poppler renders the PDF at 150 dpi:
  * the WCAG 2.x contrast ratio of each word's ink against its ground is at least
  * 4.5:1 (WCAG 2.1 success criterion 1.4.3; method in tests/support/legibility.ts).
  * A control PDF with a label's white outline painted over its own letters (what a
@@ -11,9 +11,10 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import PDFDocument from "pdfkit";
 import { describe, expect } from "vitest";
+import { bullpenCsv } from "../support/bullpen.js";
 import { runCli } from "../support/cli.js";
 import { contrastRatio, isWord, relativeLuminance, renderLuminance, wordBoxes, wordContrast } from "../support/legibility.js";
-import { itWithPoppler } from "../support/poppler.js";
+import { itWithPoppler, pdfPages } from "../support/poppler.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-legible-"));
 const DPI = 150;
@@ -88,4 +89,17 @@ describe("legibility: WCAG 2.x contrast of every word at 150 dpi", () => {
       expect(illegibleWords(pdf)).toEqual([]);
     });
   }
+
+  itWithPoppler(`every word on every page of a bullpen report (cover, charts, tables; names in several scripts) has ink at ${MIN_CONTRAST}:1 or more against its ground`, () => {
+    const csv = join(tmp, "bullpen.csv");
+    writeFileSync(csv, bullpenCsv());
+    const pdf = join(tmp, "bullpen.pdf");
+    const r = runCli(["explain", "--csv-in", csv, "--out", join(tmp, "bullpen-rows.csv"), "--report", pdf, "--cache", join(tmp, "cache")]);
+    expect(r.code, r.stderr).toBe(0);
+    const pages = wordBoxes(pdf);
+    expect(pages).toHaveLength(pdfPages(pdf));
+    expect(pages.length).toBe(8);
+    for (const words of pages) expect(words.filter((w) => isWord(w.text)).length).toBeGreaterThan(40);
+    expect(illegibleWords(pdf)).toEqual([]);
+  }, 180_000);
 });

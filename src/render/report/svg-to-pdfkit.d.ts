@@ -1,4 +1,0 @@
-declare module "svg-to-pdfkit" {
-  function SVGtoPDF(doc: PDFKit.PDFDocument, svg: string, x: number, y: number, options?: Record<string, unknown>): void;
-  export default SVGtoPDF;
-}
