@@ -16,7 +16,11 @@ import { screenJobOf, type ScreenJob, type TopChoice } from "./screenJob.js";
 export { runScreen, screenOne, type ScreenedPitch, type ScreenJob, type ScreenOutcome } from "./screenJob.js";
 
 export function parseScreen(request: Request, top: TopChoice = {}): ScreenJob {
-  const job = screenJobOf(request, { pitches: () => pitchesFromRequest(request), profile: () => modelChoice(request).profile }, top);
+  return withMapCache(screenJobOf(request, { pitches: () => pitchesFromRequest(request), profile: () => modelChoice(request).profile }, top), request);
+}
+
+/** The job with its coefficient maps kept in the request's cache folder (--cache; none: computed each run). */
+export function withMapCache(job: ScreenJob, request: Request): ScreenJob {
   const folder = cacheChoice(request);
   return folder === null ? job : { ...job, maps: cachedScreenMaps(folder) };
 }
