@@ -7,7 +7,7 @@
 import { join } from "node:path";
 import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
-import { pitchPages, renderAtlasPdf } from "../render/paper/atlas.js";
+import { startAtlas } from "../render/paper/atlas.js";
 import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
@@ -193,10 +193,12 @@ export function mapValuesIn(p: ScreenedPitch): Float64Array {
 
 export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number, total: number) => void = () => {}): Promise<PaperOutput> {
   const base = { layout: job.layout, team: job.screen.team, seamShape: job.screen.sampler.seamShape, onPage: (done: number, total: number) => tick("pages", done, total) };
-  // each pitch's pages are drawn as soon as it is screened, while the worker screens the others
-  const ready: Page[][] = [];
-  const pitches = await screenAllPooled(job.screen, job.request, job.top, job.threads, (i, p) => (ready[i] = pitchPages(base, p, i)), tick);
-  const pdf = await renderAtlasPdf({ ...base, pitches }, ready);
+  // the worker threads screen while this thread paints: the pages that need no pitch while
+  // the first screens run, then each pitch's pages as it comes back, the cover last
+  let atlas: ReturnType<typeof startAtlas> | undefined;
+  const begin = () => (atlas ??= startAtlas(base, job.screen.pitches.length));
+  const pitches = await screenAllPooled(job.screen, job.request, job.top, job.threads, { meanwhile: begin, onPitch: (i, p) => begin().pitch(i, p), tick });
+  const pdf = await begin().finish(pitches);
   return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: pitches.length };
 }
 

@@ -58,11 +58,25 @@ function plainRequest(request: Request): Request {
   return out as Request;
 }
 
-/** Pitch indices grouped by gyro (one coefficient map each), largest group first, then by first index. */
+/**
+ * Pitch indices grouped by gyro (one coefficient map each), in the order of their first
+ * pitch: the pitches come back roughly in order, so a caller drawing them in order
+ * (the atlas) can start early.
+ */
 export function gyroGroups(gyros: readonly number[]): number[][] {
   const byGyro = new Map<number, number[]>();
   gyros.forEach((g, i) => byGyro.set(g, [...(byGyro.get(g) ?? []), i]));
-  return [...byGyro.values()].sort((a, b) => b.length - a.length || a[0] - b[0]);
+  return [...byGyro.values()];
+}
+
+/** What a caller hears while a staff is screened. */
+export interface PoolHooks {
+  /** Pitch `index` is screened (in the order they come back; in order on this thread). */
+  onPitch?: (index: number, pitch: PooledPitch) => void;
+  /** Progress: the stage, pitches done, pitches in all. */
+  tick?: (stage: string, done: number, total: number) => void;
+  /** Called once the workers have their tasks (at once with no pool): this thread's own work meanwhile. */
+  meanwhile?: () => void;
 }
 
 let built: { key: string; job: ScreenJob } | undefined;
@@ -79,18 +93,11 @@ export function screenPitches(task: ScreenTask): PoolResult[] {
 }
 
 /**
- * Screens every pitch of `job` on `threads` workers ("auto": autoScreenThreads); 
- * `onPitch(i, pitch)` as each is done (in the order they come back), `tick` for
- * progress. Resolves with all of them in order.
+ * Screens every pitch of `job` on `threads` workers ("auto": autoScreenThreads), with
+ * `hooks` told of each pitch and the progress. Resolves with all of them in order.
  */
-export async function screenAllPooled(
-  job: ScreenJob,
-  request: Request,
-  top: TopChoice,
-  threads: number | "auto",
-  onPitch: (index: number, pitch: PooledPitch) => void = () => {},
-  tick: (stage: string, done: number, total: number) => void = () => {},
-): Promise<PooledPitch[]> {
+export async function screenAllPooled(job: ScreenJob, request: Request, top: TopChoice, threads: number | "auto", hooks: PoolHooks = {}): Promise<PooledPitch[]> {
+  const { onPitch = () => {}, tick = () => {}, meanwhile = () => {} } = hooks;
   const n = job.pitches.length;
   const groups = gyroGroups(job.pitches.map((p) => p.pitch.gyroRad));
   const count = threads === "auto" ? autoScreenThreads(n, groups.length) : Math.min(threads, groups.length);
@@ -103,6 +110,7 @@ export async function screenAllPooled(
   };
   const pool = await openPool(count);
   if (!pool) {
+    meanwhile();
     for (let i = 0; i < n; i++) {
       const s = screenOne(job, job.pitches[i]);
       take(i, { report: s.report, mapValuesIn: s.result.scores.map((x) => x / M_PER_IN), grid: s.result.grid });
@@ -116,13 +124,13 @@ export async function screenAllPooled(
   };
   const plain = plainRequest(request);
   try {
-    await Promise.all(
-      groups.map(async (indices) => {
-        const task: ScreenTask = { kind: "screen", request: plain, top, indices };
-        const results = (await pool.run(task)) as PoolResult[];
-        for (const r of results) take(r.index, { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad) });
-      }),
-    );
+    const runs = groups.map(async (indices) => {
+      const task: ScreenTask = { kind: "screen", request: plain, top, indices };
+      const results = (await pool.run(task)) as PoolResult[];
+      for (const r of results) take(r.index, { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad) });
+    });
+    meanwhile();
+    await Promise.all(runs);
   } finally {
     await pool.destroy();
   }

@@ -1,20 +1,21 @@
 /**
  * The worker threads' one entry (jobs/pool.ts): a task is a screen of some pitches of a
- * job (screenPool.ts) or a packed block of explain's rows (explainBatch.ts). What each
- * kind builds (the screen job, the Explainer and its coefficient maps) stays loaded
- * between tasks. Bundled to out/build/cli/worker.js (src/build/bundle.ts).
+ * job (screenPool.ts) or a packed block of explain's rows (explainBatch.ts). Each kind's
+ * code is loaded by its first task, and what it builds (the screen job, the Explainer
+ * and its coefficient maps) stays loaded between tasks. Bundled to
+ * out/build/cli/worker.js (src/build/bundle.ts).
  */
-import { explainBlockPacked, type ExplainTask, type PackedBlockResult } from "./explainBatch.js";
-import { screenPitches, type PoolResult, type ScreenTask } from "./screenPool.js";
+import type { ExplainTask, PackedBlockResult } from "./explainBatch.js";
+import type { PoolResult, ScreenTask } from "./screenPool.js";
 
 export type WorkerTask = ExplainTask | ScreenTask;
 
-export default function runTask(task: WorkerTask): PackedBlockResult | PoolResult[] {
+export default async function runTask(task: WorkerTask): Promise<PackedBlockResult | PoolResult[]> {
   switch (task.kind) {
     case "explain":
       // numbers only: the main thread copies one typed array, not an object graph
-      return explainBlockPacked(task.settings, task.rows, task.wantSums);
+      return (await import("./explainBatch.js")).explainBlockPacked(task.settings, task.rows, task.wantSums);
     case "screen":
-      return screenPitches(task);
+      return (await import("./screenPool.js")).screenPitches(task);
   }
 }

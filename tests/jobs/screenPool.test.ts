@@ -9,8 +9,8 @@ import { autoScreenThreads, gyroGroups, POOL_MIN_PITCHES, screenAllPooled } from
 const REQUEST = { demo: true, grid: "8", top: "2" };
 
 describe("the screen on the worker pool", () => {
-  it("groups pitches by gyro, one coefficient map per group, largest group first [screening/screen.ts: one map per model, gyro and grid]", () => {
-    expect(gyroGroups([5, 10, 15, 40, 10, 15])).toEqual([[1, 4], [2, 5], [0], [3]]);
+  it("groups pitches by gyro, one coefficient map per group, in the order of their first pitch [screening/screen.ts: one map per model, gyro and grid]", () => {
+    expect(gyroGroups([5, 10, 15, 40, 10, 15])).toEqual([[0], [1, 4], [2, 5], [3]]);
     expect(gyroGroups([])).toEqual([]);
     // every index exactly once
     const g = gyroGroups([1, 1, 1, 2, 3, 2]).flat().sort();
@@ -28,8 +28,10 @@ describe("the screen on the worker pool", () => {
     expect(workerFile()).toBeUndefined();
     const job = parseScreen({ ...REQUEST, cache: "none" });
     const order: number[] = [];
-    const pooled = await screenAllPooled(job, REQUEST, {}, 2, (i) => order.push(i));
+    let waited = 0;
+    const pooled = await screenAllPooled(job, REQUEST, {}, 2, { onPitch: (i) => order.push(i), meanwhile: () => waited++ });
     expect(order).toEqual([0, 1, 2, 3, 4, 5]);
+    expect(waited).toBe(1);
     job.pitches.forEach((p, i) => {
       const direct = screenOne(job, p);
       expect(pooled[i].report).toEqual(direct.report);
