@@ -50,7 +50,7 @@ export async function workbenchFigures(): Promise<WorkbenchFigures | { skipped: 
   const demo = join(dir, "demo.html");
   const empty = join(dir, "empty.html");
   for (const [file, args] of [[demo, ["--demo"]], [empty, []]] as const) {
-    const r = spawnSync(process.execPath, [cli, "view", ...args, "--out", file], { encoding: "utf8" });
+    const r = spawnSync(process.execPath, [cli, "view", ...args, "--out", file, "--cache", "none"], { encoding: "utf8" });
     if (r.status !== 0) throw new Error(`view ${args.join(" ")} failed: ${r.stderr}`);
   }
   const sizes = JSON.parse(readFileSync(join(root, "out", "build", "page", "page-sizes.json"), "utf8")) as { scriptBytes: number; bytesInOutput: Record<string, number> };
@@ -82,12 +82,12 @@ export async function workbenchFigures(): Promise<WorkbenchFigures | { skipped: 
     // Node: a new job each time (its own model, so its own map), then the same job again
     const nodeFresh: number[] = [];
     for (const gyro of ["11", "12", "13"]) {
-      const job = parseScreen({ ...SINKER, gyro });
+      const job = parseScreen({ ...SINKER, gyro, cache: "none" });
       const t0 = performance.now();
       screenOne(job, job.pitches[0]);
       nodeFresh.push(performance.now() - t0);
     }
-    const job = parseScreen(SINKER);
+    const job = parseScreen({ ...SINKER, cache: "none" });
     screenOne(job, job.pitches[0]);
     const nodeAgain: number[] = [];
     for (let i = 0; i < 3; i++) {

@@ -3,8 +3,9 @@
  * or run in a browser.
  *
  * 1. The command line (src/cli/main.ts) into out/build/cli/: one ES module plus a
- *    chunk per command family, and explain's worker thread (src/jobs/explainWorker.ts,
- *    out/build/cli/explainWorker.js, sharing the chunks), so `--help` reads one small file and each command
+ *    chunk per command family, and the worker threads' one entry (src/jobs/worker.ts,
+ *    out/build/cli/worker.js, sharing the chunks; it screens and explains for the pool,
+ *    src/jobs/pool.ts), so `--help` reads one small file and each command
  *    loads only its own stack. Packages whose code reads files next to itself at run
  *    time (pdfkit's fonts), the browser-only three.js and the worker-pool
  *    package stay outside the bundle and load from node_modules when a command needs them.
@@ -38,12 +39,10 @@ async function bundleCli(root: string): Promise<void> {
   const outdir = join(root, "out", "build", "cli");
   rmSync(outdir, { recursive: true, force: true });
   await esbuild.build({
-    // the command line and its worker threads (each its own entry: a worker loads a file): the atlas's screening
-    // worker beside the chunks that load it, and the worker explain's batch runs
+    // the command line and the pool's worker (its own entry: a worker loads a file; screen and explain tasks alike)
     entryPoints: [
       { in: join(root, "src", "cli", "main.ts"), out: "main" },
-      { in: join(root, "src", "jobs", "screenWorker.ts"), out: "chunks/screenWorker" },
-      { in: join(root, "src", "jobs", "explainWorker.ts"), out: "explainWorker" },
+      { in: join(root, "src", "jobs", "worker.ts"), out: "worker" },
     ],
     absWorkingDir: root,
     bundle: true,

@@ -4,7 +4,7 @@ import type { Argv } from "yargs";
 import { InputError } from "../io/errors.js";
 import type { OutputStream } from "../io/output.js";
 import { quote } from "../io/quote.js";
-import { textOption, withAirOptions, withPitchOptions } from "./options.js";
+import { textOption, withAirOptions, withCacheOption, withPitchOptions, withThreadsOption } from "./options.js";
 import { openOutputStream, planRun, print, streamProgress, writeOutput, type WantedOutput } from "./output.js";
 
 export function registerExplain(y: Argv): Argv {
@@ -12,7 +12,7 @@ export function registerExplain(y: Argv): Argv {
     "explain",
     "compare a tracked pitch's movement with what its spin predicts, find the seam orientations that would account for the rest, and read the spin-based against the observed direction (one pitch, or a CSV in batch with a per-pitch-type summary and a bullpen report)",
     (c) =>
-      withAirOptions(
+      withThreadsOption(withCacheOption(withAirOptions(
         withPitchOptions(c)
           .option("move-up", textOption("observed vertical movement, inches, gravity removed (on the trade basis: induced vertical break)"))
           .option("move-arm", textOption("observed horizontal movement toward the arm side, inches"))
@@ -29,14 +29,12 @@ export function registerExplain(y: Argv): Argv {
           .option("summary", textOption("batch: per pitcher and pitch type, one seam orientation fitted to all its throws (.json or .csv)"))
           .option("report", textOption("batch: the bullpen report, a PDF per pitcher (.pdf)"))
           .option("report-svg", textOption("batch: also each of the report's charts as SVG, in this folder"))
-          .option("threads", textOption("batch: worker threads, 0 for none [default: auto, one per core for files above 48 KiB]"))
-          .option("cache", textOption("folder for the coefficient-map cache, or none [default: $XDG_CACHE_HOME/seam-atlas, else out/cache]"))
           .option("grid", textOption("spacing of the orientations tried on the ball, deg (1 to 15)", "4"))
           .option("top", textOption("how many matching orientations to report (1 to 20)", "3"))
           .option("json", { type: "boolean", default: false, describe: "print JSON (one pitch)" })
           .example("$0 explain --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --move-arm 15 --move-up 9", "one tracked sinker (trade basis, 50 ft)")
           .example("$0 explain --csv-in session.csv --columns speed_kmh=Velo,move_up_in=IVB --out out/session.csv --summary out/summary.json --report out/bullpen.pdf", "a whole session"),
-      ),
+      )), "batch only: one per core for files above 48 KiB"),
     async (argv) => {
       const jobs = await import("../jobs/explain.js");
       const { inputFiles } = await import("../jobs/request/inputs.js");

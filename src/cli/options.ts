@@ -63,4 +63,17 @@ export function withAirOptions<T>(y: Argv<T>) {
     .option("pressure-hpa", text("air pressure, hPa [default: standard atmosphere]"));
 }
 
+/** Where slow results are kept between runs (io/cacheFiles.ts); every command that screens or explains takes it. */
+export function withCacheOption<T>(y: Argv<T>) {
+  return y.option(
+    "cache",
+    text("folder for the cache of coefficient maps (kept under 64 MiB, least recently used dropped first), or none [default: $XDG_CACHE_HOME/seam-atlas, else ~/.cache/seam-atlas; on Windows %LOCALAPPDATA%\\seam-atlas\\cache, on macOS ~/Library/Caches/seam-atlas]"),
+  );
+}
+
+/** Worker threads of the pool (src/jobs/pool.ts); `auto` says what the command does by default. */
+export function withThreadsOption<T>(y: Argv<T>, auto: string) {
+  return y.option("threads", text(`worker threads, 0 for this thread only [default: auto, ${auto}]`));
+}
+
 export { text as textOption };

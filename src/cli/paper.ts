@@ -3,7 +3,7 @@ import { join } from "node:path";
 import type { Argv } from "yargs";
 import type { InputRef, OutputFormat } from "../io/outputPlan.js";
 import type { Layout } from "../render/paper/layouts.js";
-import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
+import { textOption, withAirOptions, withCacheOption, withPitchOptions, withSamplerOptions, withScreenOptions, withThreadsOption } from "./options.js";
 import { planRun, print, progress, writeOutput, type PlannedOutput, type WantedOutput } from "./output.js";
 import { InputError } from "../io/errors.js";
 
@@ -33,7 +33,7 @@ export function registerPaper(y: Argv): Argv {
       "card",
       "print a grip card (PDF, or SVG with --svg, PNG with --png) or a sheet of cards: the ball in the pitcher's and the catcher's view, how to hold it in a player's words, and the grip beside the four-seam and two-seam holds",
       (c) =>
-        withAirOptions(withScreenOptions(
+        withCacheOption(withAirOptions(withScreenOptions(
           withSamplerOptions(
             withPitchOptions(c)
               .option("candidate", textOption("which of the screen's candidates (1 = best) [default: 1]"))
@@ -46,7 +46,7 @@ export function registerPaper(y: Argv): Argv {
               .example("$0 card --demo --pitch-name 'Iris Talvela/sinker' --layout letter-4-cards-3x5", "a sheet of grip cards and the classic holds to cut out")
               .example("$0 card --demo --layout letter-2-cards-4x6", "a staff sheet: one card per pitch"),
           ),
-        )),
+        ))),
       async (argv) => {
         const { parseCard, runCard } = await import("../jobs/paper.js");
         const job = parseCard(argv);
@@ -60,7 +60,7 @@ export function registerPaper(y: Argv): Argv {
       "atlas",
       "print the ranked grip atlas (PDF) for a pitch or a staff: cover, sphere maps, candidate cards beside the reference holds, how to read it, cautions",
       (c) =>
-        withAirOptions(withScreenOptions(
+        withThreadsOption(withCacheOption(withAirOptions(withScreenOptions(
           withSamplerOptions(
             withPitchOptions(c)
               .option("top", textOption("candidates per pitch (1 to 12)", "4"))
@@ -68,7 +68,7 @@ export function registerPaper(y: Argv): Argv {
               .option("out", textOption("output PDF, - for standard output [default: out/atlas.pdf]"))
               .example("$0 atlas --demo", "the demo staff's atlas in out/atlas.pdf"),
           ),
-        )),
+        ))), "one per core (at most 8) for 3 pitches or more, else none"),
       async (argv) => {
         const { parseAtlas, runAtlas } = await import("../jobs/paper.js");
         const job = parseAtlas(argv);

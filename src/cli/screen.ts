@@ -7,7 +7,7 @@ import { formatOfPath } from "../io/outputPlan.js";
 import { quote } from "../io/quote.js";
 import { uniqueSlugs } from "../io/slugs.js";
 import { DEFAULT_TOP } from "../screening/screen.js";
-import { textOption, withAirOptions, withPitchOptions, withSamplerOptions, withScreenOptions } from "./options.js";
+import { textOption, withAirOptions, withPitchOptions, withCacheOption, withSamplerOptions, withScreenOptions } from "./options.js";
 import { planRun, print, refuseSecondStdout, toStdout, wroteLines, writeOutput, type WantedOutput } from "./output.js";
 
 export function registerScreen(y: Argv): Argv {
@@ -15,7 +15,7 @@ export function registerScreen(y: Argv): Argv {
     "screen",
     "screen every spin-axis position on the ball for a pitch by the seam movement it adds (inches at the plate): best distinct grips, robustness, the two- and four-seam holds, finger placement",
     (c) =>
-      withAirOptions(withScreenOptions(
+      withCacheOption(withAirOptions(withScreenOptions(
         withSamplerOptions(
           withPitchOptions(c)
             .option("top", textOption("how many candidates to list (1 to 50)", String(DEFAULT_TOP)))
@@ -33,7 +33,7 @@ export function registerScreen(y: Argv): Argv {
             .example("$0 screen --demo --csv", "the demo staff as CSV")
             .example("$0 screen --demo --map out/maps", "the demo staff's sphere maps, one file per pitch in out/maps/"),
         ),
-      )),
+      ))),
     async (argv) => {
       if (argv.json && argv.csv) throw new InputError(`give --json or --csv, not both`);
       const { parseScreen, runScreen } = await import("../jobs/screen.js");

@@ -18,7 +18,6 @@ import { findLandmarks, nearestLandmark } from "../../geometry/landmarks.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { DEG, M_PER_FT, M_PER_IN } from "../../geometry/units.js";
 import type { Vec3 } from "../../geometry/vec.js";
-import { cacheFolder } from "../io/cacheFiles.js";
 import { isBadRecord, readCsv, type CsvProgress, type CsvReader } from "../io/csv.js";
 import { InputError } from "../io/errors.js";
 import { formatOfPath, writesStraight } from "../io/outputPlan.js";
@@ -31,6 +30,7 @@ import { autoThreads, BLOCK_ROWS, blockRunner, explainerFor, IN_FLIGHT_PER_THREA
 import { MOVEMENT_LIMIT_IN, parseColumnsOption, readRow, resolveColumns, type BatchRow, type ColumnMap } from "./explainColumns.js";
 import { modelChoice } from "./request/model.js";
 import { pitchesFromRequest, PITCH_FLAGS } from "./request/pitch.js";
+import { cacheChoice, threadsChoice } from "./request/runtime.js";
 import { airConditions, samplerSettings, windowStart } from "./request/settings.js";
 import { oneOf, optionPath, parseInRange, parseIntegerInRange, parseNumber, type Request } from "./request/values.js";
 
@@ -92,8 +92,7 @@ function explainSettings(request: Request): ExplainSettings {
   const choice = modelChoice(request);
   const sampler = samplerSettings(request, choice.profile);
   const gap = parseInRange("gap-flag", request["gap-flag"] ?? DEFAULT_GAP_FLAG_MINUTES, 1, 360, "minutes of clock");
-  const cache = request.cache === undefined ? cacheFolder() : optionPath("cache", request.cache);
-  if (cache === "") throw new InputError(`--cache "": the path is empty; expected a folder for the coefficient maps, or none`);
+  const cache = cacheChoice(request);
   return {
     gridDeg,
     top,
@@ -103,7 +102,7 @@ function explainSettings(request: Request): ExplainSettings {
     profile: choice.profile,
     seamShape: sampler.seamShape ?? DEFAULT_SEAM_SHAPE,
     gapFlagMinutes: gap,
-    cacheFolder: cache === "none" ? null : cache,
+    cacheFolder: cache,
   };
 }
 
@@ -143,7 +142,7 @@ export function parseExplain(request: Request): ExplainJob {
     const summary = request.summary === undefined ? undefined : batchFormat("summary", request.summary, ["json", "csv"], "the summary");
     const report = request.report === undefined ? undefined : optionPath("report", request.report);
     const reportSvg = request["report-svg"] === undefined ? undefined : optionPath("report-svg", request["report-svg"]);
-    const threads = request.threads === undefined || request.threads === "auto" ? "auto" : parseIntegerInRange("threads", request.threads, 0, 64);
+    const threads = threadsChoice(request);
     return { kind: "batch", settings, csvIn: optionPath("csv-in", request["csv-in"]), out, format: format ?? "csv", onBadRow, columns, summary, report, reportSvg, threads };
   }
   const batchOnly = BATCH_ONLY.find(given);

@@ -1,30 +1,28 @@
 /**
- * explain's batch engine: rows in blocks, explained on worker threads (piscina) or
- * in this thread, results back in file order.
+ * explain's batch engine: rows in blocks, explained on the worker pool (pool.ts,
+ * piscina, shared with the screen) or in this thread, results back in file order.
  *
  * The main thread reads and checks the CSV (explain.ts), packs each block of up to
  * BLOCK_ROWS good rows into one Float64Array (ROW_FIELDS numbers a row, transferred,
  * not copied) and hands it to the pool; a worker keeps one Explainer per settings
  * (model, orientation set, coefficient maps read from the disk cache or computed and
- * written there: explainCache.ts) and returns the block's explanations and, when a
+ * written there: mapCache.ts) and returns the block's explanations and, when a
  * summary is wanted, its per-pitch-type sums over the orientations. At most
  * IN_FLIGHT_PER_THREAD blocks per thread are out at once, so memory follows the
  * block, not the file; results are written in the order the blocks were sent.
  *
  * Threads: `threads` 0 explains in this thread (also when the worker's file is not
- * there, as under the TypeScript test runner); the command line uses one worker per
- * core (at most 8) for files above AUTO_THREADS_BYTES, else 0.
+ * there, as under the TypeScript test runner); "auto" (the command line's default) is
+ * one worker per core (at most 8) for files above AUTO_THREADS_BYTES, else 0.
  */
-import { existsSync } from "node:fs";
-import { cpus } from "node:os";
-import { fileURLToPath } from "node:url";
 import type { AirConditions } from "../physics/air.js";
 import { Explainer, emptySums, type Explanation, type MovementBasis, type OrientationSums, type ThrowFitData } from "../physics/explain.js";
 import { seamModel } from "../physics/seamModel/model.js";
 import type { SeamModelProfile } from "../physics/seamModel/parameters.js";
 import { DEG } from "../../geometry/units.js";
 import type { Pitch } from "../screening/pitch.js";
-import { cachedGyroMaps } from "./explainCache.js";
+import { cachedGyroMaps } from "./mapCache.js";
+import { coreThreads, openPool } from "./pool.js";
 import { formatClock } from "../../geometry/clock.js";
 import type { Vec3 } from "../../geometry/vec.js";
 import { orientationSet, type OrientationSet } from "../physics/explainMaps.js";
@@ -35,7 +33,6 @@ export const BLOCK_ROWS = 256;
 export const IN_FLIGHT_PER_THREAD = 3;
 /** Files at least this large get worker threads by default, bytes (about 600 rows). */
 export const AUTO_THREADS_BYTES = 48 * 1024;
-const MAX_THREADS = 8;
 
 /** Everything a worker needs to build the same Explainer (plain data: structured-cloned to workers). */
 export interface ExplainSettings {
@@ -78,6 +75,14 @@ export function packRows(rows: readonly PackedRow[]): Float64Array {
     out[o + 8] = r.group;
   });
   return out;
+}
+
+/** A worker's task (worker.ts): one packed block of rows. */
+export interface ExplainTask {
+  readonly kind: "explain";
+  readonly settings: ExplainSettings;
+  readonly rows: Float64Array;
+  readonly wantSums: boolean;
 }
 
 /** A block's results as they cross between threads: numbers only (see packExplanation), and the per-type sums. */
@@ -271,19 +276,10 @@ export function explainBlock(settings: ExplainSettings, rows: Float64Array, want
   return { explanations, fits, sums: [...sums].map(([group, s]) => ({ group, sums: s })) };
 }
 
-/** The worker's file beside this module or, in the bundle, beside the command line's entry. */
-export function workerFile(): string | undefined {
-  for (const rel of ["./explainWorker.js", "../explainWorker.js"]) {
-    const path = fileURLToPath(new URL(rel, import.meta.url));
-    if (existsSync(path)) return path;
-  }
-  return undefined;
-}
-
 /** Worker threads for a file of `bytes` (undefined: not a regular file). */
 export function autoThreads(bytes: number | undefined): number {
   if (bytes !== undefined && bytes < AUTO_THREADS_BYTES) return 0;
-  return Math.max(1, Math.min(MAX_THREADS, cpus().length));
+  return coreThreads();
 }
 
 /** Runs blocks on worker threads or in this thread. */
@@ -295,19 +291,17 @@ export interface BlockRunner {
 
 /** A runner with `threads` workers (0, or no worker file: this thread). */
 export async function blockRunner(settings: ExplainSettings, threads: number): Promise<BlockRunner> {
-  const file = threads > 0 ? workerFile() : undefined;
-  if (file === undefined) {
+  const pool = await openPool(threads);
+  if (pool === undefined) {
     return {
       threads: 0,
       run: async (rows, wantSums) => explainBlock(settings, rows, wantSums),
       close: async () => {},
     };
   }
-  const { Piscina } = await import("piscina");
-  const pool = new Piscina({ filename: file, minThreads: threads, maxThreads: threads, idleTimeout: 60_000 });
   return {
     threads,
-    run: async (rows, wantSums) => unpackBlock((await pool.run({ settings, rows, wantSums }, { transferList: [rows.buffer as ArrayBuffer] })) as PackedBlockResult, settings),
+    run: async (rows, wantSums) => unpackBlock((await pool.run({ kind: "explain", settings, rows, wantSums } satisfies ExplainTask, { transferList: [rows.buffer as ArrayBuffer] })) as PackedBlockResult, settings),
     close: () => pool.destroy(),
   };
 }

@@ -7,7 +7,7 @@
 import { join } from "node:path";
 import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
-import { pitchPages, renderAtlasPdf } from "../render/paper/atlas.js";
+import { startAtlas } from "../render/paper/atlas.js";
 import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
@@ -26,7 +26,9 @@ import { samplerSettings } from "./request/settings.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { seamFor } from "../sampling/measure.js";
 import { parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
-import { screenAllPooled, type PoolTask } from "./screenPool.js";
+import { threadsChoice } from "./request/runtime.js";
+import type { TopChoice } from "./screenJob.js";
+import { screenAllPooled } from "./screenPool.js";
 
 export function layoutsDir(): string {
   return join(projectRoot(), "templates", "layouts");
@@ -170,7 +172,9 @@ export interface AtlasJob {
   readonly layout: Layout;
   /** The request as given and the screen's top options: a worker thread builds the same job from them (screenPool.ts). */
   readonly request: Request;
-  readonly top: PoolTask["top"];
+  readonly top: TopChoice;
+  /** Worker threads that screen (--threads; 0: this thread only; "auto": screenPool.ts autoScreenThreads). */
+  readonly threads: number | "auto";
 }
 
 const ATLAS_TOP = { fallback: 4, range: [1, 12] as const };
@@ -179,7 +183,7 @@ export function parseAtlas(request: Request): AtlasJob {
   const layout = layoutOf(String(request.layout ?? "atlas-letter"), ["atlas"]);
   const screen = parseScreen(request, ATLAS_TOP);
   checkNames(screen);
-  return { layout, screen, request, top: ATLAS_TOP };
+  return { layout, screen, request, top: ATLAS_TOP, threads: threadsChoice(request) };
 }
 
 /** The values a sphere map shows for a screened pitch: seam movement toward the wanted direction (its size for "any"), inches. */
@@ -189,10 +193,12 @@ export function mapValuesIn(p: ScreenedPitch): Float64Array {
 
 export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number, total: number) => void = () => {}): Promise<PaperOutput> {
   const base = { layout: job.layout, team: job.screen.team, seamShape: job.screen.sampler.seamShape, onPage: (done: number, total: number) => tick("pages", done, total) };
-  // each pitch's pages are drawn as soon as it is screened, while the worker screens the others
-  const ready: Page[][] = [];
-  const pitches = await screenAllPooled(job.screen, job.request, job.top, (i, p) => (ready[i] = pitchPages(base, p, i)), tick);
-  const pdf = await renderAtlasPdf({ ...base, pitches }, ready);
+  // the worker threads screen while this thread paints: the pages that need no pitch while
+  // the first screens run, then each pitch's pages as it comes back, the cover last
+  let atlas: ReturnType<typeof startAtlas> | undefined;
+  const begin = () => (atlas ??= startAtlas(base, job.screen.pitches.length));
+  const pitches = await screenAllPooled(job.screen, job.request, job.top, job.threads, { meanwhile: begin, onPitch: (i, p) => begin().pitch(i, p), tick });
+  const pdf = await begin().finish(pitches);
   return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: pitches.length };
 }
 

@@ -9,7 +9,7 @@ import type { AirConditions } from "../physics/air.js";
 import type { SeamModel } from "../physics/seamModel/model.js";
 import type { SeamModelProfile } from "../physics/seamModel/parameters.js";
 import { screenReport, type ScreenReport } from "../screening/report.js";
-import { screenPitch, type ScreenProgress, type ScreenResult } from "../screening/screen.js";
+import { screenPitch, type CoefficientMapSource, type ScreenProgress, type ScreenResult } from "../screening/screen.js";
 import type { PitchInput } from "./request/pitchSpec.js";
 import { buildModel } from "./request/profile.js";
 import { airConditions, samplerSettings, screenOptions, topOption, windowStart, type SamplerSettings, type ScreenOptions } from "./request/settings.js";
@@ -26,6 +26,8 @@ export interface ScreenJob {
   readonly top: number;
   /** True when the pitches came from a file or the demo (the JSON then lists pitches). */
   readonly fromFile: boolean;
+  /** Where the coefficient maps come from (jobs/mapCache.ts: the disk cache); computed when absent. */
+  readonly maps?: CoefficientMapSource;
 }
 
 /** One screened pitch: the input, the library's result and its user-unit report. */
@@ -99,6 +101,7 @@ export function screenOne(job: ScreenJob, input: PitchInput, onProgress?: Screen
       model: job.model,
       air: job.air,
       windowStartM: job.windowStartM,
+      ...(job.maps ? { maps: job.maps } : {}),
     },
     onProgress,
   );

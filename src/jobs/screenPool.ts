@@ -1,24 +1,26 @@
 /**
- * Screening a staff on two cores: one worker thread (screenWorker.ts) screens part of
- * the pitches while the calling thread screens the rest (and can draw them meanwhile).
- * Pitches with the same gyro share a coefficient map (screening/screen.ts), so they
- * go to the same thread; the groups are balanced by that work. Where the worker's
- * compiled file is not there (the TypeScript sources under a test runner), every
- * pitch is screened on the calling thread: the same numbers, one core.
+ * Screening a staff on the worker pool (pool.ts): pitches with the same gyro share a
+ * coefficient map (screening/screen.ts), so they go to a worker together as one task;
+ * the tasks are sent largest first and every worker takes the next as it finishes. A
+ * worker rebuilds the same job from the request as typed (the same files, model,
+ * settings and cache) and screens the pitches it is given with the same code, so the
+ * numbers are this thread's to the last bit. Meanwhile this thread is free to draw each
+ * pitch as its screen comes back. With 0 threads, or no worker file (the TypeScript
+ * sources under a test runner), every pitch is screened here, in order.
  */
-import { existsSync } from "node:fs";
-import { fileURLToPath } from "node:url";
-import { Worker } from "node:worker_threads";
 import { equalAreaGrid, type SphereGrid } from "../../geometry/sphereGrid.js";
 import { M_PER_IN } from "../../geometry/units.js";
 import type { ScreenReport } from "../screening/report.js";
+import { coreThreads, openPool } from "./pool.js";
 import type { Request } from "./request/values.js";
-import { screenOne, type ScreenJob } from "./screen.js";
+import { parseScreen, screenOne, type ScreenJob } from "./screen.js";
+import type { TopChoice } from "./screenJob.js";
 
-/** What a worker is asked: the request as given and the screen's top options, and which pitches. */
-export interface PoolTask {
+/** A worker's task: the request as given and the screen's top options, and which pitches. */
+export interface ScreenTask {
+  readonly kind: "screen";
   readonly request: Request;
-  readonly top: { fallback?: number; range?: readonly [number, number]; atLeast?: number };
+  readonly top: TopChoice;
   readonly indices: readonly number[];
 }
 
@@ -37,24 +39,19 @@ export interface PooledPitch {
   readonly grid: SphereGrid;
 }
 
-/** The calling thread's share of the screening (it draws the pages too; measured on the demo staff). */
-const CALLER_SHARE = 0.4;
-/** Below this many pitches a second thread costs more than it saves. */
-const POOL_MIN_PITCHES = 3;
+/** Below this many pitches, "auto" screens on this thread: a worker's start costs more than it saves. */
+export const POOL_MIN_PITCHES = 3;
 
-function workerFile(): string | undefined {
-  for (const rel of ["./screenWorker.js", "./chunks/screenWorker.js", "../chunks/screenWorker.js"]) {
-    const path = fileURLToPath(new URL(rel, import.meta.url));
-    if (existsSync(path)) return path;
-  }
-  return undefined;
+/** The worker threads "auto" gives a staff of `pitches`: one per core (at most one per gyro group) from POOL_MIN_PITCHES on, else none. */
+export function autoScreenThreads(pitches: number, groups = pitches): number {
+  return pitches < POOL_MIN_PITCHES ? 0 : Math.min(coreThreads(), groups);
 }
 
 /** Only plain values of the request (yargs adds functions and aliases a worker cannot take). */
 function plainRequest(request: Request): Request {
   const out: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(request)) {
-    if (k === "$0" || k === "_" || k.includes("-") === false && /[A-Z]/.test(k)) continue;
+    if (k === "$0" || k === "_" || (k.includes("-") === false && /[A-Z]/.test(k))) continue;
     if (v === undefined || typeof v === "string" || typeof v === "number" || typeof v === "boolean") out[k] = v;
     else if (Array.isArray(v) && v.every((x) => typeof x === "string" || typeof x === "number")) out[k] = [...v];
   }
@@ -62,73 +59,81 @@ function plainRequest(request: Request): Request {
 }
 
 /**
- * Splits pitch indices into two groups, pitches with one gyro together: the first
- * gets about `share` of the work (the calling thread, which also draws), the second
- * the rest (the worker).
+ * Pitch indices grouped by gyro (one coefficient map each), in the order of their first
+ * pitch: the pitches come back roughly in order, so a caller drawing them in order
+ * (the atlas) can start early.
  */
-export function splitByGyro(gyros: readonly number[], share = 0.5): [number[], number[]] {
+export function gyroGroups(gyros: readonly number[]): number[][] {
   const byGyro = new Map<number, number[]>();
   gyros.forEach((g, i) => byGyro.set(g, [...(byGyro.get(g) ?? []), i]));
-  // a group's cost: one map per gyro (about as much as screening a pitch) and one per pitch
-  const groups = [...byGyro.values()].sort((a, b) => b.length - a.length || a[0] - b[0]);
-  const bins: [number[], number[]] = [[], []];
-  const cost = [0, 0];
-  for (const g of groups) {
-    const k = cost[0] / share <= cost[1] / (1 - share) ? 0 : 1;
-    bins[k].push(...g);
-    cost[k] += 1 + g.length;
-  }
-  return [bins[0].sort((a, b) => a - b), bins[1].sort((a, b) => a - b)];
+  return [...byGyro.values()];
+}
+
+/** What a caller hears while a staff is screened. */
+export interface PoolHooks {
+  /** Pitch `index` is screened (in the order they come back; in order on this thread). */
+  onPitch?: (index: number, pitch: PooledPitch) => void;
+  /** Progress: the stage, pitches done, pitches in all. */
+  tick?: (stage: string, done: number, total: number) => void;
+  /** Called once the workers have their tasks (at once with no pool): this thread's own work meanwhile. */
+  meanwhile?: () => void;
+}
+
+let built: { key: string; job: ScreenJob } | undefined;
+
+/** A worker's side of a screen task: the job built once per request, the pitches screened. */
+export function screenPitches(task: ScreenTask): PoolResult[] {
+  const key = JSON.stringify([task.request, task.top]);
+  if (built?.key !== key) built = { key, job: parseScreen(task.request, task.top) };
+  const job = built.job;
+  return task.indices.map((i) => {
+    const s = screenOne(job, job.pitches[i]);
+    return { index: i, report: s.report, mapValuesIn: s.result.scores.map((x) => x / M_PER_IN), gridSpacingRad: s.result.settings.gridSpacingRad };
+  });
 }
 
 /**
- * Screens every pitch of `job`; `onPitch(i, pitch)` as each is done (on this thread's
- * own group first, in order), `tick` for progress. Resolves with all of them in order.
+ * Screens every pitch of `job` on `threads` workers ("auto": autoScreenThreads), with
+ * `hooks` told of each pitch and the progress. Resolves with all of them in order.
  */
-export async function screenAllPooled(
-  job: ScreenJob,
-  request: Request,
-  top: PoolTask["top"],
-  onPitch: (index: number, pitch: PooledPitch) => void = () => {},
-  tick: (stage: string, done: number, total: number) => void = () => {},
-): Promise<PooledPitch[]> {
+export async function screenAllPooled(job: ScreenJob, request: Request, top: TopChoice, threads: number | "auto", hooks: PoolHooks = {}): Promise<PooledPitch[]> {
+  const { onPitch = () => {}, tick = () => {}, meanwhile = () => {} } = hooks;
   const n = job.pitches.length;
+  const groups = gyroGroups(job.pitches.map((p) => p.pitch.gyroRad));
+  const count = threads === "auto" ? autoScreenThreads(n, groups.length) : Math.min(threads, groups.length);
   const out: PooledPitch[] = new Array(n);
   let done = 0;
+  const take = (i: number, p: PooledPitch) => {
+    out[i] = p;
+    tick("screening", ++done, n);
+    onPitch(i, p);
+  };
+  const pool = await openPool(count);
+  if (!pool) {
+    meanwhile();
+    for (let i = 0; i < n; i++) {
+      const s = screenOne(job, job.pitches[i]);
+      take(i, { report: s.report, mapValuesIn: s.result.scores.map((x) => x / M_PER_IN), grid: s.result.grid });
+    }
+    return out;
+  }
   const grids = new Map<number, SphereGrid>();
   const gridOf = (spacing: number) => {
     if (!grids.has(spacing)) grids.set(spacing, equalAreaGrid(spacing));
     return grids.get(spacing)!;
   };
-  const local = (i: number) => {
-    const s = screenOne(job, job.pitches[i]);
-    const p: PooledPitch = { report: s.report, mapValuesIn: s.result.scores.map((x) => x / M_PER_IN), grid: s.result.grid };
-    out[i] = p;
-    tick("screening", ++done, n);
-    onPitch(i, p);
-  };
-  const file = n >= POOL_MIN_PITCHES ? workerFile() : undefined;
-  if (!file) {
-    for (let i = 0; i < n; i++) local(i);
-    return out;
+  const plain = plainRequest(request);
+  try {
+    const runs = groups.map(async (indices) => {
+      const task: ScreenTask = { kind: "screen", request: plain, top, indices };
+      const results = (await pool.run(task)) as PoolResult[];
+      for (const r of results) take(r.index, { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad) });
+    });
+    meanwhile();
+    await Promise.all(runs);
+  } finally {
+    await pool.destroy();
   }
-  // this thread also draws every page, so it screens the smaller part
-  const [mine, theirs] = splitByGyro(job.pitches.map((p) => p.pitch.gyroRad), CALLER_SHARE);
-  const results: PoolResult[] = [];
-  const worker = new Worker(file, { workerData: { request: plainRequest(request), top, indices: theirs } satisfies PoolTask });
-  const finished = new Promise<void>((resolve, reject) => {
-    worker.on("message", (r: PoolResult) => results.push(r));
-    worker.on("error", reject);
-    worker.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`the screening worker stopped with status ${code}`))));
-  });
-  for (const i of mine) local(i);
-  await finished;
-  for (const r of results.sort((a, b) => a.index - b.index)) {
-    const p: PooledPitch = { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad) };
-    out[r.index] = p;
-    tick("screening", ++done, n);
-    onPitch(r.index, p);
-  }
-  if (out.some((p) => p === undefined)) throw new Error("the screening worker left pitches unscreened");
+  if (out.some((p) => p === undefined)) throw new Error("the screening workers left pitches unscreened");
   return out;
 }

@@ -11,7 +11,7 @@ import { buildViewHtml, viewData } from "../render/page3d/build.js";
 import { modelChoice } from "./request/model.js";
 import { PITCH_FLAGS, pitchesFromRequest } from "./request/pitch.js";
 import type { Request } from "./request/values.js";
-import { runScreen, type ScreenJob } from "./screen.js";
+import { runScreen, withMapCache, type ScreenJob } from "./screen.js";
 import { SCREEN_SETTINGS, screenJobOf } from "./screenJob.js";
 
 /** Where the page goes unless --out says otherwise. */
@@ -30,7 +30,7 @@ export function parseView(request: Request): ViewJob {
   }
   // no pitch at all: the page starts from its own form
   const noPitch = !request.demo && request.pitch === undefined && request["pitch-name"] === undefined && PITCH_FLAGS.every((k) => request[k] === undefined);
-  const screen = screenJobOf(request, { pitches: () => (noPitch ? { pitches: [] } : pitchesFromRequest(request)), profile: () => modelChoice(request).profile });
+  const screen = withMapCache(screenJobOf(request, { pitches: () => (noPitch ? { pitches: [] } : pitchesFromRequest(request)), profile: () => modelChoice(request).profile }), request);
   const settings: Record<string, string> = {};
   for (const key of SCREEN_SETTINGS) if (request[key] !== undefined) settings[key] = String(request[key]);
   return { screen, settings };

@@ -92,7 +92,15 @@ export interface ScreenSettings {
   readonly rank: RankBy;
   readonly top: number;
   readonly fingerSpacingIn: number;
+  /** Where the sweep's coefficient maps come from (default: computed, coefficientMap); a caller may keep them, e.g. on disk. */
+  readonly maps?: CoefficientMapSource;
 }
+
+/**
+ * Gives the coefficient map of `model` at `gyroRad` over `grid` (physics/seamModel/map.ts
+ * coefficientMap's numbers: a source that keeps maps must give them back bit for bit).
+ */
+export type CoefficientMapSource = (model: SeamModel, gyroRad: number, grid: SphereGrid) => CoefficientMap;
 
 export const DEFAULT_SCREEN_OPTIONS = {
   seamShape: DEFAULT_SEAM_SHAPE,
@@ -308,10 +316,10 @@ const coverCache = new BoundedCache<number, CoverModel>("cover models per seam s
 // A staff often has pitches with the same gyro: their sweeps are the same coefficient
 // map (it depends on the model, the gyro and the grid only), computed once per model.
 const mapCaches = new WeakMap<SeamModel, BoundedCache<string, CoefficientMap>>();
-function coefficientMapFor(model: SeamModel, gyroRad: number, grid: SphereGrid, spacingRad: number): CoefficientMap {
+function coefficientMapFor(model: SeamModel, gyroRad: number, grid: SphereGrid, spacingRad: number, source: CoefficientMapSource = coefficientMap): CoefficientMap {
   let cache = mapCaches.get(model);
   if (!cache) mapCaches.set(model, (cache = new BoundedCache<string, CoefficientMap>("coefficient maps per gyro and grid", 8)));
-  return cache.get(`${gyroRad}/${spacingRad}`, () => coefficientMap(model, gyroRad, grid));
+  return cache.get(`${gyroRad}/${spacingRad}`, () => source(model, gyroRad, grid));
 }
 function coverFor(b: number): CoverModel {
   return coverCache.get(b, () => coverModel(b));
@@ -366,7 +374,7 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings, onProgress?:
   };
 
   const grid = equalAreaGrid(settings.gridSpacingRad);
-  const map = coefficientMapFor(settings.model, pitch.gyroRad, grid, settings.gridSpacingRad);
+  const map = coefficientMapFor(settings.model, pitch.gyroRad, grid, settings.gridSpacingRad, settings.maps);
   const n = grid.count;
   const armSideM = new Float64Array(n);
   const verticalM = new Float64Array(n);

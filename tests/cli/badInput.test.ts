@@ -113,6 +113,14 @@ const CASES: BadCase[] = [
   { what: "--report that is not a PDF", source: "README, For analysts: the report is a PDF", files: { "s.csv": CSV }, args: ["explain", "--csv-in", "@/s.csv", "--out", "@/r.csv", "--report", "@/r.svg"], words: /^--report ".*\/r\.svg": the extension \.svg names svg, but this output is pdf/ },
   { what: "--summary for one pitch", source: "README, Bad input: a flag a mode ignores is an error", args: ["explain", ...SINKER, "--move-arm", "15", "--move-up", "9", "--summary", "x.json"], words: /^--summary goes with --csv-in FILE \(a batch\); leave it out for one pitch$/ },
   { what: "a CSV saved as UTF-16", source: "The Unicode Standard, sec. 23.8 (FF FE is the UTF-16LE byte-order mark)", files: { "s.csv": Buffer.from(`\ufeff${CSV}`, "utf16le") }, args: ["explain", "--csv-in", "@/s.csv", "--out", "@/r.csv"], words: /^--csv-in ".*\/s\.csv" line 1: the header cannot be read: the file starts with the UTF-16 byte-order mark FF FE, so it is saved as UTF-16; expected a file saved as UTF-8 text$/ },
+  // how a run works: the cache and the worker threads (README, the cache; Threads)
+  { what: "--cache with an empty path", source: "POSIX path resolution: an empty pathname names no file (ENOENT)", args: ["screen", ...SINKER, "--grid", "10", "--cache", ""], words: /^--cache "": the path is empty; expected a folder for the cache, or none$/ },
+  { what: "--cache naming a file", source: "POSIX mkdir(2): a file cannot hold entries (ENOTDIR)", files: { "f.txt": "x" }, args: ["atlas", "--demo", "--grid", "10", "--out", "@/a.pdf", "--cache", "@/f.txt"], words: /^--cache ".*\/f\.txt" is a file; expected a folder for the cache, or none$/ },
+  { what: "--cache given twice (view)", source: "README, Bad input: an option given once", args: ["view", "--out", "@/v.html", "--cache", "@/a", "--cache", "@/b"], words: /^--cache was given 2 times; expected it once$/ },
+  { what: "--cache naming a file (card)", source: "POSIX mkdir(2): ENOTDIR", files: { "f.txt": "x" }, args: ["card", ...SINKER, "--grid", "10", "--out", "@/c.pdf", "--cache", "@/f.txt"], words: /^--cache ".*\/f\.txt" is a file; expected a folder for the cache, or none$/ },
+  { what: "--threads below 0", source: "README, Threads: 0 or more worker threads", args: ["atlas", "--demo", "--grid", "10", "--out", "@/a.pdf", "--threads", "-1"], words: /^--threads -1 is out of range; expected 0 to 64$/ },
+  { what: "--threads not a whole number", source: "README, Threads: a whole number of threads", args: ["atlas", "--demo", "--grid", "10", "--out", "@/a.pdf", "--threads", "1.5"], words: /^--threads 1\.5 is not a whole number; expected a whole number from 0 to 64$/ },
+  { what: "--threads a word", source: "README, Threads: a number or auto", files: { "s.csv": CSV }, args: ["explain", "--csv-in", "@/s.csv", "--out", "@/r.csv", "--threads", "many"], words: /^--threads "many" is not a decimal number; expected a whole number from 0 to 64$/ },
 ];
 
 interface Entry {

@@ -7,9 +7,14 @@ import { dirname, join } from "node:path";
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");
 export const BIN = join(ROOT, "out", "build", "cli", "main.js");
 
-export function runCli(args: string[], options: { cwd?: string } = {}): { code: number; stdout: string; stderr: string } {
+/**
+ * Runs the CLI and waits. The environment is the test's (whose XDG_CACHE_HOME is the
+ * test file's own temporary folder: support/cacheHome.ts) with `env` over it.
+ */
+export function runCli(args: string[], options: { cwd?: string; env?: NodeJS.ProcessEnv } = {}): { code: number; stdout: string; stderr: string } {
   if (!existsSync(BIN)) throw new Error(`${BIN} is missing: run npm run build (npm test does it)`);
-  const r = spawnSync(process.execPath, [BIN, ...args], { cwd: options.cwd ?? ROOT, encoding: "utf8", timeout: 120_000, env: { ...process.env, FORCE_COLOR: "0" } });
+  if (!process.env.XDG_CACHE_HOME) throw new Error("XDG_CACHE_HOME is not set: tests run with their own cache home (vitest.config.ts, support/cacheHome.ts)");
+  const r = spawnSync(process.execPath, [BIN, ...args], { cwd: options.cwd ?? ROOT, encoding: "utf8", timeout: 120_000, env: { ...process.env, FORCE_COLOR: "0", ...options.env } });
   return { code: r.status ?? -1, stdout: r.stdout, stderr: r.stderr };
 }
 
@@ -29,6 +34,7 @@ export interface CliRun {
  */
 export function runCliAsync(args: string[], options: { cwd?: string; timeoutMs?: number } = {}): Promise<CliRun> {
   if (!existsSync(BIN)) throw new Error(`${BIN} is missing: run npm run build (npm test does it)`);
+  if (!process.env.XDG_CACHE_HOME) throw new Error("XDG_CACHE_HOME is not set: tests run with their own cache home (vitest.config.ts, support/cacheHome.ts)");
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, [BIN, ...args], { cwd: options.cwd ?? ROOT, env: { ...process.env, FORCE_COLOR: "0" }, stdio: ["ignore", "pipe", "pipe"] });
     let stdout = "";

@@ -19,7 +19,7 @@ import { TOOL_VERSION } from "../../version.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import { sphereMapScene } from "../sphereMapDrawing.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "./card.js";
-import { pdfOfPages, type Page } from "./document.js";
+import { openPdf, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
 import { PT_PER_IN } from "./pdfScene.js";
 import { setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
@@ -193,14 +193,58 @@ export function cautionPages(L: Layout): Page[] {
   return textPages(L, "Cautions", CAUTION_LONG);
 }
 
-/** Pages of the atlas for a staff, without painting them (the job paints them into one PDF). */
+/** Pages of the atlas for a staff, without painting them (in reading order). */
 export function atlasPages(input: AtlasInput, ready?: readonly (readonly Page[])[]): Page[] {
   return [...frontPages(input), ...input.pitches.flatMap((p, i) => ready?.[i] ?? pitchPages(input, p, i)), ...cautionPages(input.layout)];
 }
 
-/** The atlas as PDF bytes; `ready[i]`, when given, are pitch i's pages already drawn. */
-export async function renderAtlasPdf(input: AtlasInput, ready?: readonly (readonly Page[])[]): Promise<{ bytes: Buffer; pages: number }> {
-  const pages = atlasPages(input, ready);
-  const bytes = await pdfOfPages(pages, `Grip atlas${input.team ? ` - ${input.team}` : ""}`, input.onPage);
-  return { bytes, pages: pages.length };
+/** An atlas being painted (startAtlas). */
+export interface AtlasInProgress {
+  /** Pitch `i` is screened: its pages are drawn now, and painted once every pitch before it is. */
+  pitch(i: number, p: AtlasPitch): void;
+  /** Every pitch is in: the cover (which lists them all) is painted and the pages put in reading order. */
+  finish(pitches: readonly AtlasPitch[]): Promise<{ bytes: Buffer; pages: number }>;
+}
+
+/**
+ * The atlas painted while its pitches are still being screened: the pages that need
+ * no pitch (how to read it, the cautions) at once, each pitch's pages as soon as it
+ * and every pitch before it are in, the cover last; the page tree then puts them in
+ * reading order (cover, how to read, the pitches, cautions). The painting order is
+ * fixed (it does not depend on which screen returns first), so the bytes are the same
+ * however the pitches were screened.
+ */
+export function startAtlas(input: Omit<AtlasInput, "pitches">, count: number): AtlasInProgress {
+  const L = input.layout;
+  const pdf = openPdf(`Grip atlas${input.team ? ` - ${input.team}` : ""}`, L.page);
+  const howTo = textPages(L, "How to read this atlas", HOW_TO_READ).map((p) => pdf.add(p));
+  const cautions = cautionPages(L).map((p) => pdf.add(p));
+  const drawn: (Page[] | undefined)[] = new Array(count);
+  const painted: number[][] = [];
+  let next = 0;
+  return {
+    pitch(i, p) {
+      if (!(Number.isInteger(i) && i >= 0 && i < count) || i < next || drawn[i]) throw new RangeError(`pitch ${i} is not awaited`);
+      drawn[i] = pitchPages(input, p, i);
+      while (next < count && drawn[next]) {
+        painted.push(drawn[next]!.map((page) => pdf.add(page)));
+        drawn[next] = undefined;
+        next++;
+      }
+    },
+    async finish(pitches) {
+      if (next !== count || pitches.length !== count) throw new RangeError(`the atlas has ${next} of ${count} pitches painted`);
+      const cover = coverPages({ ...input, pitches }).map((p) => pdf.add(p));
+      const order = [...cover, ...howTo, ...painted.flat(), ...cautions];
+      input.onPage?.(order.length, order.length);
+      return { bytes: await pdf.end(order), pages: order.length };
+    },
+  };
+}
+
+/** The atlas as PDF bytes (startAtlas with every pitch in hand). */
+export async function renderAtlasPdf(input: AtlasInput): Promise<{ bytes: Buffer; pages: number }> {
+  const atlas = startAtlas(input, input.pitches.length);
+  input.pitches.forEach((p, i) => atlas.pitch(i, p));
+  return atlas.finish(input.pitches);
 }
