@@ -43,6 +43,7 @@ import { DEG, M_PER_FT, M_PER_IN, M_PER_S_PER_MPH } from "../../geometry/units.j
 import type { Vec3 } from "../../geometry/vec.js";
 import { isBadRecord, readCsv } from "../io/csv.js";
 import { InputError } from "../io/errors.js";
+import { parseDecimal } from "../io/numbers.js";
 import { quote } from "../io/quote.js";
 import { airState, type AirConditions, type AirState } from "../physics/air.js";
 import {
@@ -181,9 +182,7 @@ export function parseCalibrate(request: Request): CalibrateJob {
 function cellNumber(cells: Readonly<Record<string, string>>, column: string, where: string, expected: string): number {
   const text = cells[column] ?? "";
   if (text === "") throw new InputError(`${where}, column ${column}: the cell is empty; expected ${expected}`);
-  const x = Number(text);
-  if (!Number.isFinite(x)) throw new InputError(`${where}, column ${column}: ${quote(text)} is not a number; expected ${expected}`);
-  return x;
+  return parseDecimal(text, `${where}, column ${column}:`, expected);
 }
 
 function cellAxis(cells: Readonly<Record<string, string>>, where: string): Vec3 {

@@ -157,7 +157,7 @@ describe("seam-atlas calibrate", () => {
     expect(lines).toHaveLength(4);
     expect(lines[0]).toMatch(/skipped --lab ".*some-bad.csv" line 22: the axis \(0, 0, 0\) is a zero vector/);
     expect(lines[1]).toMatch(/line 23, column speed_mph: 120 mph is out of range; expected 30 to 110 mph/);
-    expect(lines[2]).toMatch(/line 24, column force_magnus_n: "abc" is not a number/);
+    expect(lines[2]).toMatch(/line 24, column force_magnus_n: "abc" is not a decimal number/);
     expect(lines[3]).toMatch(/line 25: .*quote/);
     const j = JSON.parse(r.stdout);
     expect(j.rows).toBe(20);
