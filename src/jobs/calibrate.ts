@@ -76,7 +76,7 @@ export const SIGMA_IN_RANGE: readonly [number, number] = [0.001, 30];
 
 const LAB_COLUMNS = ["axis_x", "axis_y", "axis_z", "gyro_deg", "phase_deg", "speed_mph", "spin_rpm", "force_magnus_n", "force_across_n"] as const;
 const LAB_OPTIONAL = ["label"];
-const AXIS_EXPECTED = "a number: the spin axis in the ball frame, three numbers not all zero";
+const AXIS_EXPECTED = "a number (the three are the spin axis in the ball frame, not all zero)";
 /** The tracked file's keys: the pitch's, the seam movement's and the seam orientation's. */
 const TRACKED_COLUMNS = trackedColumnSet("seam", SEAM_MOVEMENT_LIMIT_IN, {
   axis_x: { quantity: "axis_x", expected: AXIS_EXPECTED },
@@ -185,11 +185,15 @@ function cellNumber(cells: Readonly<Record<string, string>>, column: string, whe
   return parseDecimal(text, `${where}, column ${column}:`, expected);
 }
 
-function cellAxis(cells: Readonly<Record<string, string>>, where: string): Vec3 {
-  const expected = "three numbers, not all zero, for the spin axis in the ball frame";
-  const v: Vec3 = [cellNumber(cells, "axis_x", where, expected), cellNumber(cells, "axis_y", where, expected), cellNumber(cells, "axis_z", where, expected)];
+/** The seam orientation's axis, either file's: InputError for a zero vector. */
+function nonZeroAxis(v: Vec3, where: string): Vec3 {
   if (!(Math.hypot(v[0], v[1], v[2]) >= 1e-12)) throw new InputError(`${where}: the axis (${v.join(", ")}) is a zero vector; expected a direction, not all zero`);
   return v;
+}
+
+function cellAxis(cells: Readonly<Record<string, string>>, where: string): Vec3 {
+  const expected = "three numbers, not all zero, for the spin axis in the ball frame";
+  return nonZeroAxis([cellNumber(cells, "axis_x", where, expected), cellNumber(cells, "axis_y", where, expected), cellNumber(cells, "axis_z", where, expected)], where);
 }
 
 function inRange(x: number, lo: number, hi: number, where: string, column: string, unit: string): number {
@@ -224,8 +228,7 @@ function labRow(cells: Readonly<Record<string, string>>, where: string, densityK
 function trackedRow(record: Readonly<Record<string, string>>, columns: ColumnMap, lineNo: number, label: string, job: CalibrateJob, model: ReturnType<typeof seamModel>): Omit<TrackedRow, "line"> {
   const { pitch, moveArmIn, moveUpIn, cells } = readTrackedRow(record, columns, lineNo, label);
   if (!(pitch.spinRadPerS > 0)) throw new InputError(`${cells.where("spin_rpm")}: 0 rpm; expected a spin above 0 (the seam force's directions follow the spin axis)`);
-  const axis: Vec3 = [cells.number("axis_x"), cells.number("axis_y"), cells.number("axis_z")];
-  if (!(Math.hypot(axis[0], axis[1], axis[2]) >= 1e-12)) throw new InputError(`${label} line ${lineNo}: the axis (${axis.join(", ")}) is a zero vector; expected a direction, not all zero`);
+  const axis = nonZeroAxis([cells.number("axis_x"), cells.number("axis_y"), cells.number("axis_z")], `${label} line ${lineNo}`);
   let unitMovement;
   try {
     unitMovement = unitSeamMovementArmSide(pitch, model, { air: job.airConditions, windowStartM: job.windowStartM });
