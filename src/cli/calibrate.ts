@@ -10,7 +10,8 @@ export function registerCalibrate(y: Argv): Argv {
       withAirOptions(
         c
           .option("lab", textOption("lab force measurements, CSV: axis_x,axis_y,axis_z,gyro_deg,phase_deg,speed_mph,spin_rpm,force_magnus_n,force_across_n (see README)"))
-          .option("tracked", textOption("tracked pitches with a known seam orientation, CSV: hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in (+ view, gyro_deg; see README)"))
+          .option("tracked", textOption("tracked pitches with a known seam orientation, CSV: hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in (or the other units and keys explain reads: see README)"))
+          .option("columns", textOption("map the tracked file's keys onto your headers, key=Header,... (the keys carry their units: speed_kmh=Velo,seam_up_cm=SeamV)"))
           .option("fit", textOption("parameters to fit, NAME,NAME,... [default: every calibratable one]"))
           .option("model", textOption("the profile to start from (JSON); it also gives the parameters not fitted [default: the built-in defaults]"))
           .option("name", textOption("name of the fitted profile", "calibrated"))

@@ -19,19 +19,20 @@
  * Newtons from the model's coefficient by 1/2 rho pi R^2 v^2 with the air options'
  * density (all rows) and the tool's ball (geometry/ball.ts).
  *
- * Tracked file (ours): pitches with a known seam orientation and their seam movement.
- *   pitcher, pitch           optional labels
- *   hand                     right or left
- *   speed_mph, spin_rpm      30 to 110 mph; above 0 and at most 4500 rpm
- *   tilt                     clock reading H:MM; view: pitcher (default) or catcher
- *   gyro_deg                 optional, default 0
+ * Tracked file: pitches with a known seam orientation and their seam movement, read
+ * by the tracked-pitch columns explain reads (trackedColumns.ts: --columns
+ * key=Header,..., units in the keys, hand R/L, km/h, tilt as a clock from either view
+ * or in degrees, spin efficiency with its gyro sign), with the movement under `seam`
+ * and the orientation's own keys:
  *   axis_x, axis_y, axis_z   the seam orientation, as in the lab file
- *   seam_arm_in, seam_up_in  the observed seam movement, inches toward the arm side and
- *                            up in the trade's reading (movement from 50 ft, gravity
- *                            removed) minus the spin's own Magnus part (e.g. the residual
- *                            `explain` reports), each at most SEAM_MOVEMENT_LIMIT_IN
- * Each row's movement per unit coefficient is computed once (physics/calibrate/
- * unitMovement.ts) with the air options and --window-ft.
+ *   seam_up_in | seam_up_cm, seam_arm_in | seam_arm_cm | seam_right_in | seam_right_cm
+ *                            the observed seam movement, up and toward the arm side (or
+ *                            the catcher's right), in the trade's reading (movement
+ *                            from 50 ft, gravity removed) minus the spin's own Magnus
+ *                            part (e.g. the residual `explain` reports), each at most
+ *                            SEAM_MOVEMENT_LIMIT_IN either way
+ * Spin must be above 0. Each row's movement per unit coefficient is computed once
+ * (physics/calibrate/unitMovement.ts) with the air options and --window-ft.
  *
  * A bad row (a cell that is not a number, a zero axis, a speed outside 30-110 mph, a
  * CSV record that cannot be read ...) is reported with its file and line and skipped,
@@ -42,6 +43,7 @@ import { DEG, M_PER_FT, M_PER_IN, M_PER_S_PER_MPH } from "../../geometry/units.j
 import type { Vec3 } from "../../geometry/vec.js";
 import { isBadRecord, readCsv } from "../io/csv.js";
 import { InputError } from "../io/errors.js";
+import { parseDecimal } from "../io/numbers.js";
 import { quote } from "../io/quote.js";
 import { airState, type AirConditions, type AirState } from "../physics/air.js";
 import {
@@ -60,9 +62,9 @@ import { seamForceNewtons } from "../physics/seamModel/newtons.js";
 import type { SeamModelParameterName } from "../physics/seamModel/parameters.js";
 import { SPEED_RANGE_MPH, SPIN_RANGE_RPM } from "../screening/pitch.js";
 import { modelChoice, type ModelChoice } from "./request/model.js";
-import { buildPitch, type RawPitch } from "./request/pitch.js";
 import { airConditions, windowStart } from "./request/settings.js";
 import { oneOf, optionText, parseInRange, type Request } from "./request/values.js";
+import { parseColumnsOption, readTrackedRow, resolveColumns, trackedColumnSet, type ColumnMap } from "./trackedColumns.js";
 
 /** Largest measured force component accepted, N (a seam force is well under 1 N; this catches unit slips). */
 export const FORCE_LIMIT_N = 10;
@@ -72,14 +74,21 @@ export const SEAM_MOVEMENT_LIMIT_IN = 30;
 export const SIGMA_N_RANGE: readonly [number, number] = [0.0001, 10];
 export const SIGMA_IN_RANGE: readonly [number, number] = [0.001, 30];
 
-export const LAB_COLUMNS = ["axis_x", "axis_y", "axis_z", "gyro_deg", "phase_deg", "speed_mph", "spin_rpm", "force_magnus_n", "force_across_n"] as const;
+const LAB_COLUMNS = ["axis_x", "axis_y", "axis_z", "gyro_deg", "phase_deg", "speed_mph", "spin_rpm", "force_magnus_n", "force_across_n"] as const;
 const LAB_OPTIONAL = ["label"];
-export const TRACKED_COLUMNS = ["hand", "speed_mph", "spin_rpm", "tilt", "axis_x", "axis_y", "axis_z", "seam_arm_in", "seam_up_in"] as const;
-const TRACKED_OPTIONAL = ["pitcher", "pitch", "view", "gyro_deg"];
+const AXIS_EXPECTED = "a number (the three are the spin axis in the ball frame, not all zero)";
+/** The tracked file's keys: the pitch's, the seam movement's and the seam orientation's. */
+const TRACKED_COLUMNS = trackedColumnSet("seam", SEAM_MOVEMENT_LIMIT_IN, {
+  axis_x: { quantity: "axis_x", expected: AXIS_EXPECTED },
+  axis_y: { quantity: "axis_y", expected: AXIS_EXPECTED },
+  axis_z: { quantity: "axis_z", expected: AXIS_EXPECTED },
+});
 
 export interface CalibrateJob {
   readonly labPath?: string;
   readonly trackedPath?: string;
+  /** --columns for the tracked file: key -> the user's header. */
+  readonly trackedColumns: Readonly<Record<string, string>>;
   readonly fit: readonly SeamModelParameterName[];
   readonly start: ModelChoice;
   readonly name: string;
@@ -126,6 +135,8 @@ export function parseCalibrate(request: Request): CalibrateJob {
   }
   if (labPath === "") throw new InputError(`--lab is empty; expected a CSV file`);
   if (trackedPath === "") throw new InputError(`--tracked is empty; expected a CSV file`);
+  if (request.columns !== undefined && trackedPath === undefined) throw new InputError(`--columns goes with --tracked FILE.csv (it maps the tracked file's headers); the lab file's columns are fixed`);
+  const trackedColumns = parseColumnsOption(request.columns, TRACKED_COLUMNS);
   const onBadRow = oneOf("on-bad-row", request["on-bad-row"] ?? "skip", ["skip", "stop"] as const);
   let fit: SeamModelParameterName[];
   if (request.fit === undefined) fit = calibratableNames();
@@ -153,6 +164,7 @@ export function parseCalibrate(request: Request): CalibrateJob {
   return {
     ...(labPath !== undefined ? { labPath } : {}),
     ...(trackedPath !== undefined ? { trackedPath } : {}),
+    trackedColumns,
     fit,
     start,
     name,
@@ -170,16 +182,18 @@ export function parseCalibrate(request: Request): CalibrateJob {
 function cellNumber(cells: Readonly<Record<string, string>>, column: string, where: string, expected: string): number {
   const text = cells[column] ?? "";
   if (text === "") throw new InputError(`${where}, column ${column}: the cell is empty; expected ${expected}`);
-  const x = Number(text);
-  if (!Number.isFinite(x)) throw new InputError(`${where}, column ${column}: ${quote(text)} is not a number; expected ${expected}`);
-  return x;
+  return parseDecimal(text, `${where}, column ${column}:`, expected);
+}
+
+/** The seam orientation's axis, either file's: InputError for a zero vector. */
+function nonZeroAxis(v: Vec3, where: string): Vec3 {
+  if (!(Math.hypot(v[0], v[1], v[2]) >= 1e-12)) throw new InputError(`${where}: the axis (${v.join(", ")}) is a zero vector; expected a direction, not all zero`);
+  return v;
 }
 
 function cellAxis(cells: Readonly<Record<string, string>>, where: string): Vec3 {
   const expected = "three numbers, not all zero, for the spin axis in the ball frame";
-  const v: Vec3 = [cellNumber(cells, "axis_x", where, expected), cellNumber(cells, "axis_y", where, expected), cellNumber(cells, "axis_z", where, expected)];
-  if (!(Math.hypot(v[0], v[1], v[2]) >= 1e-12)) throw new InputError(`${where}: the axis (${v.join(", ")}) is a zero vector; expected a direction, not all zero`);
-  return v;
+  return nonZeroAxis([cellNumber(cells, "axis_x", where, expected), cellNumber(cells, "axis_y", where, expected), cellNumber(cells, "axis_z", where, expected)], where);
 }
 
 function inRange(x: number, lo: number, hi: number, where: string, column: string, unit: string): number {
@@ -211,31 +225,19 @@ function labRow(cells: Readonly<Record<string, string>>, where: string, densityK
   };
 }
 
-function trackedRow(cells: Readonly<Record<string, string>>, where: string, job: CalibrateJob, model: ReturnType<typeof seamModel>): Omit<TrackedRow, "line"> {
-  const raw: RawPitch = {
-    hand: cells.hand ?? "",
-    speedMph: cellNumber(cells, "speed_mph", where, `mph from ${SPEED_RANGE_MPH[0]} to ${SPEED_RANGE_MPH[1]}`),
-    spinRpm: cellNumber(cells, "spin_rpm", where, `rpm above 0 and at most ${SPIN_RANGE_RPM[1]}`),
-    tilt: cells.tilt ?? "",
-  };
-  if ((cells.view ?? "") !== "") raw.view = cells.view;
-  if ((cells.gyro_deg ?? "") !== "") raw.gyroDeg = cellNumber(cells, "gyro_deg", where, "degrees strictly between -90 and 90");
-  const column: Record<string, string> = { hand: "hand", speedMph: "speed_mph", spinRpm: "spin_rpm", tilt: "tilt", view: "view", gyroDeg: "gyro_deg" };
-  const { pitch } = buildPitch(raw, (field) => `${where}, column ${column[field] ?? field}`);
-  if (!(pitch.spinRadPerS > 0)) throw new InputError(`${where}, column spin_rpm: 0 rpm; expected a spin above 0 (the seam force's directions follow the spin axis)`);
-  const axis = cellAxis(cells, where);
-  const moveExpected = `inches, at most ${SEAM_MOVEMENT_LIMIT_IN} either way`;
-  const arm = inRange(cellNumber(cells, "seam_arm_in", where, moveExpected), -SEAM_MOVEMENT_LIMIT_IN, SEAM_MOVEMENT_LIMIT_IN, where, "seam_arm_in", "in");
-  const up = inRange(cellNumber(cells, "seam_up_in", where, moveExpected), -SEAM_MOVEMENT_LIMIT_IN, SEAM_MOVEMENT_LIMIT_IN, where, "seam_up_in", "in");
+function trackedRow(record: Readonly<Record<string, string>>, columns: ColumnMap, lineNo: number, label: string, job: CalibrateJob, model: ReturnType<typeof seamModel>): Omit<TrackedRow, "line"> {
+  const { pitch, moveArmIn, moveUpIn, cells } = readTrackedRow(record, columns, lineNo, label);
+  if (!(pitch.spinRadPerS > 0)) throw new InputError(`${cells.where("spin_rpm")}: 0 rpm; expected a spin above 0 (the seam force's directions follow the spin axis)`);
+  const axis = nonZeroAxis([cells.number("axis_x"), cells.number("axis_y"), cells.number("axis_z")], `${label} line ${lineNo}`);
   let unitMovement;
   try {
     unitMovement = unitSeamMovementArmSide(pitch, model, { air: job.airConditions, windowStartM: job.windowStartM });
   } catch (err) {
-    if (err instanceof RangeError) throw new InputError(`${where}: ${err.message}`);
+    if (err instanceof RangeError) throw new InputError(`${label} line ${lineNo}: ${err.message}`);
     throw err;
   }
-  const label = [cells.pitcher ?? "", cells.pitch ?? ""].filter((s) => s !== "").join(" / ");
-  return { label, observation: { axisBall: axis, gyroRad: pitch.gyroRad, unitMovement, seamArmSideM: arm * M_PER_IN, seamUpM: up * M_PER_IN } };
+  const tag = [cells.text("pitcher"), cells.text("pitch")].filter((s) => s !== "").join(" / ");
+  return { label: tag, observation: { axisBall: axis, gyroRad: pitch.gyroRad, unitMovement, seamArmSideM: moveArmIn * M_PER_IN, seamUpM: moveUpIn * M_PER_IN } };
 }
 
 /** What reading reports as it goes. */
@@ -244,28 +246,37 @@ export interface ReadEvents {
   skipped(message: string): void;
 }
 
-async function readRows<T>(
+/** The lab file's header: every required column, no unknown one. */
+function checkLabHeader(header: readonly string[], label: string): void {
+  const known = [...LAB_COLUMNS, ...LAB_OPTIONAL];
+  const missing = LAB_COLUMNS.filter((c) => !header.includes(c));
+  if (missing.length) throw new InputError(`${label}: the header lacks column ${quote(missing[0])}; expected the columns ${LAB_COLUMNS.join(", ")} (and optionally ${LAB_OPTIONAL.join(", ")})`);
+  const unknown = header.find((c) => !known.includes(c));
+  if (unknown !== undefined) throw new InputError(`${label}: unknown column ${quote(unknown)} in the header; expected ${known.join(", ")}`);
+}
+
+/**
+ * Reads a CSV's rows: `columns` checks the header (any InputError stops the run),
+ * `build` reads a record; a bad record or row is skipped or stops the run. Cells
+ * beyond the header are an error in the lab file (fixed columns), ignored in the
+ * tracked one (an export's extra columns are ignored, as explain does).
+ */
+async function readRows<C, T>(
   path: string,
-  option: string,
-  required: readonly string[],
-  optional: readonly string[],
+  option: "--lab" | "--tracked",
   onBadRow: "skip" | "stop",
   events: ReadEvents,
-  build: (cells: Readonly<Record<string, string>>, where: string) => T,
+  columns: (header: readonly string[], label: string) => C,
+  build: (cells: Readonly<Record<string, string>>, lineNo: number, label: string, columns: C) => T,
 ): Promise<{ rows: (T & { line: number })[]; skipped: number }> {
   const label = `${option} ${quote(path)}`;
-  const reader = readCsv(path, { label });
-  const header = await reader.header().catch((err) => {
+  const reader = readCsv(path, { label, extraCells: option === "--tracked" ? "ignore" : "error" });
+  let resolved: C;
+  try {
+    resolved = columns(await reader.header(), label);
+  } catch (err) {
     reader.close();
     throw err;
-  });
-  const known = [...required, ...optional];
-  const missing = required.filter((c) => !header.includes(c));
-  const unknown = header.filter((c) => !known.includes(c));
-  if (missing.length || unknown.length) {
-    reader.close();
-    if (missing.length) throw new InputError(`${label}: the header lacks column ${quote(missing[0])}; expected the columns ${required.join(", ")}${optional.length ? ` (and optionally ${optional.join(", ")})` : ""}`);
-    throw new InputError(`${label}: unknown column ${quote(unknown[0])} in the header; expected ${known.join(", ")}`);
   }
   const rows: (T & { line: number })[] = [];
   let skipped = 0;
@@ -274,7 +285,7 @@ async function readRows<T>(
     if (isBadRecord(item)) message = item.error;
     else {
       try {
-        rows.push({ ...build(item.cells, `${label} line ${item.line}`), line: item.line });
+        rows.push({ ...build(item.cells, item.line, label, resolved), line: item.line });
         continue;
       } catch (err) {
         if (!(err instanceof InputError || err instanceof RangeError)) throw err;
@@ -298,13 +309,20 @@ export async function readCalibrationRows(job: CalibrateJob, events: ReadEvents)
   let skipped = 0;
   if (job.labPath !== undefined) {
     const density = job.air.densityKgM3;
-    const r = await readRows(job.labPath, "--lab", LAB_COLUMNS, LAB_OPTIONAL, job.onBadRow, events, (cells, where) => labRow(cells, where, density));
+    const r = await readRows(job.labPath, "--lab", job.onBadRow, events, checkLabHeader, (cells, lineNo, label) => labRow(cells, `${label} line ${lineNo}`, density));
     lab = r.rows;
     skipped += r.skipped;
   }
   if (job.trackedPath !== undefined) {
     const model = seamModel(job.start.profile);
-    const r = await readRows(job.trackedPath, "--tracked", TRACKED_COLUMNS, TRACKED_OPTIONAL, job.onBadRow, events, (cells, where) => trackedRow(cells, where, job, model));
+    const r = await readRows(
+      job.trackedPath,
+      "--tracked",
+      job.onBadRow,
+      events,
+      (header, label) => resolveColumns(header, job.trackedColumns, label, TRACKED_COLUMNS),
+      (cells, lineNo, label, columns) => trackedRow(cells, columns, lineNo, label, job, model),
+    );
     tracked = r.rows;
     skipped += r.skipped;
   }

@@ -45,11 +45,11 @@ export function giordanoB2PerMass(speedMPerS: number): number {
  * ball the fit's B2/m is read for, not the tool's ball (geometry/ball.ts), which
  * then feels C_D through its own area and mass.
  */
-export const GIORDANO_REFERENCE_MASS_KG = 0.145;
-export const GIORDANO_REFERENCE_RADIUS_M = 0.0364;
+const GIORDANO_REFERENCE_MASS_KG = 0.145;
+const GIORDANO_REFERENCE_RADIUS_M = 0.0364;
 
 /** 2 m_ref / (rho_ref A_ref), m: converts B2/m (1/m) into C_D at the reference state. */
-export const GIORDANO_CD_PER_B2M = (2 * GIORDANO_REFERENCE_MASS_KG) / (SEA_LEVEL_DENSITY_KG_M3 * crossSectionM2(GIORDANO_REFERENCE_RADIUS_M));
+const GIORDANO_CD_PER_B2M = (2 * GIORDANO_REFERENCE_MASS_KG) / (SEA_LEVEL_DENSITY_KG_M3 * crossSectionM2(GIORDANO_REFERENCE_RADIUS_M));
 
 /**
  * Parses a drag model name (as typed on a command line).
@@ -61,7 +61,7 @@ export function parseDragModelName(name: string): DragModelName {
 }
 
 /** Throws RangeError for an unknown model or a constant C_D outside 0 to 2. */
-export function assertDragModel(model: DragModel): void {
+function assertDragModel(model: DragModel): void {
   parseDragModelName(model.name);
   if (model.name === "constant" && model.dragCoefficient !== undefined) {
     assertInRange("drag coefficient", model.dragCoefficient, 0, DRAG_COEFFICIENT_MAX, "(dimensionless)");

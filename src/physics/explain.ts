@@ -71,7 +71,7 @@ export const DEFAULT_EXPLAIN_GRID_DEG = 4;
 export const DEFAULT_EXPLAIN_TOP = 3;
 export const EXPLAIN_TOP_RANGE: readonly [number, number] = [1, 20];
 /** RK4 step of explain's flights, s (see the header). */
-export const EXPLAIN_STEP_S = 0.0025;
+const EXPLAIN_STEP_S = 0.0025;
 /** Aim corrections of the launch (launchOf). */
 const AIM_CORRECTIONS = 1;
 /** RK4 step of the aiming flight, s: its plate crossing moves by well under a millimetre against 1 ms. */
@@ -79,7 +79,7 @@ const AIM_STEP_S = 0.005;
 /** Coefficient of the probe flights that measure J_a and J_m (a typical seam coefficient's size). */
 const DELTA = 0.02;
 /** Matches listed are at least this many grid spacings apart, up to the ball's rotations. */
-export const MATCH_SEPARATION = 2.5;
+const MATCH_SEPARATION = 2.5;
 /** A residual is beyond reach when it exceeds the reach by more than this, m (0.1 in: the printed precision). */
 export const REACH_MARGIN_M = 0.1 * M_PER_IN;
 /** The seam's proper rotations: they leave the model's coefficients unchanged. */

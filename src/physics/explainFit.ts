@@ -32,7 +32,7 @@ import { gyroKeys, gyroOfKey } from "./explainMaps.js";
 import { turnAverage } from "./seamModel/turn.js";
 
 /** Throws kept per pitch type for the refinement (a reservoir sample beyond that). */
-export const REFINE_THROWS = 400;
+const REFINE_THROWS = 400;
 /** Compass search: first step (grid spacings), smallest step (rad), most evaluations. */
 const REFINE_FIRST_STEP = 0.5;
 const REFINE_MIN_STEP_RAD = 0.1 * DEG;

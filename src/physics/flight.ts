@@ -111,7 +111,7 @@ export interface FlightResult {
 }
 
 /** Default RK4 step, s. */
-export const DEFAULT_STEP_S = 0.001;
+const DEFAULT_STEP_S = 0.001;
 /** Largest release distance from the plate plane accepted, m. */
 const MAX_RELEASE_DISTANCE_M = 30;
 /** Largest spin rate accepted, rad/s. */

@@ -16,7 +16,7 @@ import { assertInRange } from "../../geometry/check.js";
 import { KELVIN_AT_0_C, PA_PER_HPA } from "../../geometry/units.js";
 
 /** Specific gas constant of dry air R_d, J/(kg K). */
-export const DRY_AIR_GAS_CONSTANT_J_PER_KG_K = 287.05;
+const DRY_AIR_GAS_CONSTANT_J_PER_KG_K = 287.05;
 /** 1 - M_water / M_dry_air, dimensionless. */
 const VAPOUR_MASS_DEFICIT = 0.378;
 

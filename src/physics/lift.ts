@@ -13,7 +13,7 @@
  */
 import { assertNonNegative } from "../../geometry/check.js";
 
-export const LIFT_MODEL_NAMES = ["sawicki"] as const;
+const LIFT_MODEL_NAMES = ["sawicki"] as const;
 export type LiftModelName = (typeof LIFT_MODEL_NAMES)[number];
 
 /** A lift model, by name. */

@@ -47,7 +47,7 @@ export interface DirectionComparison {
 }
 
 /** Movement shorter than this has no direction, m (a micrometre: far below any tracking precision). */
-export const DIRECTION_ZERO_M = 1e-6;
+const DIRECTION_ZERO_M = 1e-6;
 /** Minutes in a full turn of the clock. */
 const CLOCK_MINUTES = 720;
 const DEG_PER_CLOCK_MINUTE = 0.5;

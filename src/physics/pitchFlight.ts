@@ -47,9 +47,9 @@ const AIM_MAX_ITERATIONS = 12;
 const AIM_TOLERANCE_M = 1e-5;
 const AIM_PROBE_RAD = 1e-4;
 /** At least this many turns before the plate: the turn-averaged seam force (see the header). */
-export const TURN_AVERAGE_MIN_TURNS = 8;
+const TURN_AVERAGE_MIN_TURNS = 8;
 /** Release phases sampled for the seam part's spread. */
-export const SPREAD_PHASES = 24;
+const SPREAD_PHASES = 24;
 
 export interface PitchFlightInput {
   readonly pitch: Pitch;
@@ -155,7 +155,7 @@ export function aimLaunch(
 }
 
 /** Turns a ball spinning at `spinRadPerS` makes in `timeS` (with exponential decay tau, s). */
-export function turnsIn(spinRadPerS: number, timeS: number, tauS = Infinity): number {
+function turnsIn(spinRadPerS: number, timeS: number, tauS = Infinity): number {
   const phase = tauS === Infinity ? spinRadPerS * timeS : -spinRadPerS * tauS * Math.expm1(-timeS / tauS);
   return phase / (2 * Math.PI);
 }
@@ -260,7 +260,7 @@ export function tradeArmSide(b: TradeBreak, hand: Pitch["hand"]): { armSideM: nu
 }
 
 /** The coefficient of the probe flights that measure the seam movement per unit coefficient (central differences). */
-export const UNIT_PROBE_COEFFICIENT = 0.05;
+const UNIT_PROBE_COEFFICIENT = 0.05;
 
 /**
  * Seam movement per unit coefficient for a pitch (trade basis, m): the slope of the

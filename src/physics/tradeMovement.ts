@@ -30,7 +30,6 @@
  * cancellation-free form of the quadratic formula, taking the root where the
  * ball moves toward the plate.
  */
-import { armSideDirection, type Hand } from "../../geometry/frames.js";
 import { STANDARD_GRAVITY_M_PER_S2 } from "./atmosphere.js";
 import { assertInRange } from "../../geometry/check.js";
 import { PLATE_FRONT_Y_M } from "./field.js";
@@ -251,16 +250,4 @@ function crossingTau(c: readonly [number, number, number], yTarget: number, labe
   const disc = c1 * c1 - 4 * c2 * (c0 - yTarget);
   if (!(disc >= 0)) throw new RangeError(`the fitted path never reaches the ${label} y = ${yTarget} m`);
   return (2 * (c0 - yTarget)) / (-c1 + Math.sqrt(disc));
-}
-
-/**
- * The arm-side part of a horizontal break for a throwing hand, m: positive toward
- * the arm side, which is -x for a right-hander and +x for a left-hander
- * (geometry/frames.ts armSideDirection).
- *
- * @throws RangeError for a hand other than "right" or "left".
- */
-export function armSideBreakM(horizontalBreakM: number, hand: Hand): number {
-  if (hand !== "right" && hand !== "left") throw new RangeError(`throwing hand "${hand}" must be "right" or "left"`);
-  return horizontalBreakM * armSideDirection(hand)[0];
 }

@@ -157,7 +157,7 @@ describe("seam-atlas calibrate", () => {
     expect(lines).toHaveLength(4);
     expect(lines[0]).toMatch(/skipped --lab ".*some-bad.csv" line 22: the axis \(0, 0, 0\) is a zero vector/);
     expect(lines[1]).toMatch(/line 23, column speed_mph: 120 mph is out of range; expected 30 to 110 mph/);
-    expect(lines[2]).toMatch(/line 24, column force_magnus_n: "abc" is not a number/);
+    expect(lines[2]).toMatch(/line 24, column force_magnus_n: "abc" is not a decimal number/);
     expect(lines[3]).toMatch(/line 25: .*quote/);
     const j = JSON.parse(r.stdout);
     expect(j.rows).toBe(20);
@@ -175,6 +175,13 @@ describe("seam-atlas calibrate", () => {
     expect(existsSync(out)).toBe(false);
   });
 
+  // a good row on line 2, the row under test on line 3; stopping at the first bad row
+  const TRACKED_HEADER = "hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in";
+  const tracked = (name: string, header: string, row: string): string[] => {
+    const good = header.split(",").map((c) => ({ hand: "right", speed_mph: "90", speed_kmh: "145", spin_rpm: "2200", tilt: "1:30", Axis: "1:30", tilt_deg: "45", efficiency_pct: "100", axis_x: "1" })[c] ?? "0.5");
+    writeFileSync(at(name), [header, good.join(","), row].join("\n") + "\n");
+    return ["--tracked", at(name), "--fit", "scale", "--on-bad-row", "stop"];
+  };
   const bad: [string, () => string[], RegExp][] = [
     ["an unknown parameter in --fit", () => ["--lab", lab, "--fit", "scale,stickiness"], /--fit: "stickiness" is not a seam model parameter/],
     ["a parameter that is not calibratable", () => ["--lab", lab, "--fit", "bandWidthDeg"], /--fit: bandWidthDeg is not calibratable/],
@@ -196,10 +203,28 @@ describe("seam-atlas calibrate", () => {
     ["a gyro of 90 deg, with --on-bad-row stop", () => ["--lab", writeLab("gyro.csv", ROWS.slice(0, 5), ["0.1,0.2,0.9,90,,80,2000,0.1,0.1"]), "--on-bad-row", "stop"], /column gyro_deg: 90 deg is out of range/],
     ["a sigma of 0", () => ["--lab", lab, "--sigma-n", "0"], /--sigma-n 0 N is out of range/],
     ["the output over the input", () => ["--lab", lab, "--fit", "scale", "--residuals", lab], /--residuals ".*lab.csv" is the same file as the input --lab/],
-    ["a tracked row with an unknown hand", () => {
-      writeFileSync(at("hand.csv"), "hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in\nmiddle,90,2200,1:30,1,0,0,1,1\n");
-      return ["--tracked", at("hand.csv"), "--fit", "scale", "--on-bad-row", "stop"];
-    }, /line 2, column hand: "hand" is "middle"; expected right, left, R or L/],
+    ["a tracked row with an unknown hand", () => tracked("hand.csv", TRACKED_HEADER, "middle,90,2200,1:30,1,0,0,1,1"), /line 3, column "hand": "hand" is "middle"; expected right, left, R or L/],
+    // the tracked file is read by explain's columns (README, Calibrating: tracked file), so its messages are explain's
+    ["a tracked row with efficiency but no gyro sign", () => tracked("eff.csv", "hand,speed_mph,spin_rpm,tilt,efficiency_pct,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "R,90,2200,1:30,90,1,0,0,1,1"),
+      /line 3, column "efficiency_pct": spin efficiency 90 % has no gyro sign; expected column "gyro_sign" pos .* or neg, or a signed column "gyro_deg" \(stopped there/],
+    // 110 mph is 177.0 km/h and 30 mph 48.3 km/h (1 mph = 1.609344 km/h, exact)
+    ["a tracked speed of 190 km/h", () => tracked("kmh.csv", "hand,speed_kmh,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "L,190,2200,1:30,1,0,0,1,1"),
+      /line 3, column "speed_kmh": 190 km\/h is out of range; expected 48\.3 to 177 km\/h/],
+    // 30 in is 76.2 cm (1 in = 2.54 cm, exact)
+    ["a tracked seam movement of 80 cm", () => tracked("cm.csv", "hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_right_cm,seam_up_cm", "right,90,2200,1:30,1,0,0,80,1"),
+      /line 3, column "seam_right_cm": 80 cm is out of range; expected at most 76\.2 cm either way/],
+    ["a tracked tilt that is no clock reading, under a mapped header", () => [...tracked("clock.csv", "hand,speed_mph,spin_rpm,Axis,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "right,90,2200,13:30,1,0,0,1,1"), "--columns", "tilt=Axis"],
+      /line 3, column "Axis" \(tilt\): tilt "13:30" must have hours 0-12/],
+    ["a tracked tilt_deg of 360", () => tracked("deg.csv", "hand,speed_mph,spin_rpm,tilt_deg,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "right,90,2200,360,1,0,0,1,1"),
+      /line 3, column "tilt_deg": tiltDeg 360 is out of range; expected degrees clockwise from 12:00, at least 0 and below 360/],
+    ["a tracked axis cell that is not a number", () => tracked("axis.csv", TRACKED_HEADER, "right,90,2200,1:30,1,x,0,1,1"), /line 3, column "axis_y": "x" is not a decimal number/],
+    ["a tracked zero axis", () => tracked("zero-axis.csv", TRACKED_HEADER, "right,90,2200,1:30,0,0,0,1,1"), /line 3: the axis \(0, 0, 0\) is a zero vector/],
+    ["a tracked spin of 0", () => tracked("spin0.csv", TRACKED_HEADER, "right,90,0,1:30,1,0,0,1,1"), /line 3, column "spin_rpm": 0 rpm; expected a spin above 0/],
+    ["tracked speed in both mph and km/h", () => tracked("both.csv", "hand,speed_mph,speed_kmh,spin_rpm,tilt,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "right,90,145,2200,1:30,1,0,0,1,1"),
+      /the columns "speed_mph" and "speed_kmh" both give the speed/],
+    ["a --columns header the tracked file lacks", () => [...tracked("velo.csv", TRACKED_HEADER, "right,90,2200,1:30,1,0,0,1,1"), "--columns", "speed_kmh=Velo"], /the header lacks column "Velo" \(mapped to speed_kmh by --columns\)/],
+    ["a tracked file without its axis", () => tracked("no-axis.csv", "hand,speed_mph,spin_rpm,tilt,axis_x,axis_y,seam_arm_in,seam_up_in", "right,90,2200,1:30,1,0,1,1"), /the header lacks column "axis_z"; expected it, or --columns axis_z=YourHeader/],
+    ["--columns without --tracked", () => ["--lab", lab, "--columns", "speed_kmh=Velo"], /--columns goes with --tracked FILE.csv/],
   ];
   for (const [what, args, message] of bad) {
     it(`rejects ${what}: one line, exit 2, no file written`, () => {

@@ -6,9 +6,8 @@ import { PLATE_FRONT_Y_M } from "../../src/physics/field.js";
 import type { Launch } from "../../src/physics/flight.js";
 import { releasePosition, releaseVelocity } from "../../src/physics/launch.js";
 import { movementVersusSpinless } from "../../src/physics/movement.js";
-import { aimLaunch } from "../../src/physics/pitchFlight.js";
+import { aimLaunch, tradeArmSide } from "../../src/physics/pitchFlight.js";
 import {
-  armSideBreakM,
   OLDER_TRADE_WINDOW_START_M,
   TRADE_WINDOW_START_M,
   tradeMovement,
@@ -208,7 +207,7 @@ describe("signs: horizontal break +x (catcher's right), arm side for the hand, i
 
   it("a right-hander's arm-side run has negative horizontal break (catcher's left) and positive arm side, the same from either view within 1e-9 m", () => {
     expect(rightPitcherView.horizontalBreakM).toBeLessThan(-5 * M_PER_IN);
-    expect(armSideBreakM(rightPitcherView.horizontalBreakM, "right")).toBeGreaterThan(5 * M_PER_IN);
+    expect(tradeArmSide(rightPitcherView, "right").armSideM).toBeGreaterThan(5 * M_PER_IN);
     expect(rightPitcherView.inducedVerticalBreakM).toBeGreaterThan(5 * M_PER_IN);
     const rightCatcherView = fly("right", "10:30", "catcher");
     expectAbsolute(rightCatcherView.horizontalBreakM, rightPitcherView.horizontalBreakM, 1e-9);
@@ -221,7 +220,7 @@ describe("signs: horizontal break +x (catcher's right), arm side for the hand, i
       expectAbsolute(left.horizontalBreakM, -rightPitcherView.horizontalBreakM, 1e-9);
       expectAbsolute(left.inducedVerticalBreakM, rightPitcherView.inducedVerticalBreakM, 1e-9);
       expect(left.horizontalBreakM).toBeGreaterThan(0);
-      expectAbsolute(armSideBreakM(left.horizontalBreakM, "left"), armSideBreakM(rightPitcherView.horizontalBreakM, "right"), 1e-9);
+      expectAbsolute(tradeArmSide(left, "left").armSideM, tradeArmSide(rightPitcherView, "right").armSideM, 1e-9);
     }
   });
 

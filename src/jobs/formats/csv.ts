@@ -5,6 +5,7 @@ import { rounded } from "../../render/numbers.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { M_PER_FT } from "../../../geometry/units.js";
 import type { ExplainedRow, PitchTypeNumbers } from "../explain.js";
+import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
 
 const NEEDS_QUOTES = /[",\r\n]/;
 
@@ -79,10 +80,6 @@ export function explainCsvRow(r: ExplainedRow): string {
     ]) + "\n"
   );
 }
-
-// ---- calibrate (a self-contained block, its imports here rather than at the top, for easy merges) ----
-
-import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
 
 const CALIBRATE_RESIDUAL_COLUMNS = [
   "kind", "line", "label",

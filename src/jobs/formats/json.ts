@@ -17,6 +17,8 @@ import type { LandmarksResult } from "../landmarks.js";
 import type { MeasureResult } from "../measure.js";
 import type { ScreenOutcome } from "../screen.js";
 import { screenJson } from "./screenJson.js";
+import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
+import { profileParameters } from "../../physics/calibrate/fit.js";
 
 /** Pretty-printed JSON with a trailing newline. */
 export function jsonText(doc: unknown): string {
@@ -28,7 +30,7 @@ function head(command: string) {
 }
 
 /** The JSON form of one measurement (the keys scripts rely on; see README). */
-export function measurementJson(m: Measurement, landmark: string, landmarkAngleDeg: number) {
+function measurementJson(m: Measurement, landmark: string, landmarkAngleDeg: number) {
   const ll = vectorToLatLon(m.axis);
   return {
     axis: m.axis,
@@ -202,11 +204,6 @@ export function forceDocument(r: ForceResult) {
     })),
   };
 }
-
-// ---- calibrate (a self-contained block, its imports here rather than at the top, for easy merges) ----
-
-import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
-import { profileParameters } from "../../physics/calibrate/fit.js";
 
 /** The fitted profile as a --model file: { "name": ..., "parameters": { every parameter, table order } }. */
 export function calibratedProfileDocument(o: CalibrateOutcome) {

@@ -12,6 +12,7 @@ import { flightNumbers, type FlightOutcome } from "../flight.js";
 import type { ForceResult } from "../force.js";
 import type { LandmarksResult } from "../landmarks.js";
 import type { MeasureResult } from "../measure.js";
+import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
 
 const BARS = " ▁▂▃▄▅▆▇█";
 
@@ -36,12 +37,12 @@ function bar(value: number, max: number): string {
 }
 
 /** One row of bar characters for values in [0, max], averaged over `columns` equal bins. */
-export function sparkline(values: ArrayLike<number>, max: number, columns: number): string {
+function sparkline(values: ArrayLike<number>, max: number, columns: number): string {
   return binMeans(values, columns).map((v) => bar(v, max)).join("");
 }
 
 /** Left-aligned two-column table with a fixed label width. */
-export function table(rows: readonly (readonly [string, string])[], indent = "  "): string {
+function table(rows: readonly (readonly [string, string])[], indent = "  "): string {
   const width = Math.max(...rows.map((r) => r[0].length));
   return rows.map(([k, v]) => `${indent}${k.padEnd(width)}  ${v}`).join("\n");
 }
@@ -97,7 +98,7 @@ function fingerWords(o: OrientationReport): string {
     .join("; ");
 }
 
-export function screenTable(r: ScreenReport): string {
+function screenTable(r: ScreenReport): string {
   const p = r.input.pitch;
   const s = r.input.settings;
   const reach =
@@ -217,10 +218,6 @@ export function forceText(r: ForceResult): string {
     `    along Magnus  + |${mu}|\n                  - |${md}|\n`
   );
 }
-
-// ---- calibrate (a self-contained block, its imports here rather than at the top, for easy merges) ----
-
-import { calibrationNumbers, type CalibrateOutcome } from "../calibrate.js";
 
 /** The calibration as a short table: parameters, rms before and after, what the data cannot pin down. */
 export function calibrateText(o: CalibrateOutcome): string {

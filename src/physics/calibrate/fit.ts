@@ -55,12 +55,11 @@
  */
 import { resolveProfile, SEAM_MODEL_PARAMETERS, type SeamModelParameter, type SeamModelParameterName, type SeamModelProfile, type SeamModelValues } from "../seamModel/parameters.js";
 import { seamModel } from "../seamModel/model.js";
-import type { SeamModelResolution } from "../seamModel/resolution.js";
 import { M_PER_IN } from "../../../geometry/units.js";
 import { boundedLevenbergMarquardt, finiteDifferenceJacobian, type LeastSquaresProblem, type StopReason } from "./leastSquares.js";
 import { gaussNewtonCovariance } from "./covariance.js";
 import { crossLimits } from "./limits.js";
-import { compileObservations, predict, predictionScratch, type LabObservation, type ObservationSet, type TrackedObservation } from "./observations.js";
+import { compileObservations, predict, predictionScratch, type LabObservation, type TrackedObservation } from "./observations.js";
 
 /**
  * Default uncertainty of a lab force component, N: 0.02 N, about 5 % of a typical seam
@@ -82,7 +81,7 @@ export const DEFAULT_SIGMA_M = 1 * M_PER_IN;
  * (theta_s = min(theta_band, theta_L) is continuous in them); the pressure numbers
  * 0.005 (the force is linear in them).
  */
-export const DIFFERENCE_STEPS: Readonly<Record<SeamModelParameterName, number>> = {
+const DIFFERENCE_STEPS: Readonly<Record<SeamModelParameterName, number>> = {
   laminarSeparationDeg: 0.25,
   turbulentSeparationDeg: 0.25,
   tripStartDeg: 1,
@@ -95,11 +94,11 @@ export const DIFFERENCE_STEPS: Readonly<Record<SeamModelParameterName, number>> 
 };
 
 /** A singular value of the range-scaled Jacobian below this fraction of the largest is a direction the data do not see. */
-export const NULL_RELATIVE = 1e-7;
+const NULL_RELATIVE = 1e-7;
 /** A parameter takes part in such a direction when its share of the unit singular vector is at least this. */
-export const NULL_LOADING = 0.1;
+const NULL_LOADING = 0.1;
 /** Smallest difference steps of the refining passes (the table's units): below them the staircase's treads show. */
-export const STEP_FLOORS: Readonly<Record<SeamModelParameterName, number>> = {
+const STEP_FLOORS: Readonly<Record<SeamModelParameterName, number>> = {
   laminarSeparationDeg: 0.01,
   turbulentSeparationDeg: 0.01,
   tripStartDeg: 0.02,
@@ -121,7 +120,7 @@ const REFINE_CHANGE = 1.5;
  * than this many standard deviations (in the metric of the covariance s^2 (J^T J)^-1):
  * closer than that the data cannot tell points apart.
  */
-export const STOP_SIGMAS = 0.01;
+const STOP_SIGMAS = 0.01;
 /** A value within this fraction of its range from a bound is at the bound. */
 const BOUND_TOLERANCE = 1e-6;
 /** A cross-parameter margin within this fraction of the parameter's difference step is at the limit. */
@@ -140,10 +139,6 @@ export interface CalibrationOptions {
   readonly sigmaM?: number;
   /** Name of the fitted profile; default "calibrated". */
   readonly name?: string;
-  /** Model resolution; default the model's (predictions must use the resolution the profile will be used at). */
-  readonly resolution?: SeamModelResolution;
-  /** Iteration cap of the search (default 100). */
-  readonly maxIterations?: number;
   /** Called after each iteration with the root-mean-square weighted residual. */
   readonly onIteration?: (iteration: number, rmsWeighted: number) => void;
 }
@@ -261,7 +256,6 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
   const tripleFitted = TRIPLE.every((t) => fit.includes(t));
   const nonlinear = fit.filter((n) => n !== "scale" && !(tripleFitted && n === "suctionFactor"));
   const scaleParam = TABLE.get("scale")!;
-  const resolution = options.resolution ?? {};
   const scratch = predictionScratch(set);
 
   // the start's values with `names` set from x and the scale given
@@ -281,7 +275,7 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
       throw err;
     }
     evaluations++;
-    predict(seamModel(profile, resolution), set, out, scratch);
+    predict(seamModel(profile), set, out, scratch);
     for (let i = 0; i < m; i++) out[i] *= weight[i];
     return true;
   };
@@ -326,7 +320,6 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
     let current: Float64Array = x0;
     for (let pass = 0; pass <= REFINE_PASSES; pass++) {
       const result = boundedLevenbergMarquardt({ ...problem, step: steps }, current, {
-        maxIterations: options.maxIterations,
         central: true,
         // a step of STOP_SIGMAS standard deviations changes the cost by STOP_SIGMAS^2 s^2 / 2, s^2 = 2 cost / (m - n)
         costResolution: (cost) => (STOP_SIGMAS * STOP_SIGMAS * cost) / Math.max(1, m - fit.length),
@@ -353,8 +346,8 @@ export function calibrateSeamModel(options: CalibrationOptions): CalibrationResu
   const scale = bestScale(u);
   const fittedValues = valuesAt(nonlinear, x, scale);
   const profile = resolveProfile({ name: options.name ?? "calibrated", parameters: fittedValues }, "calibration");
-  const predictedBefore = predict(seamModel(start, resolution), set, new Float64Array(m));
-  const predictedAfter = predict(seamModel(profile, resolution), set, new Float64Array(m));
+  const predictedBefore = predict(seamModel(start), set, new Float64Array(m));
+  const predictedAfter = predict(seamModel(profile), set, new Float64Array(m));
   evaluations += 2;
 
   // the Jacobian in every fitted parameter at the optimum (table order), weighted
@@ -502,4 +495,3 @@ export function profileParameters(values: SeamModelValues): Record<SeamModelPara
   return Object.fromEntries(SEAM_MODEL_PARAMETERS.map((p) => [p.name, values[p.name]])) as Record<SeamModelParameterName, number>;
 }
 
-export type { ObservationSet };

@@ -21,12 +21,7 @@ export {
   checkFitNames,
   DEFAULT_SIGMA_M,
   DEFAULT_SIGMA_N,
-  DIFFERENCE_STEPS,
-  NULL_LOADING,
-  NULL_RELATIVE,
   profileParameters,
-  STEP_FLOORS,
-  STOP_SIGMAS,
 } from "./fit.js";
 export type { CalibratedParameter, CalibrationOptions, CalibrationResult, NotIdentified } from "./fit.js";
 export { compileObservations, predict } from "./observations.js";
@@ -39,5 +34,5 @@ export type { GaussNewtonCovariance, NullDirection } from "./covariance.js";
 export { choleskySolve, singularValues } from "./linearAlgebra.js";
 export { crossLimits } from "./limits.js";
 export type { CrossLimit } from "./limits.js";
-export { normalStream, syntheticLabRows, uniformStream } from "./synthetic.js";
+export { normalStream, syntheticLabRows } from "./synthetic.js";
 export type { SyntheticLabOptions, SyntheticLabRow } from "./synthetic.js";

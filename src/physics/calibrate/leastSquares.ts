@@ -61,7 +61,7 @@ const RESTORE_INSIDE = 1e-9;
 const MARGIN_STEP = 1e-4;
 /** Basis vectors shorter than this after orthogonalising are dropped (unit-length inputs). */
 const BASIS_TOLERANCE = 1e-10;
-export const DEFAULT_MAX_ITERATIONS = 100;
+const DEFAULT_MAX_ITERATIONS = 100;
 
 export interface LeastSquaresProblem {
   /** Number of unknowns n. */

@@ -51,7 +51,7 @@ export interface SyntheticLabRow {
 }
 
 /** A seeded uniform stream on [0, 1). */
-export function uniformStream(seed: number): () => number {
+function uniformStream(seed: number): () => number {
   let state = seed >>> 0;
   return () => {
     state = (Math.imul(state, 1664525) + 1013904223) >>> 0;

@@ -61,7 +61,7 @@ export interface ForceTimeline {
  * Loads one orientation into the model's scratch: per point q.w k, q.w s, q.e1, q.e2, and
  * (s, k). Checks the axis and gyro (RangeError).
  */
-export function prepareOrientation(model: SeamModel, axisBall: Readonly<Vec3>, gyroRad: number): void {
+function prepareOrientation(model: SeamModel, axisBall: Readonly<Vec3>, gyroRad: number): void {
   const w = unit3(axisBall);
   assertGyro(gyroRad);
   const wx = w[0], wy = w[1], wz = w[2];
