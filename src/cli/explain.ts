@@ -29,6 +29,7 @@ export function registerExplain(y: Argv): Argv {
           .option("summary", textOption("batch: per pitcher and pitch type, one seam orientation fitted to all its throws (.json or .csv)"))
           .option("report", textOption("batch: the bullpen report, a PDF per pitcher (.pdf)"))
           .option("report-svg", textOption("batch: also each of the report's charts as SVG, in this folder"))
+          .option("report-png", textOption("batch: also each of the report's charts as PNG (1600 px wide), in this folder"))
           .option("grid", textOption("spacing of the orientations tried on the ball, deg (1 to 15)", "4"))
           .option("top", textOption("how many matching orientations to report (1 to 20)", "3"))
           .option("json", { type: "boolean", default: false, describe: "print JSON (one pitch)" })
@@ -60,8 +61,11 @@ export function registerExplain(y: Argv): Argv {
           { option: "--report", path: job.report, format: "pdf" },
           // the folder is checked through a file in it; the charts' names come from the pitchers
           { option: "--report-svg", path: job.reportSvg === undefined ? undefined : join(job.reportSvg, "movement.svg"), format: "svg" },
+          { option: "--report-png", path: job.reportPng === undefined ? undefined : join(job.reportPng, "movement.png"), format: "png" },
         ];
-        if (job.reportSvg === "-" || job.reportSvg === "") throw new InputError(`--report-svg ${quote(job.reportSvg)}: expected a folder for the charts`);
+        for (const [option, folder] of [["--report-svg", job.reportSvg], ["--report-png", job.reportPng]] as const) {
+          if (folder === "-" || folder === "") throw new InputError(`${option} ${quote(folder)}: expected a folder for the charts`);
+        }
         planned = planRun(wanted, inputFiles(argv));
         sink = openOutputStream(planned[0]!);
       } catch (err) {
@@ -113,9 +117,9 @@ export function registerExplain(y: Argv): Argv {
         );
         wrote.push(where(summaryOut));
       }
-      if (reportOut || job.reportSvg !== undefined) {
+      if (reportOut || job.reportSvg !== undefined || job.reportPng !== undefined) {
         const report = await import("../jobs/explainReport.js");
-        const built = await report.buildBullpenReport(job.settings, types, { pdf: reportOut !== undefined, svg: job.reportSvg !== undefined });
+        const built = await report.buildBullpenReport(job.settings, types, { pdf: reportOut !== undefined, svg: job.reportSvg !== undefined, png: job.reportPng !== undefined });
         if (reportOut) {
           writeOutput(reportOut, built.pdf!);
           wrote.push(where(reportOut));
@@ -127,6 +131,14 @@ export function registerExplain(y: Argv): Argv {
           );
           charts.forEach((p, i) => writeOutput(p!, built.svgs[i].svg));
           wrote.push(`${built.svgs.length} chart(s) in ${quote(job.reportSvg)}`);
+        }
+        if (job.reportPng !== undefined) {
+          const charts = planRun(
+            built.pngs.map((s) => ({ option: "--report-png", path: join(job.reportPng!, s.name), format: "png" as const })),
+            inputFiles(argv),
+          );
+          charts.forEach((p, i) => writeOutput(p!, built.pngs[i].png));
+          wrote.push(`${built.pngs.length} PNG chart(s) in ${quote(job.reportPng)}`);
         }
       }
       if (summary.stoppedAt !== undefined) {

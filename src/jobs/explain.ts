@@ -62,6 +62,8 @@ export interface ExplainBatchJob {
   /** --report FILE.pdf and --report-svg DIR. */
   readonly report?: string;
   readonly reportSvg?: string;
+  /** --report-png DIR. */
+  readonly reportPng?: string;
   /** Worker threads: a number, or "auto" (by the file's size). */
   readonly threads: number | "auto";
 }
@@ -77,7 +79,7 @@ function isFolder(path: string): boolean {
 }
 
 /** Options that only a batch (--csv-in) reads. */
-const BATCH_ONLY = ["on-bad-row", "format", "columns", "summary", "report", "report-svg", "threads"];
+const BATCH_ONLY = ["on-bad-row", "format", "columns", "summary", "report", "report-svg", "report-png", "threads"];
 /** Options that only one pitch reads (the CSV gives every pitch and its movement). */
 const ONE_ONLY = [...PITCH_FLAGS, "pitch", "pitch-name", "demo", "move-arm", "move-right", "move-up", "json"];
 
@@ -143,7 +145,8 @@ export function parseExplain(request: Request): ExplainJob {
     const report = request.report === undefined ? undefined : optionPath("report", request.report);
     const reportSvg = request["report-svg"] === undefined ? undefined : optionPath("report-svg", request["report-svg"]);
     const threads = threadsChoice(request);
-    return { kind: "batch", settings, csvIn: optionPath("csv-in", request["csv-in"]), out, format: format ?? "csv", onBadRow, columns, summary, report, reportSvg, threads };
+    const reportPng = request["report-png"] === undefined ? undefined : optionPath("report-png", request["report-png"]);
+    return { kind: "batch", settings, csvIn: optionPath("csv-in", request["csv-in"]), out, format: format ?? "csv", onBadRow, columns, summary, report, reportSvg, reportPng, threads };
   }
   const batchOnly = BATCH_ONLY.find(given);
   if (batchOnly) throw new InputError(`--${batchOnly} goes with --csv-in FILE (a batch); leave it out for one pitch`);
@@ -341,7 +344,7 @@ interface Group {
 export async function runExplainBatch(job: ExplainBatchJob, opened: { reader: CsvReader; columns: ColumnMap }, events: BatchEvents): Promise<BatchSummary> {
   const { reader, columns } = opened;
   const label = batchLabel(job);
-  const wantGroups = job.summary !== undefined || job.report !== undefined || job.reportSvg !== undefined;
+  const wantGroups = job.summary !== undefined || job.report !== undefined || job.reportSvg !== undefined || job.reportPng !== undefined;
   const threads = job.threads === "auto" ? autoThreads(reader.progress().totalBytes) : job.threads;
   const runner = await blockRunner(job.settings, threads);
   const groups: Group[] = [];

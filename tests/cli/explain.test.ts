@@ -143,12 +143,13 @@ describe("seam-atlas explain, a batch", () => {
     }
   }, 120_000);
 
-  itWithPoppler("--report writes the bullpen report: a cover and two pages per pitcher, the basis, the pitchers, the charts' words and the caution on every page; --report-svg writes each chart [pdfinfo, pdftotext]", () => {
+  itWithPoppler("--report writes the bullpen report: a cover and two pages per pitcher, the basis, the pitchers, the charts' words and the caution on every page; --report-svg and --report-png write each chart [pdfinfo, pdftotext; PNG, ISO/IEC 15948 sec. 11.2.2]", () => {
     const csv = join(tmp, "session.csv");
     if (!existsSync(csv)) writeFileSync(csv, sessionCsv(plantedSession([{ pitcher: "Iris Talvela", pitch: "sinker", hand: "right", speedMph: 92, spinRpm: 2150, tilt: "1:45", gyroDeg: 10, latLon: [30, 100] }], 12, seamModel(), 5, 0.1)));
     const pdf = join(tmp, "bullpen.pdf");
     const svgDir = join(tmp, "charts");
-    const r = runCli(["explain", "--csv-in", csv, "--out", join(tmp, "r.csv"), "--report", pdf, "--report-svg", svgDir, "--cache", CACHE]);
+    const pngDir = join(tmp, "pngs");
+    const r = runCli(["explain", "--csv-in", csv, "--out", join(tmp, "r.csv"), "--report", pdf, "--report-svg", svgDir, "--report-png", pngDir, "--cache", CACHE]);
     expect(r.code).toBe(0);
     const pitchers = new Set(readFileSync(csv, "utf8").trim().split("\n").slice(1).map((l) => l.split(",")[0]));
     const pages = pdfPages(pdf);
@@ -165,6 +166,14 @@ describe("seam-atlas explain, a batch", () => {
     expect(svgs).toHaveLength(2 * pitchers.size);
     expect(svgs).toContain("Iris-Talvela-movement.svg");
     expect(readFileSync(join(svgDir, "Iris-Talvela-direction.svg"), "utf8")).toMatch(/^<svg[^>]*viewBox="0 0 520 470"/);
+    // the same charts as PNG, named like the SVG files; the IHDR chunk holds width and height (PNG spec, sec. 11.2.2)
+    expect(readdirSync(pngDir).sort()).toEqual(svgs.map((f) => f.replace(/\.svg$/, ".png")).sort());
+    const png = readFileSync(join(pngDir, "Iris-Talvela-movement.png"));
+    expect(png.subarray(0, 8)).toEqual(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
+    expect(png.toString("latin1", 12, 16)).toBe("IHDR");
+    expect(png.readUInt32BE(16)).toBe(1600);
+    // the chart's aspect ratio, 520 x 470 (to the pixel)
+    expect(Math.abs(png.readUInt32BE(20) - Math.round((1600 * 470) / 520))).toBeLessThanOrEqual(1);
   }, 120_000);
 
   it("with --on-bad-row stop, stops at the bad row with exit 2 and keeps the rows before it", () => {
