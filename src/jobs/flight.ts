@@ -16,6 +16,7 @@ import { DEFAULT_SCREEN_OPTIONS, DEFAULT_TOP, screenPitch, TOP_RANGE } from "../
 import type { PitchEcho } from "../screening/report.js";
 import type { Pitch } from "../screening/pitch.js";
 import { pitchesFromRequest } from "./request/pitch.js";
+import { jobScreenSettings } from "./screenJob.js";
 import { buildModel, modelChoice } from "./request/model.js";
 import { airConditions, dragModel, launchAngles, releasePoint, samplerSettings, spinDecay, windowStart, type SamplerSettings } from "./request/settings.js";
 import { oneOf, parseAxis, parseInteger, parseNumber, type Request } from "./request/values.js";
@@ -90,7 +91,6 @@ export function parseFlight(request: Request): FlightJob {
 }
 
 export function runFlight(job: FlightJob): FlightOutcome {
-  const s = job.sampler;
   let axis: Vec3;
   const ask = job.axisRequest;
   if (ask.kind === "axis") axis = ask.vector;
@@ -98,12 +98,7 @@ export function runFlight(job: FlightJob): FlightOutcome {
     // the screen of this pitch as `screen` makes it (default settings; this flight's air and window)
     const screen = screenPitch(job.pitch, {
       ...DEFAULT_SCREEN_OPTIONS,
-      seamShape: s.seamShape,
-      seamPoints: s.seamPoints,
-      band: s.band,
-      model: job.model,
-      air: job.air,
-      windowStartM: job.windowStartM,
+      ...jobScreenSettings(job),
       top: ask.kind === "candidate" ? Math.min(Math.max(ask.n, DEFAULT_TOP), TOP_RANGE[1]) : DEFAULT_TOP,
     });
     if (ask.kind === "candidate") {

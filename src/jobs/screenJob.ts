@@ -82,6 +82,12 @@ export function screenJobOf(request: Request, sources: ScreenSources, top: TopCh
   };
 }
 
+/** The screen's settings a job carries (the sampler, the model, the air and the window), as screenPitch takes them. */
+export function jobScreenSettings(job: { readonly sampler: SamplerSettings; readonly model: SeamModel; readonly air: AirConditions; readonly windowStartM: number }) {
+  const s = job.sampler;
+  return { seamShape: s.seamShape, seamPoints: s.seamPoints, band: s.band, model: job.model, air: job.air, windowStartM: job.windowStartM };
+}
+
 /** Screens every pitch of the job. */
 export function runScreen(job: ScreenJob): ScreenOutcome {
   return { job, screened: job.pitches.map((p) => screenOne(job, p)) };
@@ -89,18 +95,12 @@ export function runScreen(job: ScreenJob): ScreenOutcome {
 
 /** Screens one pitch of the job; `onProgress` hears each step (src/screening/screen.ts). */
 export function screenOne(job: ScreenJob, input: PitchInput, onProgress?: ScreenProgress): ScreenedPitch {
-  const s = job.sampler;
   const result = screenPitch(
     input.pitch,
     {
       ...job.options,
       top: job.top,
-      seamShape: s.seamShape,
-      seamPoints: s.seamPoints,
-      band: s.band,
-      model: job.model,
-      air: job.air,
-      windowStartM: job.windowStartM,
+      ...jobScreenSettings(job),
       ...(job.maps ? { maps: job.maps } : {}),
     },
     onProgress,
