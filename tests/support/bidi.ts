@@ -39,3 +39,13 @@ export function visualWordOrder(typed: string): string {
   }
   return out.join(" ");
 }
+
+/**
+ * A word as pdftotext -bbox reads it back: poppler lists a word's characters in the
+ * order its glyphs stand on the page (left to right), so a right-to-left word drawn
+ * correctly (first letter at the right) reads back reversed. This turns such a
+ * word back into logical order; a left-to-right word is returned as it is.
+ */
+export function logicalFromGlyphOrder(word: string): string {
+  return /[\p{Script=Arabic}\p{Script=Hebrew}]/u.test(word) ? Array.from(word).reverse().join("") : word;
+}
