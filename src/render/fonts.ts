@@ -1,15 +1,28 @@
 /**
- * The one typeface of every printed and rasterised output: Noto Sans (SIL Open
- * Font Licence 1.1), regular and bold, from the @fontsource/noto-sans package.
+ * The typeface of every printed and rasterised output: Noto Sans (SIL Open Font
+ * Licence 1.1), regular and bold, from the @fontsource/noto-sans package, with
+ * fallback faces of the same design for the scripts it lacks.
  *
  * That package splits the face by script into subset files (latin, latin-ext,
  * cyrillic, cyrillic-ext, greek, greek-ext, vietnamese). Each is a WOFF 1.0 file,
  * unpacked here to a plain TrueType font (`woffToSfnt`), so pdfkit can embed it
  * (subsetting it to the glyphs used) and resvg can draw with it. Text is set by
  * render/typeset.ts over these files: runs in the first subset that holds each
- * character (a character none holds, Arabic, the CJK scripts, emoji, ..., prints as
- * U+FFFD), measured with the font's own advances and kerning (fontkit's layout), the
- * same way pdfkit places it, so lines wrapped here fit where they are drawn.
+ * character, measured with the font's own advances and kerning (fontkit's layout),
+ * the same way pdfkit places it, so lines wrapped here fit where they are drawn.
+ *
+ * A character none of those subsets holds is looked up, in this order, in
+ * - Noto Sans Arabic (@fontsource/noto-sans-arabic, its "arabic" subset file),
+ * - Noto Sans Hebrew (@fontsource/noto-sans-hebrew, its "hebrew" subset file),
+ * - Noto Sans SC (@fontsource/noto-sans-sc: Chinese ideographs, Japanese kana), an
+ *   optional package (73 MB, a development dependency, not installed for users by
+ *   default): read only if it resolves, the file for each character chosen by the
+ *   unicode-range declarations of the package's own 400.css / 700.css. Its files
+ *   hold 80 of the 11,172 Hangul syllables, so Hangul is not set in it: Korean
+ *   prints as U+FFFD rather than half its letters.
+ * A character none holds (emoji, other scripts) prints as U+FFFD. When Noto Sans SC
+ * is not installed and a Chinese or Japanese character needs it, one line on
+ * standard error (once per process) names the package to install.
  */
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
@@ -21,26 +34,29 @@ import { typesetter, type FontWeight, type TextRun as TypesetRun, type TypesetFa
 
 export { MISSING_GLYPH, type FontWeight } from "./typeset.js";
 export const FONT_FAMILY = "Noto Sans";
-/** The SVG font-family list written into drawings: ours first, then what a viewer has. */
-export const SVG_FONT_FAMILY = "Noto Sans, DejaVu Sans, Verdana, sans-serif";
+/** The SVG font-family list written into drawings: ours first (the fallback faces next, for a viewer that has them), then what a viewer has. */
+export const SVG_FONT_FAMILY = "Noto Sans, Noto Sans Arabic, Noto Sans Hebrew, Noto Sans SC, DejaVu Sans, Verdana, sans-serif";
 
 /** The subsets, in the order a character is looked up. */
 export const FONT_SUBSETS = ["latin", "latin-ext", "cyrillic", "cyrillic-ext", "greek", "greek-ext", "vietnamese"] as const;
 export type FontSubset = (typeof FONT_SUBSETS)[number];
 
+/** The fallback faces' files: Arabic, Hebrew, or a Noto Sans SC file ("sc-115"). */
+export type FallbackSubset = "arabic" | "hebrew" | `sc-${string}`;
+
 export interface FontFace extends TypesetFace {
-  /** A name unique to this file, as registered in a PDF (e.g. "NotoSans-cyrillic-700"). */
+  /** A name unique to this file, as registered in a PDF (e.g. "NotoSans-cyrillic-700", "NotoSansArabic-arabic-400"). */
   readonly key: string;
-  readonly subset: FontSubset;
+  readonly subset: FontSubset | FallbackSubset;
   readonly weight: FontWeight;
   /** The font as a plain TrueType file. */
   readonly sfnt: Buffer;
   readonly font: fontkit.Font;
 }
 
-function packageDir(): string {
-  // the package exports only its CSS and LICENSE; the LICENSE file sits at its root
-  return dirname(createRequire(import.meta.url).resolve("@fontsource/noto-sans/LICENSE"));
+function packageDir(pkg = "@fontsource/noto-sans"): string {
+  // the packages export only their CSS, files and LICENSE; the LICENSE file sits at the root
+  return dirname(createRequire(import.meta.url).resolve(`${pkg}/LICENSE`));
 }
 
 /**
@@ -125,8 +141,144 @@ export function allFaces(weight: FontWeight): FontFace[] {
   return FONT_SUBSETS.map((s) => fontFace(s, weight));
 }
 
+/** The fallback packages, pinned in package.json (Noto Sans SC as a development dependency: optional to users). */
+export const FALLBACK_PACKAGES = {
+  arabic: "@fontsource/noto-sans-arabic",
+  hebrew: "@fontsource/noto-sans-hebrew",
+  cjk: "@fontsource/noto-sans-sc",
+} as const;
+/** The version of Noto Sans SC the notice asks for (the one package.json pins). */
+const CJK_VERSION = "5.3.0";
+
+const fallbackFaces = new BoundedCache<string, FontFace>("fallback faces", 256);
+
+function parsedFace(key: string, subset: FontSubset | FallbackSubset, weight: FontWeight, woff: Buffer, covers: (cp: number) => boolean = () => true): FontFace {
+  const sfnt = woffToSfnt(woff);
+  const font = fontkit.create(sfnt);
+  return {
+    key,
+    subset,
+    weight,
+    sfnt,
+    font,
+    holds: (cp: number) => covers(cp) && font.hasGlyphForCodePoint(cp),
+    wordWidthEm: (word: string) => font.layout(word).advanceWidth / font.unitsPerEm,
+  };
+}
+
+/** The Arabic or Hebrew fallback face (a dependency: always installed). */
+export function scriptFace(script: "arabic" | "hebrew", weight: FontWeight): FontFace {
+  const w = weight === "bold" ? 700 : 400;
+  const family = script === "arabic" ? "NotoSansArabic" : "NotoSansHebrew";
+  return fallbackFaces.get(`${family}-${script}-${w}`, () => {
+    const file = join(packageDir(FALLBACK_PACKAGES[script]), "files", `noto-sans-${script}-${script}-${w}-normal.woff`);
+    return parsedFace(`${family}-${script}-${w}`, script, weight, readFileSync(file));
+  });
+}
+
+/** One unicode-range of a Noto Sans SC file: [first, last] code points and the file's name. */
+interface CjkRange {
+  readonly first: number;
+  readonly last: number;
+  readonly file: string;
+}
+
+const cjkRanges = new Map<FontWeight, CjkRange[] | null>();
+
+/**
+ * The unicode-range declarations of Noto Sans SC's CSS for one weight (400.css or
+ * 700.css), sorted by first code point, or null when the package is not installed.
+ * @throws RangeError when the CSS declares no file with a range (a changed package layout)
+ */
+export function cjkUnicodeRanges(weight: FontWeight): readonly CjkRange[] | null {
+  let ranges = cjkRanges.get(weight);
+  if (ranges !== undefined) return ranges;
+  let dir: string | null;
+  try {
+    dir = packageDir(FALLBACK_PACKAGES.cjk);
+  } catch {
+    dir = null;
+  }
+  ranges = dir === null ? null : parseUnicodeRanges(readFileSync(join(dir, `${weight === "bold" ? 700 : 400}.css`), "utf8"));
+  cjkRanges.set(weight, ranges);
+  return ranges;
+}
+
+/**
+ * The @font-face rules of a CSS file as [first, last, file] ranges (CSS Fonts Level 4,
+ * sec. 4.5 "unicode-range": U+hex, U+hex-hex; wildcards "?" as 0 and F), the file
+ * being the rule's WOFF 1.0 source, sorted by first code point.
+ * @throws RangeError when no rule has both a .woff source and a unicode-range
+ */
+export function parseUnicodeRanges(css: string): CjkRange[] {
+  const out: CjkRange[] = [];
+  for (const rule of css.split("@font-face").slice(1)) {
+    const file = /url\(\.\/files\/([^)]+?\.woff)\)/.exec(rule)?.[1];
+    const list = /unicode-range:\s*([^;}]+)/.exec(rule)?.[1];
+    if (!file || !list) continue;
+    for (const part of list.split(",")) {
+      const m = /^\s*U\+([0-9a-f?]+)(?:-([0-9a-f]+))?\s*$/i.exec(part);
+      if (!m) throw new RangeError(`unicode-range "${part.trim()}" is not U+hex or U+hex-hex`);
+      const first = parseInt(m[1].replace(/\?/g, "0"), 16);
+      const last = parseInt(m[2] ?? m[1].replace(/\?/g, "f"), 16);
+      out.push({ first, last, file });
+    }
+  }
+  if (!out.length) throw new RangeError("the CSS has no @font-face rule with a .woff source and a unicode-range");
+  return out.sort((a, b) => a.first - b.first);
+}
+
+function cjkFileFor(ranges: readonly CjkRange[], cp: number): string | null {
+  let lo = 0;
+  let hi = ranges.length - 1;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    if (cp < ranges[mid].first) hi = mid - 1;
+    else if (cp > ranges[mid].last) lo = mid + 1;
+    else return ranges[mid].file;
+  }
+  return null;
+}
+
+// Korean: the SC files hold too few syllables to set a name (see the header)
+const HANGUL = /\p{Script=Hangul}/u;
+// what only a CJK face would print: the notice is for these
+const HAN_KANA = /[\p{Script=Han}\p{Script=Hiragana}\p{Script=Katakana}\p{Script=Bopomofo}]/u;
+let cjkNoticeGiven = false;
+
+/** The Noto Sans SC file that holds `cp` by the package's CSS, parsed (cached); null when none or not installed. */
+export function cjkFace(cp: number, weight: FontWeight): FontFace | null {
+  if (HANGUL.test(String.fromCodePoint(cp))) return null;
+  const ranges = cjkUnicodeRanges(weight);
+  if (ranges === null) {
+    if (!cjkNoticeGiven && HAN_KANA.test(String.fromCodePoint(cp))) {
+      cjkNoticeGiven = true;
+      process.stderr.write(`seam-atlas: Chinese and Japanese characters print as \ufffd; to print them, install the font package: npm install ${FALLBACK_PACKAGES.cjk}@${CJK_VERSION}\n`);
+    }
+    return null;
+  }
+  const file = cjkFileFor(ranges, cp);
+  if (!file) return null;
+  const name = /^noto-sans-sc-(.+)-[0-9]00-normal\.woff$/.exec(file)?.[1] ?? file;
+  const key = `NotoSansSC-${name}-${weight === "bold" ? 700 : 400}`;
+  return fallbackFaces.get(key, () =>
+    parsedFace(key, `sc-${name}`, weight, readFileSync(join(packageDir(FALLBACK_PACKAGES.cjk), "files", file)), (c) => !HANGUL.test(String.fromCodePoint(c))),
+  );
+}
+
+/** The first fallback face that holds every code point of one character, or null. */
+function fallbackFace(cps: readonly number[], weight: FontWeight): FontFace | null {
+  for (const script of ["arabic", "hebrew"] as const) {
+    const f = scriptFace(script, weight);
+    if (cps.every((cp) => f.holds(cp))) return f;
+  }
+  const f = cjkFace(cps[0], weight);
+  return f && cps.every((cp) => f.holds(cp)) ? f : null;
+}
+
 /** The text functions over these files (render/typeset.ts): runs, widths, line breaks. */
 const text = typesetter<FontFace>({
+  fallback: fallbackFace,
   subsetCount: FONT_SUBSETS.length,
   face: (index, weight) => fontFace(FONT_SUBSETS[index], weight),
   metricsEm: (weight) => {
@@ -136,19 +288,19 @@ const text = typesetter<FontFace>({
 });
 
 export type TextRun = TypesetRun<FontFace>;
-export const { textRuns, printable, measureText, runsWidth, fontMetricsEm, wrapText } = text;
+export const { textRuns, visualRuns, printable, measureText, runsWidth, fontMetricsEm, wrapText } = text;
 
 /**
  * The outline of `text` set at `size` with its baseline starting at (x, y) (y down),
  * as SVG path data: each glyph's own contours from the face, placed by its advance
- * and kerning, so a rasteriser draws exactly the letters the PDF holds without
+ * and kerning, runs in visual order (right-to-left words reversed and shaped), so a rasteriser draws exactly the letters the PDF holds without
  * needing the font.
  */
 export function textOutline(text: string, x: number, y: number, size: number, weight: FontWeight = "normal"): string {
   let d = "";
   let pen = x;
   const f = (n: number) => String(Math.round(n * 100) / 100);
-  for (const r of textRuns(text, weight)) {
+  for (const r of visualRuns(text, weight)) {
     const font = r.face.font;
     const k = size / font.unitsPerEm;
     const run = font.layout(r.text);

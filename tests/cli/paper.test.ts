@@ -9,6 +9,7 @@ import { seamModel } from "../../src/physics/seamModel/model.js";
 import { sampleSeam } from "../../geometry/seamSamples.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { runCli, ROOT } from "../support/cli.js";
+import { pdfRawText, visualWordOrder } from "../support/bidi.js";
 import { inkSpread, itWithPoppler, pdfPages, pdfPageSizePt, pdfText, renderGray, run } from "../support/poppler.js";
 import { xmlProblems } from "../support/svgCheck.js";
 
@@ -123,12 +124,29 @@ describe("grip card", () => {
     expect(xmlProblems(svg.trim())).toEqual([]);
   });
 
-  itWithPoppler("prints a name in any script: accents, Cyrillic and Greek as themselves, CJK and emoji as U+FFFD placeholders that leave the next word whole", () => {
+  itWithPoppler("prints a name in any script: accents, Cyrillic, Arabic and Hebrew (right to left, UAX #9), Chinese and Japanese as themselves, Hangul and emoji as U+FFFD placeholders that leave the next word whole (pdftotext -raw)", () => {
     const out = join(tmp, "names.pdf");
-    const r = runCli(["card", ...SINKER.filter((a) => a !== "sinker" && a !== "--name"), "--name", "Zoë Ярослава Σοφία 山田 👍🏽 sinker", "--out", out]);
+    const typed = "Zoë Ярослава محمد علي דוד לוי 李小龙 山田 太郎 김민준 👍🏽 sinker";
+    const r = runCli(["card", ...SINKER.filter((a) => a !== "sinker" && a !== "--name"), "--name", typed, "--out", out]);
     expect(r.code, r.stderr).toBe(0);
-    const text = flat(pdfText(out));
-    expect(text).toContain("Zoë Ярослава Σοφία \ufffd\ufffd \ufffd sinker: grip 1");
+    expect(r.stderr).toBe("");
+    const text = flat(pdfRawText(out));
+    // UAX #9: the four right-to-left words form one stretch, drawn last word first
+    expect(visualWordOrder(typed)).toBe("Zoë Ярослава לוי דוד علي محمد 李小龙 山田 太郎 김민준 👍🏽 sinker");
+    expect(text).toContain("Zoë Ярослава לוי דוד علي محمد 李小龙 山田 太郎 \ufffd\ufffd\ufffd \ufffd sinker: grip 1");
+  });
+
+  it("as PNG draws the letters of an Arabic name: the picture differs from the same card named with U+FFFD marks", () => {
+    const png = (name: string, file: string) => {
+      const out = join(tmp, file);
+      const r = runCli(["card", ...SINKER.filter((a) => a !== "sinker" && a !== "--name"), "--name", name, "--png", "--out", out]);
+      expect(r.code, r.stderr).toBe(0);
+      return readFileSync(out);
+    };
+    const marks = png("\ufffd\ufffd\ufffd\ufffd", "marks.png");
+    expect(png("محمد", "arabic.png").equals(marks)).toBe(false);
+    // the same name twice gives the same picture, so the difference is the letters
+    expect(png("\ufffd\ufffd\ufffd\ufffd", "marks2.png").equals(marks)).toBe(true);
   });
 
   it.each([

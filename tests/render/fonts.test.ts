@@ -3,7 +3,10 @@ import { createRequire } from "node:module";
 import { dirname, join } from "node:path";
 import * as fontkit from "fontkit";
 import { describe, expect, it } from "vitest";
-import { fontFace, MISSING_GLYPH, measureText, printable, textRuns, woffToSfnt, wrapText } from "../../src/render/fonts.js";
+import PDFDocument from "pdfkit";
+import { cjkFace, cjkUnicodeRanges, fontFace, MISSING_GLYPH, measureText, parseUnicodeRanges, printable, scriptFace, textRuns, visualRuns, woffToSfnt, wrapText } from "../../src/render/fonts.js";
+import { paintSceneAt } from "../../src/render/paper/pdfScene.js";
+import { createScene } from "../../src/render/scene.js";
 
 const dir = join(dirname(createRequire(import.meta.url).resolve("@fontsource/noto-sans/LICENSE")), "files");
 
@@ -30,12 +33,104 @@ describe("the embedded face (Noto Sans from @fontsource/noto-sans)", () => {
     expect(runs.map((r) => r.text).join("")).toBe("Zoë Łukasz Ярослава Σοφία Nguyễn".normalize("NFC"));
   });
 
-  it("prints one U+FFFD for each character the face lacks (CJK, Arabic, an emoji with skin tone, a family emoji), never stray glyphs", () => {
-    expect(printable("山田 太郎")).toBe(`${MISSING_GLYPH}${MISSING_GLYPH} ${MISSING_GLYPH}${MISSING_GLYPH}`);
-    expect(printable("عمر")).toBe(MISSING_GLYPH.repeat(3));
+  it("prints one U+FFFD for each character no shipped face holds (Hangul, an emoji with skin tone, a family emoji), never stray glyphs", () => {
+    expect(printable("김민준")).toBe(MISSING_GLYPH.repeat(3));
     expect(printable("A👍🏽B")).toBe(`A${MISSING_GLYPH}B`);
     expect(printable("x👨‍👩‍👧y")).toBe(`x${MISSING_GLYPH}y`);
     expect(fontFace("latin", "normal").font.hasGlyphForCodePoint(0xfffd)).toBe(true);
+  });
+
+  it("sets Arabic, Hebrew, Chinese and Japanese in the fallback faces, each character in a file that holds it, and prints them as typed", () => {
+    for (const [name, family] of [["محمد علي", "NotoSansArabic"], ["דוד לוי", "NotoSansHebrew"], ["李小龙", "NotoSansSC"], ["山田 太郎", "NotoSansSC"], ["さくら カナ", "NotoSansSC"]] as const) {
+      expect(printable(name)).toBe(name);
+      for (const r of textRuns(name)) {
+        expect(r.face.key.startsWith(`${family}-`), `${name}: ${r.face.key}`).toBe(true);
+        for (const ch of r.text) expect(r.face.font.hasGlyphForCodePoint(ch.codePointAt(0)!)).toBe(true);
+      }
+    }
+  });
+
+  it("picks each CJK file by the package's own CSS: every code point a 400.css rule names is in that rule's file (cross-check of the CSS against the file's cmap, sampled)", () => {
+    const css = readFileSync(join(dirname(createRequire(import.meta.url).resolve("@fontsource/noto-sans-sc/LICENSE")), "400.css"), "utf8");
+    const ranges = parseUnicodeRanges(css);
+    // fontsource's 400.css: one rule per file, about 100 files (the package's README)
+    expect(new Set(ranges.map((r) => r.file)).size).toBeGreaterThan(90);
+    expect(cjkUnicodeRanges("normal")).toEqual(ranges);
+    for (const cp of [0x674e, 0x5c0f, 0x9f99, 0x5c71, 0x7530, 0x3042, 0x30ab]) {
+      const face = cjkFace(cp, "normal")!;
+      const rule = ranges.find((r) => cp >= r.first && cp <= r.last)!;
+      expect(face.key).toBe(`NotoSansSC-${/^noto-sans-sc-(.+)-400-normal\.woff$/.exec(rule.file)![1]}-400`);
+      expect(face.font.hasGlyphForCodePoint(cp)).toBe(true);
+    }
+  });
+
+  it("leaves Hangul out of Noto Sans SC, whose files hold only some syllables (김 is in one, 민 in none): Korean prints as U+FFFD whole", () => {
+    const ranges = cjkUnicodeRanges("normal")!;
+    const inCss = (cp: number) => ranges.some((r) => cp >= r.first && cp <= r.last);
+    expect(inCss(0xae40)).toBe(true);
+    expect(inCss(0xbbfc)).toBe(false);
+    expect(cjkFace(0xae40, "normal")).toBe(null);
+  });
+
+  it("parses CSS unicode-range lists (CSS Fonts Level 4, sec. 4.5): single code points, ranges and wildcards", () => {
+    const css = "@font-face { src: url(./files/a.woff2) format('woff2'), url(./files/a.woff) format('woff'); unicode-range: U+4e00-4e0f,U+30??,U+ff01; }";
+    expect(parseUnicodeRanges(css)).toEqual([
+      { first: 0x3000, last: 0x30ff, file: "a.woff" },
+      { first: 0x4e00, last: 0x4e0f, file: "a.woff" },
+      { first: 0xff01, last: 0xff01, file: "a.woff" },
+    ]);
+    expect(() => parseUnicodeRanges("body { color: red }")).toThrow(RangeError);
+  });
+
+  it("orders a mixed line as UAX #9 does for a left-to-right paragraph: each right-to-left stretch, spaces and punctuation between its words included, last word first", () => {
+    const order = (t: string) => visualRuns(t).map((r) => r.text).join("|");
+    // UAX #9 N1: the space between two Arabic words takes their direction; the one before the en dash (R then ON then L) the paragraph's
+    expect(order("Coach محمد علي – sinker")).toBe("Coach |علي| |محمد| |– sinker");
+    // a Hebrew word next to an Arabic word: one right-to-left stretch across two faces
+    expect(order("a דוד محمد b")).toBe("a |محمد| |דוד| |b");
+    // a hyphen between two Hebrew words (N1): drawn between them, the second word at the left
+    expect(order("בן-גוריון")).toBe("גוריון|-|בן");
+    // no right-to-left letter: the logical runs as they are
+    expect(visualRuns("Zoë Ярослава")).toEqual(textRuns("Zoë Ярослава"));
+  });
+
+  it("measures Arabic as pdfkit lays it out: our width of 'محمد علي' at 10 pt equals pdfkit's widthOfString in the same face (fontkit's shaping, both routes), to 1e-9 pt", () => {
+    const doc = new PDFDocument({ size: [100, 100] });
+    const face = scriptFace("arabic", "normal");
+    doc.registerFont(face.key, face.sfnt);
+    doc.font(face.key).fontSize(10);
+    expect(measureText("محمد علي", 10)).toBeCloseTo(doc.widthOfString("محمد علي"), 9);
+    // shaping narrows the word: the joined forms are not the isolated letters' advances summed
+    const isolated = [..."محمد"].reduce((w, ch) => w + face.font.glyphForCodePoint(ch.codePointAt(0)!).advanceWidth, 0) / face.font.unitsPerEm;
+    expect(Math.abs(measureText("محمد", 1) - isolated)).toBeGreaterThan(0.01);
+  });
+
+  it("draws 'محمد' in the PDF with its joining forms, left to right: final dal, medial meem, medial hah, initial meem (The Unicode Standard, ch. 9 Arabic joining; presentation forms U+FEAA, U+FEE4, U+FEA4, U+FEE3), never the isolated letters", async () => {
+    const scene = createScene(120, 40);
+    scene.element("text").attr({ x: 10, y: 30, "font-size": 20 }).words("محمد");
+    const doc = new PDFDocument({ size: [120, 40], compress: false });
+    const chunks: Buffer[] = [];
+    doc.on("data", (c: Buffer) => chunks.push(c));
+    const done = new Promise<void>((ok) => doc.on("end", () => ok()));
+    paintSceneAt(doc, scene);
+    doc.end();
+    await done;
+    const pdf = Buffer.concat(chunks).toString("latin1");
+    // the embedded (subset) font file, read back, and the glyph ids the page shows, in drawing order
+    // the TrueType file pdfkit embeds (its subsetter writes the sfnt version "true")
+    const streams = [...pdf.matchAll(/stream\n([\s\S]*?)\nendstream/g)].map((m) => Buffer.from(m[1], "latin1"));
+    const subset = fontkit.create(streams.find((b) => b.length > 12 && (b.readUInt32BE(0) === 0x00010000 || b.toString("latin1", 0, 4) === "true"))!) as fontkit.Font;
+    const shown = [...pdf.matchAll(/\[<([0-9a-f]+)>[^\]]*\] TJ/g)].flatMap((m) => m[1].match(/.{4}/g)!.map((h) => parseInt(h, 16)));
+    expect(shown.length).toBe(4);
+    // a glyph's outline as its drawing commands (the subset keeps each glyph's contours, renumbered)
+    type Outlined = { path: { commands: readonly unknown[] } };
+    const outline = (g: Outlined) => JSON.stringify(g.path.commands);
+    const glyphOf = (gid: number) => (subset as unknown as { getGlyph(id: number): Outlined }).getGlyph(gid);
+    const arabic = scriptFace("arabic", "normal").font;
+    const forms = [0xfeaa, 0xfee4, 0xfea4, 0xfee3].map((cp) => outline(arabic.glyphForCodePoint(cp)));
+    expect(shown.map((gid) => outline(glyphOf(gid)))).toEqual(forms);
+    const isolated = [0x645, 0x62d, 0x62f].map((cp) => outline(arabic.glyphForCodePoint(cp)));
+    for (const g of shown) expect(isolated).not.toContain(outline(glyphOf(g)));
   });
 
   it("drops control characters and invisible bidi marks", () => {

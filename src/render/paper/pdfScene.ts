@@ -8,12 +8,14 @@
  * dashes, caps, joins and the even-odd rule. Fill, stroke, stroke-width and font
  * attributes inherit as in SVG; opacity applies to the node it is on.
  *
- * Text is set in Noto Sans (render/fonts.ts), run by run in the subset that holds
- * each character, with a halo text node (drawn first) as stroked letters under the
+ * Text is set in Noto Sans and its fallback faces (render/fonts.ts), run by run in
+ * the file that holds each character, runs in visual order from left to right (a
+ * right-to-left word is its own run, which pdfkit's layout, fontkit, shapes and
+ * reverses), with a halo text node (drawn first) as stroked letters under the
  * filled ones.
  */
 import type { Box } from "./layouts.js";
-import { runsWidth, textRuns, type FontFace, type FontWeight } from "../fonts.js";
+import { runsWidth, visualRuns, type FontFace, type FontWeight } from "../fonts.js";
 import { sceneSize, type SceneNode } from "../scene.js";
 
 export type Doc = PDFKit.PDFDocument;
@@ -142,7 +144,7 @@ function pointsOf(v: unknown): number[] {
 function drawText(doc: Doc, node: SceneNode, s: Style): void {
   const text = node.text ?? "";
   if (!text) return;
-  const runs = textRuns(text, s.fontWeight);
+  const runs = visualRuns(text, s.fontWeight);
   const width = runsWidth(runs, s.fontSize);
   let x = num(node.attrs.x) - (s.anchor === "middle" ? width / 2 : s.anchor === "end" ? width : 0);
   const y = num(node.attrs.y);

@@ -13,8 +13,12 @@ export const NAMES = {
   cyrillic: "Иван Петров",
   greek: "Σοφία Παπαδοπούλου",
   vietnamese: "Nguyễn Thị Hương",
-  // the face has no Arabic, CJK or emoji: each grapheme prints as U+FFFD
-  arabicCjk: "محمد 李小龙 👍🏽 Karim",
+  arabic: "محمد علي",
+  hebrew: "דוד לוי",
+  chinese: "李小龙",
+  japanese: "山田 太郎",
+  // no face shipped holds Hangul or emoji: each grapheme prints as U+FFFD
+  lacked: "김민준 👍🏽 Karim",
 } as const;
 
 function throwsOf(n: number, armIn: number, upIn: number, spinMinutes: number, gapMinutes: number): ReportThrow[] {

@@ -1,9 +1,9 @@
 /**
  * The bullpen report's pages: their order and count, the same bytes for the same
  * data, every word inside its page, and names in any script read back from the PDF
- * by poppler's pdftotext exactly as typed where the face holds the script (accents,
- * Cyrillic, Greek, Vietnamese), as one U+FFFD per character where it does not
- * (Arabic, CJK, emoji), the next word whole either way.
+ * by poppler's pdftotext exactly as typed where a face holds the script (accents,
+ * Cyrillic, Greek, Vietnamese, Arabic, Hebrew, Chinese, Japanese), as one U+FFFD per
+ * character where none does (Hangul, emoji), the next word whole either way.
  */
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
@@ -14,7 +14,8 @@ import { PT_PER_IN } from "../../../src/render/paper/textLayout.js";
 import { bullpenPages, renderBullpenPdf } from "../../../src/render/report/pdf.js";
 import type { SceneNode } from "../../../src/render/scene.js";
 import { wordBoxes } from "../../support/legibility.js";
-import { itWithPoppler, pdfPages, pdfText } from "../../support/poppler.js";
+import { pdfRawText, visualWordOrder } from "../../support/bidi.js";
+import { itWithPoppler, pdfPages } from "../../support/poppler.js";
 import { NAMES, pitcher, reportOf } from "./fixture.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-report-"));
@@ -71,18 +72,24 @@ describe("bullpen report pages", () => {
     }
   });
 
-  itWithPoppler("print names in Latin with accents, Cyrillic, Greek and Vietnamese as typed, and Arabic, CJK and emoji as one U+FFFD each with the next word whole (pdftotext) [README: Cards, atlas and handout]", async () => {
+  itWithPoppler("print names in Latin with accents, Cyrillic, Greek, Vietnamese, Arabic, Hebrew, Chinese and Japanese as typed (Arabic and Hebrew words right to left, UAX #9), and Hangul and emoji as one U+FFFD each with the next word whole (pdftotext -raw) [README: Any name]", async () => {
     const r = reportOf(Object.values(NAMES).map((n) => pitcher(n, ["sinker", "slider"])));
     const pdf = join(tmp, "names.pdf");
     writeFileSync(pdf, await renderBullpenPdf(r));
-    expect(pdfPages(pdf)).toBe(1 + 2 * 5);
-    const text = pdfText(pdf).normalize("NFC");
-    for (const n of [NAMES.latin, NAMES.cyrillic, NAMES.greek, NAMES.vietnamese]) {
-      expect(text).toContain(`${n} (right-handed): sinker 8, slider 8`);
-      expect(text).toContain(`${n}: movement and direction`);
-      expect(text).toContain(`${n}: seam orientations per pitch type`);
+    const names = Object.values(NAMES).length;
+    const pages = pdfPages(pdf);
+    expect(pages).toBeGreaterThanOrEqual(1 + 2 * names);
+    // -raw: words in drawing order, right-to-left words read back logically (tests/support/bidi.ts)
+    const text = pdfRawText(pdf);
+    for (const n of [NAMES.latin, NAMES.cyrillic, NAMES.greek, NAMES.vietnamese, NAMES.arabic, NAMES.hebrew, NAMES.chinese, NAMES.japanese]) {
+      const shown = visualWordOrder(n);
+      expect(text).toContain(`${shown} (right-handed): sinker 8, slider 8`);
+      expect(text).toContain(`${shown}: movement and direction`);
+      expect(text).toContain(`${shown}: seam orientations per pitch type`);
     }
-    const lacked = `${MISSING_GLYPH.repeat(4)} ${MISSING_GLYPH.repeat(3)} ${MISSING_GLYPH} Karim`;
+    // UAX #9 for "محمد علي": the second word drawn first, at the left
+    expect(visualWordOrder(NAMES.arabic)).toBe("علي محمد");
+    const lacked = `${MISSING_GLYPH.repeat(3)} ${MISSING_GLYPH} Karim`;
     expect(text).toContain(`${lacked} (right-handed): sinker 8, slider 8`);
     expect(text).toContain(`${lacked}: movement and direction`);
     // each name also heads its two charts, read word by word from the chart page
