@@ -5,29 +5,11 @@
  * and the same drawing rasterises to PNG.
  */
 import { describe, expect, it } from "vitest";
-import { measureText, type FontWeight } from "../../../src/render/fonts.js";
 import { PNG_WIDTH_PX, sceneToPng } from "../../../src/render/png.js";
 import { CHART_HEIGHT, CHART_WIDTH, directionChartScene, directionChartSvg, movementChartScene, movementChartSvg } from "../../../src/render/report/charts.js";
 import type { SceneNode } from "../../../src/render/scene.js";
-import { NAMES, pitcher, pitchType } from "./fixture.js";
+import { NAMES, pitcher, pitchType, textExtents } from "./fixture.js";
 
-/** Every text node with its left and right ends, px (anchor applied, widths from the face). */
-function textExtents(node: SceneNode, inherited = { size: 16, weight: "normal" as FontWeight, anchor: "start" }, out: { text: string; left: number; right: number; y: number }[] = []) {
-  const a = node.attrs;
-  const style = {
-    size: a["font-size"] !== undefined ? Number(a["font-size"]) : inherited.size,
-    weight: (a["font-weight"] !== undefined ? String(a["font-weight"]) : inherited.weight) as FontWeight,
-    anchor: a["text-anchor"] !== undefined ? String(a["text-anchor"]) : inherited.anchor,
-  };
-  if (node.tag === "text") {
-    const w = measureText(node.text ?? "", style.size, style.weight);
-    const x = Number(a.x);
-    const left = style.anchor === "middle" ? x - w / 2 : style.anchor === "end" ? x - w : x;
-    out.push({ text: node.text ?? "", left, right: left + w, y: Number(a.y) });
-  }
-  for (const c of node.children) textExtents(c, style, out);
-  return out;
-}
 
 function find(node: SceneNode, pred: (n: SceneNode) => boolean, out: SceneNode[] = []): SceneNode[] {
   if (pred(node)) out.push(node);

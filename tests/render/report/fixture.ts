@@ -6,7 +6,9 @@
  */
 import { DEFAULT_SEAM_SHAPE } from "../../../geometry/seamCurve.js";
 import type { Vec3 } from "../../../geometry/vec.js";
+import { measureText, type FontWeight } from "../../../src/render/fonts.js";
 import type { ReportModel, ReportPitcher, ReportPitchType, ReportThrow } from "../../../src/render/report/model.js";
+import type { SceneNode } from "../../../src/render/scene.js";
 
 export const NAMES = {
   latin: "Zoë Ångström",
@@ -53,4 +55,33 @@ export function pitcher(name: string, types: readonly string[], hand = "right"):
 
 export function reportOf(pitchers: readonly ReportPitcher[]): ReportModel {
   return { basis: "trade", windowFt: 50, model: { name: "default", hash: "6c7f8250" }, gapFlagMinutes: 20, seamShape: DEFAULT_SEAM_SHAPE, pitchers };
+}
+
+/** A text node's words and its left and right ends (anchor applied, widths from the face) and baseline. */
+export interface TextExtent {
+  readonly text: string;
+  readonly left: number;
+  readonly right: number;
+  readonly y: number;
+}
+
+/**
+ * Every text node under `node` with its extent, in the drawing's units; nested
+ * drawings (`svg` nodes: the charts and balls on a page) are left out when `nested` is false.
+ */
+export function textExtents(node: SceneNode, nested = true, inherited = { size: 16, weight: "normal" as FontWeight, anchor: "start" }, out: TextExtent[] = []): TextExtent[] {
+  const a = node.attrs;
+  const style = {
+    size: a["font-size"] !== undefined ? Number(a["font-size"]) : inherited.size,
+    weight: (a["font-weight"] !== undefined ? String(a["font-weight"]) : inherited.weight) as FontWeight,
+    anchor: a["text-anchor"] !== undefined ? String(a["text-anchor"]) : inherited.anchor,
+  };
+  if (node.tag === "text") {
+    const w = measureText(node.text ?? "", style.size, style.weight);
+    const x = Number(a.x);
+    const left = style.anchor === "middle" ? x - w / 2 : style.anchor === "end" ? x - w : x;
+    out.push({ text: node.text ?? "", left, right: left + w, y: Number(a.y) });
+  }
+  for (const ch of node.children) if (nested || ch.tag !== "svg") textExtents(ch, nested, style, out);
+  return out;
 }

@@ -9,35 +9,17 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { measureText, MISSING_GLYPH, type FontWeight } from "../../../src/render/fonts.js";
+import { MISSING_GLYPH } from "../../../src/render/fonts.js";
 import { PT_PER_IN } from "../../../src/render/paper/textLayout.js";
 import { bullpenPages, renderBullpenPdf } from "../../../src/render/report/pdf.js";
-import type { SceneNode } from "../../../src/render/scene.js";
 import { wordBoxes } from "../../support/legibility.js";
 import { pdfRawText, visualWordOrder } from "../../support/bidi.js";
 import { itWithPoppler, pdfPages } from "../../support/poppler.js";
-import { NAMES, pitcher, reportOf } from "./fixture.js";
+import { NAMES, pitcher, reportOf, textExtents } from "./fixture.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-report-"));
 const TYPES = ["sinker", "four-seam", "changeup", "slider", "curveball", "sweeper", "splitter"];
 
-/** Text nodes of the page itself (not of the charts and balls nested in it), with their left and right ends, points. */
-function pageTexts(node: SceneNode, out: { text: string; left: number; right: number; y: number }[] = [], inherited = { size: 16, weight: "normal" as FontWeight, anchor: "start" }) {
-  const a = node.attrs;
-  const style = {
-    size: a["font-size"] !== undefined ? Number(a["font-size"]) : inherited.size,
-    weight: (a["font-weight"] !== undefined ? String(a["font-weight"]) : inherited.weight) as FontWeight,
-    anchor: a["text-anchor"] !== undefined ? String(a["text-anchor"]) : inherited.anchor,
-  };
-  if (node.tag === "text") {
-    const w = measureText(node.text ?? "", style.size, style.weight);
-    const x = Number(a.x);
-    const left = style.anchor === "middle" ? x - w / 2 : style.anchor === "end" ? x - w : x;
-    out.push({ text: node.text ?? "", left, right: left + w, y: Number(a.y) });
-  }
-  for (const c of node.children) if (!(c.tag === "svg")) pageTexts(c, out, style);
-  return out;
-}
 
 describe("bullpen report pages", () => {
   it("are a cover, then per pitcher a charts page and ceil(types / 3) table pages [README: the bullpen report]", () => {
@@ -62,9 +44,9 @@ describe("bullpen report pages", () => {
     // the cover runs on to more pages, and each pitcher keeps its two
     expect(pages.length).toBeGreaterThan(1 + 2 * 40);
     const covers = pages.length - 2 * 40;
-    for (let i = 0; i < covers; i++) expect(pageTexts(pages[i].scene).some((t) => t.text.startsWith("Caution: pitching can injure"))).toBe(true);
+    for (let i = 0; i < covers; i++) expect(textExtents(pages[i].scene, false).some((t) => t.text.startsWith("Caution: pitching can injure"))).toBe(true);
     for (const p of pages) {
-      for (const t of pageTexts(p.scene)) {
+      for (const t of textExtents(p.scene, false)) {
         expect(t.left, t.text).toBeGreaterThanOrEqual(0.5 * PT_PER_IN - 1e-6);
         expect(t.right, t.text).toBeLessThanOrEqual(10.5 * PT_PER_IN + 1e-6);
         expect(t.y, t.text).toBeLessThanOrEqual(8 * PT_PER_IN + 1e-6);
