@@ -4,6 +4,7 @@ import yargs from "yargs";
 import { hideBin } from "yargs/helpers";
 import { quote } from "../io/quote.js";
 import { errnoWords } from "../io/writeErrors.js";
+import { takeNotices } from "../render/notices.js";
 import { TOOL_VERSION } from "../version.js";
 import { exitWithError, InputError } from "./errors.js";
 import { registerLandmarks } from "./landmarks.js";
@@ -45,6 +46,7 @@ export async function main(args: string[]): Promise<void> {
   cli = registerLandmarks(cli);
   cli = registerCalibrate(cli);
   await cli.parseAsync();
+  for (const notice of takeNotices()) process.stderr.write(`seam-atlas: ${notice}\n`);
 }
 
 /**

@@ -30,6 +30,7 @@ import { dirname, join } from "node:path";
 import { inflateSync } from "node:zlib";
 import * as fontkit from "fontkit";
 import { BoundedCache } from "../../geometry/cache.js";
+import { addNotice } from "./notices.js";
 import { typesetter, type FontWeight, type TextRun as TypesetRun, type TypesetFace } from "./typeset.js";
 
 export { MISSING_GLYPH, type FontWeight } from "./typeset.js";
@@ -120,20 +121,7 @@ const faces = new BoundedCache<string, FontFace>("Noto Sans subset faces", 2 * F
 export function fontFace(subset: FontSubset, weight: FontWeight): FontFace {
   const w = weight === "bold" ? 700 : 400;
   const key = `NotoSans-${subset}-${w}`;
-  return faces.get(key, () => {
-    const sfnt = woffToSfnt(woffFile(subset, weight));
-    const font = fontkit.create(sfnt);
-    return {
-      key,
-      subset,
-      weight,
-      sfnt,
-      font,
-      holds: (cp: number) => font.hasGlyphForCodePoint(cp),
-      // the font's own layout: advances, kerning and ligatures, as pdfkit places the glyphs
-      wordWidthEm: (word: string) => font.layout(word).advanceWidth / font.unitsPerEm,
-    };
-  });
+  return faces.get(key, () => parsedFace(key, subset, weight, woffFile(subset, weight)));
 }
 
 /** Every subset of one weight (for a rasteriser that picks glyphs itself). */
@@ -152,6 +140,7 @@ const CJK_VERSION = "5.3.0";
 
 const fallbackFaces = new BoundedCache<string, FontFace>("fallback faces", 256);
 
+/** A WOFF file unpacked and parsed into a face; `covers` narrows the characters it is used for. */
 function parsedFace(key: string, subset: FontSubset | FallbackSubset, weight: FontWeight, woff: Buffer, covers: (cp: number) => boolean = () => true): FontFace {
   const sfnt = woffToSfnt(woff);
   const font = fontkit.create(sfnt);
@@ -162,6 +151,7 @@ function parsedFace(key: string, subset: FontSubset | FallbackSubset, weight: Fo
     sfnt,
     font,
     holds: (cp: number) => covers(cp) && font.hasGlyphForCodePoint(cp),
+    // the font's own layout: advances, kerning and ligatures, as pdfkit places the glyphs
     wordWidthEm: (word: string) => font.layout(word).advanceWidth / font.unitsPerEm,
   };
 }
@@ -244,16 +234,14 @@ function cjkFileFor(ranges: readonly CjkRange[], cp: number): string | null {
 const HANGUL = /\p{Script=Hangul}/u;
 // what only a CJK face would print: the notice is for these
 const HAN_KANA = /[\p{Script=Han}\p{Script=Hiragana}\p{Script=Katakana}\p{Script=Bopomofo}]/u;
-let cjkNoticeGiven = false;
 
 /** The Noto Sans SC file that holds `cp` by the package's CSS, parsed (cached); null when none or not installed. */
 export function cjkFace(cp: number, weight: FontWeight): FontFace | null {
   if (HANGUL.test(String.fromCodePoint(cp))) return null;
   const ranges = cjkUnicodeRanges(weight);
   if (ranges === null) {
-    if (!cjkNoticeGiven && HAN_KANA.test(String.fromCodePoint(cp))) {
-      cjkNoticeGiven = true;
-      process.stderr.write(`seam-atlas: Chinese and Japanese characters print as \ufffd; to print them, install the font package: npm install ${FALLBACK_PACKAGES.cjk}@${CJK_VERSION}\n`);
+    if (HAN_KANA.test(String.fromCodePoint(cp))) {
+      addNotice(`Chinese and Japanese characters print as \ufffd; to print them, install the font package: npm install ${FALLBACK_PACKAGES.cjk}@${CJK_VERSION}`);
     }
     return null;
   }
