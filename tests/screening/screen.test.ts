@@ -112,6 +112,18 @@ describe("screen (the one seam-force model, seam movement in the trade's reading
     expect(wide.mean).toBeLessThan(at);
   });
 
+  it("reads robustness from the sweep's map to within 0.15 in of turn averages at every scattered axis (mean and p10, each listed grip and hold) [closed form: the same quadrature on the exact linear score]", () => {
+    const exact = (x: number, y: number, z: number) => {
+      const [arm, up] = linear(p, [x, y, z]);
+      return scoreOf(p.want, arm, up);
+    };
+    for (const c of [...r.candidates, ...r.references]) {
+      const direct = robustness(c.axis, r.settings.spreadRad, exact);
+      expect(Math.abs(c.robustness.mean - direct.mean) / M_PER_IN).toBeLessThan(0.15);
+      expect(Math.abs(c.robustness.p10 - direct.p10) / M_PER_IN).toBeLessThan(0.15);
+    }
+  });
+
   it("ranks candidates by the blend (score + p10) / 2 by default", () => {
     for (let i = 1; i < r.candidates.length; i++) expect(r.candidates[i - 1].rankScore).toBeGreaterThanOrEqual(r.candidates[i].rankScore);
     for (const c of r.candidates) expect(Math.abs(c.rankScore - 0.5 * (c.score + c.robustness.p10))).toBeLessThan(1e-15);
