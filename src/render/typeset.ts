@@ -102,6 +102,17 @@ export function typesetter<F extends TypesetFace>(set: FaceSet<F>) {
     const first = set.face(0, weight);
     // most text is plain ASCII, which the first subset holds whole: one run, no segmenting
     if (/^[\x20-\x7e]*$/.test(text)) return text ? [{ face: first, text }] : [];
+    // Latin-1 letters and general punctuation (no combining marks, controls or right-to-left
+    // letters: every character its own grapheme, already NFC) that the first subset holds
+    // whole: the same single run the segmenting below would give
+    if (/^[\x20-\x7e\u00a0-\u00ff\u2010-\u2027\u2030-\u205e]*$/.test(text)) {
+      let held = true;
+      for (let i = 0; i < text.length && held; i++) {
+        const cp = text.charCodeAt(i);
+        if (cp > 0x7e) held = first.holds(cp);
+      }
+      if (held) return text ? [{ face: first, text }] : [];
+    }
     const runs: { face: F; text: string }[] = [];
     for (const { segment } of graphemes.segment(text.normalize("NFC").replace(CONTROL, ""))) {
       let face: F;

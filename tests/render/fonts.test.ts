@@ -33,6 +33,22 @@ describe("the embedded face (Noto Sans from @fontsource/noto-sans)", () => {
     expect(runs.map((r) => r.text).join("")).toBe("Zoë Łukasz Ярослава Σοφία Nguyễn".normalize("NFC"));
   });
 
+  it("sets a label of Latin-1 letters and punctuation (12° – arm side · 5×, “grip”, ½ …) as one run in the first face, as segmenting it character by character does, and a character that face lacks (U+2030, U+2049) still by segmenting", () => {
+    const label = "Zoë: 12° – arm side · 5× “grip” ½ … ±0.3′";
+    const runs = textRuns(label);
+    expect(runs).toHaveLength(1);
+    expect(runs[0].face.subset).toBe("latin");
+    expect(runs[0].text).toBe(label);
+    // the segmenting path, character by character, picks the same face for each
+    // (a Cyrillic letter first sends it down the segmenting path)
+    for (const ch of label) if (ch !== " ") expect(textRuns(`\u0416${ch}`).at(-1)!.face.subset).toBe("latin");
+    const lacking = "a \u2049 b \u2030";
+    for (const cp of [0x2030, 0x2049]) expect(fontFace("latin", "normal").font.hasGlyphForCodePoint(cp)).toBe(false);
+    const runs2 = textRuns(lacking);
+    expect(runs2.length).toBeGreaterThan(1);
+    for (const r of runs2) for (const ch of r.text) if (ch !== " ") expect(r.face.holds(ch.codePointAt(0)!)).toBe(true);
+  });
+
   it("prints one U+FFFD for each character no shipped face holds (Hangul, an emoji with skin tone, a family emoji), never stray glyphs", () => {
     expect(printable("김민준")).toBe(MISSING_GLYPH.repeat(3));
     expect(printable("A👍🏽B")).toBe(`A${MISSING_GLYPH}B`);

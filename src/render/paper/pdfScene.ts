@@ -141,6 +141,117 @@ function pointsOf(v: unknown): number[] {
   return String(v ?? "").trim().split(/[\s,]+/).filter(Boolean).map(Number);
 }
 
+/** pdfkit's number rounding (PDFObject.number), so the operators read as its own path methods would write them. */
+const pdfNumber = (n: number): number => Math.round(n * 1e6) / 1e6;
+
+/** Arguments per command letter (char code), -1 for a letter this fast path does not take. */
+const ARITY = new Int8Array(128).fill(-1);
+for (const [letters, k] of [["Mm", 2], ["Ll", 2], ["Hh", 1], ["Vv", 1], ["Cc", 6], ["Zz", 0]] as const) for (const ch of letters) ARITY[ch.charCodeAt(0)] = k;
+
+/**
+ * PDF path-construction operators for SVG path data made of M, L, H, V, C, Z and their
+ * relative forms (what our drawings write), built as pdfkit's own path parser would
+ * build them (the same points, summed in the same order, rounded alike), in one string
+ * and one pass: the atlas's sphere maps hold thousands of subpaths, which pdfkit's
+ * parser reads a character at a time. Undefined for any other command (arcs,
+ * quadratics) or malformed data: pdfkit's parser then takes the path.
+ */
+export function pathOperators(d: string): string | undefined {
+  const n = d.length;
+  let out = "";
+  let i = 0;
+  let cmd = 0; // char code of the current command
+  let want = -1; // its arity
+  let cx = 0, cy = 0, sx = 0, sy = 0;
+  let a0 = 0, a1 = 0, a2 = 0, a3 = 0, a4 = 0;
+  let have = 0;
+  while (i < n) {
+    const ch = d.charCodeAt(i);
+    if (ch === 32 || ch === 44 || ch === 10 || ch === 9 || ch === 13) {
+      i++;
+      continue;
+    }
+    if (ch >= 65) {
+      if (ch >= 128 || ARITY[ch] < 0 || have !== 0) return undefined;
+      cmd = ch;
+      want = ARITY[ch];
+      i++;
+      if (want === 0) {
+        out += out ? "\nh" : "h";
+        cx = sx;
+        cy = sy;
+      }
+      continue;
+    }
+    // a number: sign, digits with at most one point, exponent
+    let j = i;
+    if (ch === 45 || ch === 43) j++;
+    let digits = false, point = false;
+    for (; j < n; j++) {
+      const c = d.charCodeAt(j);
+      if (c >= 48 && c <= 57) digits = true;
+      else if (c === 46 && !point) point = true;
+      else break;
+    }
+    if (!digits) return undefined;
+    if (j < n && (d.charCodeAt(j) | 32) === 101) {
+      let k = j + 1;
+      if (k < n && (d.charCodeAt(k) === 45 || d.charCodeAt(k) === 43)) k++;
+      const k0 = k;
+      while (k < n && d.charCodeAt(k) >= 48 && d.charCodeAt(k) <= 57) k++;
+      if (k === k0) return undefined;
+      j = k;
+    }
+    if (want <= 0) return undefined;
+    const v = Number(d.slice(i, j));
+    i = j;
+    if (have < want - 1) {
+      if (have === 0) a0 = v;
+      else if (have === 1) a1 = v;
+      else if (have === 2) a2 = v;
+      else if (have === 3) a3 = v;
+      else a4 = v;
+      have++;
+      continue;
+    }
+    have = 0;
+    const rel = cmd >= 97;
+    const ox = rel ? cx : 0, oy = rel ? cy : 0;
+    const sep = out ? "\n" : "";
+    switch (cmd | 32) {
+      case 109: // m: further pairs are linetos (SVG)
+        cx = ox + a0;
+        cy = oy + v;
+        sx = cx;
+        sy = cy;
+        out += `${sep}${pdfNumber(cx)} ${pdfNumber(cy)} m`;
+        cmd = rel ? 108 : 76;
+        break;
+      case 108: // l
+        cx = ox + a0;
+        cy = oy + v;
+        out += `${sep}${pdfNumber(cx)} ${pdfNumber(cy)} l`;
+        break;
+      case 104: // h
+        cx = ox + v;
+        out += `${sep}${pdfNumber(cx)} ${pdfNumber(cy)} l`;
+        break;
+      case 118: // v
+        cy = oy + v;
+        out += `${sep}${pdfNumber(cx)} ${pdfNumber(cy)} l`;
+        break;
+      default: {
+        // c
+        const x1 = ox + a0, y1 = oy + a1, x2 = ox + a2, y2 = oy + a3;
+        cx = ox + a4;
+        cy = oy + v;
+        out += `${sep}${pdfNumber(x1)} ${pdfNumber(y1)} ${pdfNumber(x2)} ${pdfNumber(y2)} ${pdfNumber(cx)} ${pdfNumber(cy)} c`;
+      }
+    }
+  }
+  return have !== 0 ? undefined : out;
+}
+
 function drawText(doc: Doc, node: SceneNode, s: Style): void {
   const text = node.text ?? "";
   if (!text) return;
@@ -158,9 +269,34 @@ function drawText(doc: Doc, node: SceneNode, s: Style): void {
   for (const r of runs) {
     useFace(doc, r.face);
     doc.fontSize(s.fontSize);
-    doc.text(r.text, x, y, { lineBreak: false, baseline: "alphabetic", fill: hasFill, stroke: hasStroke } as PDFKit.Mixins.TextOptions);
-    x += runsWidth([r], s.fontSize);
+    const w = runsWidth([r], s.fontSize);
+    // textWidth: the run's width, known already (pdfkit would lay the run out again to learn it)
+    doc.text(r.text, x, y, { lineBreak: false, baseline: "alphabetic", fill: hasFill, stroke: hasStroke, textWidth: w } as PDFKit.Mixins.TextOptions);
+    x += w;
   }
+}
+
+const forms = new WeakMap<Doc, number>();
+
+/**
+ * Places deflated PDF content (SceneNode.pdfContent) on the page as a form XObject
+ * (PDF 32000-1:2008, 8.10) in the current user space, bounded by the drawing's box.
+ * The bytes go into the file as they are (the stream's filter is given, so pdfkit does
+ * not compress them again).
+ */
+function placeForm(doc: Doc, deflated: Uint8Array, box: { width: number; height: number }): void {
+  const n = (forms.get(doc) ?? 0) + 1;
+  forms.set(doc, n);
+  const name = `Fm${n}`;
+  const d = doc as unknown as {
+    ref(data: object): { end(chunk: Uint8Array): void };
+    page: { xobjects: Record<string, unknown> };
+    addContent(s: string): void;
+  };
+  const ref = d.ref({ Type: "XObject", Subtype: "Form", BBox: [0, 0, box.width, box.height], Filter: "FlateDecode" });
+  ref.end(deflated);
+  d.page.xobjects[name] = ref;
+  d.addContent(`/${name} Do`);
 }
 
 function paintNode(doc: Doc, root: SceneNode, node: SceneNode, parent: Style): void {
@@ -186,6 +322,10 @@ function paintNode(doc: Doc, root: SceneNode, node: SceneNode, parent: Style): v
     doc.restore();
     return;
   }
+  if (node.pdfContent) {
+    placeForm(doc, node.pdfContent, sceneSize(root));
+    return;
+  }
   if (node.tag === "g" || node.tag === "svg") {
     const tr = a.transform !== undefined ? /translate\(\s*([-\d.e]+)[\s,]+([-\d.e]+)\s*\)/.exec(String(a.transform)) : null;
     if (tr) {
@@ -203,7 +343,9 @@ function paintNode(doc: Doc, root: SceneNode, node: SceneNode, parent: Style): v
     case "path": {
       const d = String(a.d ?? "");
       if (d) {
-        doc.path(d);
+        const ops = pathOperators(d);
+        if (ops === undefined) doc.path(d);
+        else (doc as unknown as { addContent(s: string): void }).addContent(ops);
         paint(doc, root, s, () => [0, 0, 1, 1]);
       }
       break;
