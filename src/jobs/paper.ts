@@ -7,7 +7,7 @@
 import { join } from "node:path";
 import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
-import { startAtlas } from "../render/paper/atlas.js";
+import { ATLAS_MAP_CELLS, startAtlas } from "../render/paper/atlas.js";
 import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
@@ -197,7 +197,7 @@ export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number
   // the first screens run, then each pitch's pages as it comes back, the cover last
   let atlas: ReturnType<typeof startAtlas> | undefined;
   const begin = () => (atlas ??= startAtlas(base, job.screen.pitches.length));
-  const pitches = await screenAllPooled(job.screen, job.request, job.top, job.threads, { meanwhile: begin, onPitch: (i, p) => begin().pitch(i, p), tick });
+  const pitches = await screenAllPooled(job.screen, job.request, job.top, job.threads, { meanwhile: begin, onPitch: (i, p) => begin().pitch(i, p), tick, mapCells: ATLAS_MAP_CELLS });
   const pdf = await begin().finish(pitches);
   return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: pitches.length };
 }

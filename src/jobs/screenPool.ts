@@ -5,7 +5,8 @@
  * worker rebuilds the same job from the request as typed (the same files, model,
  * settings and cache) and screens the pitches it is given with the same code, so the
  * numbers are this thread's to the last bit. Meanwhile this thread is free to draw each
- * pitch as its screen comes back. With 0 threads, or no worker file (the TypeScript
+ * pitch as its screen comes back (and, for the atlas, the worker also draws each pitch's
+ * sphere-map cells as PDF content, the heaviest part of its pages). With 0 threads, or no worker file (the TypeScript
  * sources under a test runner), every pitch is screened here, in order.
  */
 import { equalAreaGrid, type SphereGrid } from "../../geometry/sphereGrid.js";
@@ -13,6 +14,7 @@ import { M_PER_IN } from "../../geometry/units.js";
 import type { ScreenReport } from "../screening/report.js";
 import { coreThreads, openPool } from "./pool.js";
 import type { Request } from "./request/values.js";
+import { sphereMapCellsPdf, type MapCellsOptions } from "../render/sphereMapDrawing.js";
 import { parseScreen, screenOne, type ScreenJob } from "./screen.js";
 import type { TopChoice } from "./screenJob.js";
 
@@ -22,6 +24,8 @@ export interface ScreenTask {
   readonly request: Request;
   readonly top: TopChoice;
   readonly indices: readonly number[];
+  /** Draw each pitch's sphere-map cells as PDF content too (the atlas's map). */
+  readonly mapCells?: MapCellsOptions;
 }
 
 /** What comes back per pitch. */
@@ -30,6 +34,7 @@ export interface PoolResult {
   readonly report: ScreenReport;
   readonly mapValuesIn: Float64Array;
   readonly gridSpacingRad: number;
+  readonly mapCellsPdf?: Uint8Array;
 }
 
 export interface PooledPitch {
@@ -37,6 +42,8 @@ export interface PooledPitch {
   /** Seam movement toward the wanted direction (its size for "any") per grid cell, inches. */
   readonly mapValuesIn: Float64Array;
   readonly grid: SphereGrid;
+  /** The sphere map's cells as PDF content (render/sphereMapDrawing.ts sphereMapCellsPdf), when asked for. */
+  readonly mapCellsPdf?: Uint8Array;
 }
 
 /** Below this many pitches, "auto" screens on this thread: a worker's start costs more than it saves. */
@@ -77,6 +84,8 @@ export interface PoolHooks {
   tick?: (stage: string, done: number, total: number) => void;
   /** Called once the workers have their tasks (at once with no pool): this thread's own work meanwhile. */
   meanwhile?: () => void;
+  /** Also draw each pitch's sphere-map cells as PDF content, on the thread that screens it. */
+  mapCells?: MapCellsOptions;
 }
 
 let built: { key: string; job: ScreenJob } | undefined;
@@ -88,7 +97,9 @@ export function screenPitches(task: ScreenTask): PoolResult[] {
   const job = built.job;
   return task.indices.map((i) => {
     const s = screenOne(job, job.pitches[i]);
-    return { index: i, report: s.report, mapValuesIn: s.result.scores.map((x) => x / M_PER_IN), gridSpacingRad: s.result.settings.gridSpacingRad };
+    const mapValuesIn = s.result.scores.map((x) => x / M_PER_IN);
+    const mapCellsPdf = task.mapCells ? sphereMapCellsPdf(mapValuesIn, s.result.grid, task.mapCells) : undefined;
+    return { index: i, report: s.report, mapValuesIn, gridSpacingRad: s.result.settings.gridSpacingRad, ...(mapCellsPdf ? { mapCellsPdf } : {}) };
   });
 }
 
@@ -97,7 +108,7 @@ export function screenPitches(task: ScreenTask): PoolResult[] {
  * `hooks` told of each pitch and the progress. Resolves with all of them in order.
  */
 export async function screenAllPooled(job: ScreenJob, request: Request, top: TopChoice, threads: number | "auto", hooks: PoolHooks = {}): Promise<PooledPitch[]> {
-  const { onPitch = () => {}, tick = () => {}, meanwhile = () => {} } = hooks;
+  const { onPitch = () => {}, tick = () => {}, meanwhile = () => {}, mapCells } = hooks;
   const n = job.pitches.length;
   const groups = gyroGroups(job.pitches.map((p) => p.pitch.gyroRad));
   const count = threads === "auto" ? autoScreenThreads(n, groups.length) : Math.min(threads, groups.length);
@@ -113,7 +124,9 @@ export async function screenAllPooled(job: ScreenJob, request: Request, top: Top
     meanwhile();
     for (let i = 0; i < n; i++) {
       const s = screenOne(job, job.pitches[i]);
-      take(i, { report: s.report, mapValuesIn: s.result.scores.map((x) => x / M_PER_IN), grid: s.result.grid });
+      const mapValuesIn = s.result.scores.map((x) => x / M_PER_IN);
+      const mapCellsPdf = mapCells ? sphereMapCellsPdf(mapValuesIn, s.result.grid, mapCells) : undefined;
+      take(i, { report: s.report, mapValuesIn, grid: s.result.grid, ...(mapCellsPdf ? { mapCellsPdf } : {}) });
     }
     return out;
   }
@@ -125,9 +138,9 @@ export async function screenAllPooled(job: ScreenJob, request: Request, top: Top
   const plain = plainRequest(request);
   try {
     const runs = groups.map(async (indices) => {
-      const task: ScreenTask = { kind: "screen", request: plain, top, indices };
+      const task: ScreenTask = { kind: "screen", request: plain, top, indices, ...(mapCells ? { mapCells } : {}) };
       const results = (await pool.run(task)) as PoolResult[];
-      for (const r of results) take(r.index, { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad) });
+      for (const r of results) take(r.index, { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad), ...(r.mapCellsPdf ? { mapCellsPdf: r.mapCellsPdf } : {}) });
     });
     meanwhile();
     await Promise.all(runs);

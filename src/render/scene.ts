@@ -34,6 +34,12 @@ export class SceneNode {
   readonly attrs: Attrs = {};
   readonly children: SceneNode[] = [];
   text?: string;
+  /**
+   * This node's drawing already made as PDF content operators, deflated, in the node's
+   * user units (render/sphereMapDrawing.ts sphereMapCellsPdf): the PDF painter places it
+   * as one form in place of the children. Other outputs ignore it.
+   */
+  pdfContent?: Uint8Array;
   /** The root of the tree (for ids and defs). */
   private readonly root: SceneNode;
   private autoIds = 0;

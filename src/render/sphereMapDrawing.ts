@@ -24,6 +24,7 @@ import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "
 import { addText, createScene, serializeScene, type SceneNode } from "./scene.js";
 import { pointsAttribute, polylinePath, relativePolygonPath } from "./svgPath.js";
 import { DEG } from "../../geometry/units.js";
+import { deflateSync } from "node:zlib";
 
 export interface MapMarker {
   /** Spin-axis direction (positive end), ball frame; normalised here. */
@@ -53,6 +54,13 @@ export interface SphereMapOptions {
   readonly digits?: number;
   /** Prefix of the ids in the SVG (default "sa"). */
   readonly idPrefix?: string;
+  /**
+   * The cells already drawn as PDF content (sphereMapCellsPdf with this map's width,
+   * title, levels, range and digits): the drawing then carries them as one node for the
+   * PDF painter instead of a path per colour step. For PDF only; an SVG of such a
+   * drawing has no cells.
+   */
+  readonly cellsPdf?: Uint8Array;
 }
 
 /** Longest stretch of a parallel drawn as one straight segment, radians. */
@@ -82,53 +90,26 @@ export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: 
   const prefix = options.idPrefix ?? "sa";
   const [lo, hi] = valueRange(values, options.range);
 
-  const margin = 16;
-  const scale = (widthPx - 2 * margin) / (2 * HAMMER_HALF_WIDTH); // px per unit-sphere length
-  const titlePx = options.title ? 38 : 12;
-  const mapHeightPx = 2 * HAMMER_HALF_HEIGHT * scale;
-  const legendPx = 82;
-  const cx = widthPx / 2;
-  const cy = titlePx + mapHeightPx / 2;
-  const heightPx = titlePx + mapHeightPx + legendPx;
-  const xy: [number, number] = [0, 0];
-  const toPx = (lon: number, lat: number, out: number[]) => {
-    hammerProject(lon, lat, xy);
-    out.push(cx + scale * xy[0], cy - scale * xy[1]);
-  };
+  const { scale, titlePx, mapHeightPx, cx, cy, heightPx, toPx } = mapFrame(widthPx, options.title !== undefined && options.title !== "");
 
   const draw = createScene(widthPx, heightPx).attr({ "font-family": "DejaVu Sans, Verdana, sans-serif" });
   if (options.title) draw.element("title").words(options.title);
 
-  // cells: runs of equal colour step within a ring, grouped by step
-  const byLevel = new Map<number, string[]>();
-  const levelOf = (v: number) => (Number.isFinite(v) ? Math.min(levels - 1, Math.max(0, Math.floor(((v - lo) / (hi - lo)) * levels))) : -1);
-  for (let i = 0; i < grid.ringCount.length; i++) {
-    const n = grid.ringCount[i];
-    const lat0 = Math.asin(grid.ringEdges[i]);
-    const lat1 = Math.asin(grid.ringEdges[i + 1]);
-    let j0 = 0;
-    for (let j = 1; j <= n; j++) {
-      const level = levelOf(values[grid.ringStart[i] + j0]);
-      // runs also end at longitude 180 deg (slot n/2), where the map is cut
-      if (j < n && j !== n / 2 && levelOf(values[grid.ringStart[i] + j]) === level) continue;
-      const shift = j0 >= n / 2 ? 2 * Math.PI : 0;
-      const lonA = (2 * Math.PI * j0) / n - shift;
-      const lonB = (2 * Math.PI * j) / n - shift;
-      const steps = Math.max(1, Math.ceil((lonB - lonA) / MAX_EDGE_STEP_RAD));
-      const ring: number[] = [];
-      for (let k = 0; k <= steps; k++) toPx(lonA + ((lonB - lonA) * k) / steps, lat0, ring);
-      for (let k = steps; k >= 0; k--) toPx(lonA + ((lonB - lonA) * k) / steps, lat1, ring);
+  // cells: runs of equal colour step within a ring, one path per step
+  const cells = draw.group().attr({ class: "sa-cells" });
+  if (options.cellsPdf) cells.pdfContent = options.cellsPdf;
+  else {
+    const byLevel = new Map<number, string[]>();
+    forEachCellRun(values, grid, lo, hi, levels, toPx, (level, ring) => {
       const list = byLevel.get(level) ?? [];
       list.push(relativePolygonPath(ring, digits));
       byLevel.set(level, list);
-      j0 = j;
+    });
+    for (const level of [...byLevel.keys()].sort((a, b) => a - b)) {
+      const colour = cellColour(level, levels);
+      // a hairline stroke in the fill colour hides the anti-aliasing gaps between cells
+      cells.path().attr({ d: byLevel.get(level)!.join(""), fill: colour, stroke: colour, "stroke-width": CELL_STROKE_PX, "stroke-linejoin": "round" });
     }
-  }
-  const cells = draw.group().attr({ class: "sa-cells" });
-  for (const level of [...byLevel.keys()].sort((a, b) => a - b)) {
-    const colour = level < 0 ? NO_VALUE_COLOUR : rampColor((level + 0.5) / levels);
-    // a hairline stroke in the fill colour hides the anti-aliasing gaps between cells
-    cells.path().attr({ d: byLevel.get(level)!.join(""), fill: colour, stroke: colour, "stroke-width": 0.6, "stroke-linejoin": "round" });
   }
 
   // graticule every 30 deg; the map's outline is the meridian at +-180 deg
@@ -183,6 +164,109 @@ export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: 
   if (options.title) addText(draw, widthPx / 2, 21, options.title, { sizePx: 15, fill: "#1f1f1f", anchor: "middle", weight: "bold", className: "sa-title" });
   drawLegend(draw, { prefix, widthPx, top: titlePx + mapHeightPx + 8, lo, hi, valueDigits, label: options.valueLabel ?? "value" });
   return draw;
+}
+
+/** The stroke in the fill colour around every cell run, px. */
+const CELL_STROKE_PX = 0.6;
+
+/** A colour step's colour (-1: no value). */
+function cellColour(level: number, levels: number): string {
+  return level < 0 ? NO_VALUE_COLOUR : rampColor((level + 0.5) / levels);
+}
+
+/** Where the map sits in its drawing, px: one home for the drawing and its cells as PDF. */
+function mapFrame(widthPx: number, titled: boolean) {
+  const margin = 16;
+  const scale = (widthPx - 2 * margin) / (2 * HAMMER_HALF_WIDTH); // px per unit-sphere length
+  const titlePx = titled ? 38 : 12;
+  const mapHeightPx = 2 * HAMMER_HALF_HEIGHT * scale;
+  const legendPx = 82;
+  const cx = widthPx / 2;
+  const cy = titlePx + mapHeightPx / 2;
+  const heightPx = titlePx + mapHeightPx + legendPx;
+  const xy: [number, number] = [0, 0];
+  const toPx = (lon: number, lat: number, out: number[]) => {
+    hammerProject(lon, lat, xy);
+    out.push(cx + scale * xy[0], cy - scale * xy[1]);
+  };
+  return { scale, titlePx, mapHeightPx, cx, cy, heightPx, toPx };
+}
+
+/**
+ * Every run of neighbouring cells of a ring that fall in the same colour step (runs also
+ * end at longitude 180 deg, where the map is cut), as its step (-1: no value) and its
+ * outline in px (flat x, y pairs: the lower parallel west to east, the upper back).
+ */
+function forEachCellRun(
+  values: Float64Array,
+  grid: SphereGrid,
+  lo: number,
+  hi: number,
+  levels: number,
+  toPx: (lon: number, lat: number, out: number[]) => void,
+  visit: (level: number, ring: number[]) => void,
+): void {
+  const levelOf = (v: number) => (Number.isFinite(v) ? Math.min(levels - 1, Math.max(0, Math.floor(((v - lo) / (hi - lo)) * levels))) : -1);
+  for (let i = 0; i < grid.ringCount.length; i++) {
+    const n = grid.ringCount[i];
+    const lat0 = Math.asin(grid.ringEdges[i]);
+    const lat1 = Math.asin(grid.ringEdges[i + 1]);
+    let j0 = 0;
+    for (let j = 1; j <= n; j++) {
+      const level = levelOf(values[grid.ringStart[i] + j0]);
+      if (j < n && j !== n / 2 && levelOf(values[grid.ringStart[i] + j]) === level) continue;
+      const shift = j0 >= n / 2 ? 2 * Math.PI : 0;
+      const lonA = (2 * Math.PI * j0) / n - shift;
+      const lonB = (2 * Math.PI * j) / n - shift;
+      const steps = Math.max(1, Math.ceil((lonB - lonA) / MAX_EDGE_STEP_RAD));
+      const ring: number[] = [];
+      for (let k = 0; k <= steps; k++) toPx(lonA + ((lonB - lonA) * k) / steps, lat0, ring);
+      for (let k = steps; k >= 0; k--) toPx(lonA + ((lonB - lonA) * k) / steps, lat1, ring);
+      visit(level, ring);
+      j0 = j;
+    }
+  }
+}
+
+/** What fixes a map's cells: the drawing's width and title, and the colour scale. */
+export interface MapCellsOptions {
+  readonly widthPx: number;
+  readonly titled: boolean;
+  readonly levels?: number;
+  readonly range?: readonly [number, number];
+  readonly digits?: number;
+}
+
+/**
+ * The map's cells as PDF content operators (the drawing's px, y down, as sphereMapScene
+ * places them), deflated: each colour step filled and stroked in its colour, every
+ * corner at the coordinates the drawing's paths round to. Built apart from the page
+ * (for the atlas, on the worker that screened the pitch) and painted as one form
+ * (render/paper/pdfScene.ts), so the page's own thread neither builds nor compresses
+ * thousands of subpaths.
+ */
+export function sphereMapCellsPdf(values: Float64Array, grid: SphereGrid, options: MapCellsOptions): Uint8Array {
+  if (values.length !== grid.count) throw new RangeError(`${values.length} values for a grid of ${grid.count} cells`);
+  const levels = options.levels ?? 64;
+  const digits = options.digits ?? 1;
+  const [lo, hi] = valueRange(values, options.range);
+  const { toPx } = mapFrame(options.widthPx, options.titled);
+  const k = 10 ** digits;
+  const byLevel = new Map<number, string[]>();
+  forEachCellRun(values, grid, lo, hi, levels, toPx, (level, ring) => {
+    let ops = "";
+    for (let i = 0; i + 1 < ring.length; i += 2) ops += `${Math.round(ring[i] * k) / k} ${Math.round(ring[i + 1] * k) / k} ${i === 0 ? "m" : "l"}\n`;
+    const list = byLevel.get(level) ?? [];
+    list.push(`${ops}h\n`);
+    byLevel.set(level, list);
+  });
+  let out = "";
+  for (const level of [...byLevel.keys()].sort((a, b) => a - b)) {
+    const hex = cellColour(level, levels);
+    const rgb = [1, 3, 5].map((i) => Math.round((parseInt(hex.slice(i, i + 2), 16) / 255) * 1e4) / 1e4).join(" ");
+    out += `q\n${rgb} rg\n${rgb} RG\n${CELL_STROKE_PX} w\n1 j\n${byLevel.get(level)!.join("")}B\nQ\n`;
+  }
+  return deflateSync(Buffer.from(out, "latin1"));
 }
 
 function valueRange(values: Float64Array, range?: readonly [number, number]): [number, number] {

@@ -17,7 +17,7 @@ import type { SphereGrid } from "../../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { TOOL_VERSION } from "../../version.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
-import { sphereMapScene } from "../sphereMapDrawing.js";
+import { sphereMapScene, type MapCellsOptions } from "../sphereMapDrawing.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "./card.js";
 import { openPdf, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
@@ -31,7 +31,12 @@ export interface AtlasPitch {
   /** Seam movement toward the wanted direction (its size for "any") per grid cell, inches. */
   readonly mapValuesIn: Float64Array;
   readonly grid: SphereGrid;
+  /** The map's cells already made as PDF content (sphereMapCellsPdf with ATLAS_MAP_CELLS), or undefined to draw them here. */
+  readonly mapCellsPdf?: Uint8Array;
 }
+
+/** The atlas's sphere map: its width and title fix where the cells fall (the worker that screens a pitch draws them). */
+export const ATLAS_MAP_CELLS: MapCellsOptions = { widthPx: 720, titled: true };
 
 export interface AtlasInput {
   readonly layout: Layout;
@@ -144,7 +149,8 @@ function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: numbe
   setText(s, pitchSummary(r), pt(m, m + 0.42, w, 0.4), { sizePt: f.sizePt - 1, fill: "#333333" });
   const toward = pp.want === "any" ? "seam movement (its size) at every place the spin axis could go" : `seam movement toward the ${WANT_WORDS[pp.want].replace("-side", " side").replace("upward", "top").replace("downward", "ground")} at every place the spin axis could go`;
   const map = sphereMapScene(p.mapValuesIn, p.grid, {
-    widthPx: 720,
+    widthPx: ATLAS_MAP_CELLS.widthPx,
+    cellsPdf: p.mapCellsPdf,
     title: toward,
     valueLabel: pp.want === "any" ? "seam movement at the plate, inches" : `seam movement ${pp.want === "arm" ? "toward the arm side" : pp.want === "glove" ? "toward the glove side" : `${pp.want}ward`}, inches at the plate (negative: the other way)`,
     seamShape: input.seamShape,
