@@ -18,7 +18,7 @@ import { seamFor } from "../sampling/measure.js";
 import { computeSphereMap } from "../sampling/sphereMap.js";
 import { projectRoot, TOOL_VERSION } from "../version.js";
 import { demoStaffPath, pitchesFromFile } from "../jobs/request/pitch.js";
-import { parseAtlas, runAtlas } from "../jobs/paper.js";
+import { parseAtlas, runAtlas } from "../jobs/atlas.js";
 import { parseScreen, screenOne } from "../jobs/screen.js";
 import { Explainer } from "../physics/explain.js";
 import { simulateFlight } from "../physics/flight.js";

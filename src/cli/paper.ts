@@ -15,7 +15,7 @@ async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback
 async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat, more: WantedOutput[]): Promise<{ main: PlannedOutput; more: (PlannedOutput | undefined)[] }>;
 async function planPaper(argv: Record<string, unknown>, layout: Layout, fallback: string, format: OutputFormat, more?: WantedOutput[]): Promise<PlannedOutput | { main: PlannedOutput; more: (PlannedOutput | undefined)[] }> {
   const { inputFiles } = await import("../jobs/request/inputs.js");
-  const { layoutPath } = await import("../jobs/paper.js");
+  const { layoutPath } = await import("../jobs/paperRequest.js");
   const given = typeof argv.layout === "string" ? argv.layout : layout.name;
   const inputs: InputRef[] = [...inputFiles(argv), { option: "--layout", path: given.endsWith(".json") ? layoutPath(given) : layoutPath(layout.name) }];
   const planned = planRun([{ option: "--out", path: argv.out ?? join("out", fallback), format }, ...(more ?? [])], inputs);
@@ -70,7 +70,7 @@ export function registerPaper(y: Argv): Argv {
           ),
         ))), "one per core (at most 8) for 3 pitches or more, else none"),
       async (argv) => {
-        const { parseAtlas, runAtlas } = await import("../jobs/paper.js");
+        const { parseAtlas, runAtlas } = await import("../jobs/atlas.js");
         const job = parseAtlas(argv);
         const out = await planPaper(argv, job.layout, "atlas.pdf", "pdf");
         const made = await runAtlas(job, progress());

@@ -4,76 +4,26 @@
  * clinic handout, and the sphere map as a picture. Screening goes through the one
  * shared path (pipeline.ts); the drawing is src/render/paper/.
  */
-import { join } from "node:path";
 import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
-import { ATLAS_MAP_CELLS, startAtlas } from "../render/paper/atlas.js";
 import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
 import { pdfOfPages, type Page } from "../render/paper/document.js";
 import { figureScene, handoutFigures, renderHandoutPdf, type Clinic } from "../render/paper/handout.js";
-import { LayoutError, loadLayout, loadLayoutFile, type Layout } from "../render/paper/layouts.js";
+import type { Layout } from "../render/paper/layouts.js";
 import { nearestReachable, WANT_WORDS } from "../render/paper/words.js";
 import { sceneToPng } from "../render/png.js";
 import { sphereMapScene } from "../render/sphereMapDrawing.js";
 import { fixed } from "../render/numbers.js";
 import type { ScreenReport } from "../screening/report.js";
 import { TOP_RANGE } from "../screening/screen.js";
-import { projectRoot } from "../version.js";
 import { screenAll } from "./pipeline.js";
 import { buildModel, modelChoice } from "./request/model.js";
 import { samplerSettings } from "./request/settings.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { seamFor } from "../sampling/measure.js";
 import { parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
-import { threadsChoice } from "./request/runtime.js";
-import type { TopChoice } from "./screenJob.js";
-import { screenAllPooled } from "./screenPool.js";
-
-export function layoutsDir(): string {
-  return join(projectRoot(), "templates", "layouts");
-}
-
-/** The file a --layout value reads: a name in templates/layouts, or a path to a .json file. */
-export function layoutPath(value: string): string {
-  return value.endsWith(".json") ? value : join(layoutsDir(), `${value}.json`);
-}
-
-/** A layout by name (templates/layouts) or by path (a .json file whose card layout, if any, is named from templates/layouts), of one of the kinds a command takes. */
-export function layoutOf(name: string, kinds: readonly string[]): Layout {
-  let layout: Layout;
-  try {
-    layout = name.endsWith(".json") ? loadLayoutFile(name, layoutsDir()) : loadLayout(layoutsDir(), name);
-  } catch (err) {
-    if (err instanceof LayoutError) throw new InputError(`--layout: ${err.message}`);
-    throw err;
-  }
-  const a = (k: string) => (/^[aeiou]/.test(k) ? `an ${k}` : `a ${k}`);
-  if (!kinds.includes(layout.kind)) throw new InputError(`--layout ${name} is ${a(layout.kind)} layout; this command takes ${a(kinds.join(" or "))} layout`);
-  return layout;
-}
-
-// C0 controls (NUL among them) and DEL: text that would print as nothing or as garbage
-// eslint-disable-next-line no-control-regex
-const CONTROL = /[\u0000-\u0008\u000b-\u001f\u007f]/;
-
-/** Refuses printed text holding a control character (a NUL byte, an escape), naming it. */
-export function assertPrintable(what: string, text: string | undefined): void {
-  if (text === undefined) return;
-  const m = CONTROL.exec(text);
-  if (m) {
-    const code = m[0].charCodeAt(0).toString(16).padStart(4, "0").toUpperCase();
-    throw new InputError(`${what} "${text.replace(/[\u0000-\u001f\u007f]/g, "?")}" holds the control character U+${code}${code === "0000" ? " (a NUL byte)" : ""}; expected printable text`);
-  }
-}
-
-function checkNames(job: ScreenJob): void {
-  assertPrintable("the team name", job.team);
-  for (const p of job.pitches) {
-    assertPrintable("the pitcher's name", p.echo.pitcher);
-    assertPrintable("the pitch's name", p.echo.name);
-  }
-}
+import { assertPrintable, checkNames, layoutOf } from "./paperRequest.js";
 
 /** What a paper job produces. */
 export interface PaperOutput {
@@ -167,39 +117,9 @@ export async function runCard(job: CardJob): Promise<PaperOutput> {
   return { bytes: await pdfOfPages(pages, contents[0].title), format: "pdf", pages: pages.length, pitches: screened.length };
 }
 
-export interface AtlasJob {
-  readonly screen: ScreenJob;
-  readonly layout: Layout;
-  /** The request as given and the screen's top options: a worker thread builds the same job from them (screenPool.ts). */
-  readonly request: Request;
-  readonly top: TopChoice;
-  /** Worker threads that screen (--threads; 0: this thread only; "auto": screenPool.ts autoScreenThreads). */
-  readonly threads: number | "auto";
-}
-
-const ATLAS_TOP = { fallback: 4, range: [1, 12] as const };
-
-export function parseAtlas(request: Request): AtlasJob {
-  const layout = layoutOf(String(request.layout ?? "atlas-letter"), ["atlas"]);
-  const screen = parseScreen(request, ATLAS_TOP);
-  checkNames(screen);
-  return { layout, screen, request, top: ATLAS_TOP, threads: threadsChoice(request) };
-}
-
 /** The values a sphere map shows for a screened pitch: seam movement toward the wanted direction (its size for "any"), inches. */
 export function mapValuesIn(p: ScreenedPitch): Float64Array {
   return p.result.scores.map((x) => x / M_PER_IN);
-}
-
-export async function runAtlas(job: AtlasJob, tick: (stage: string, done: number, total: number) => void = () => {}): Promise<PaperOutput> {
-  const base = { layout: job.layout, team: job.screen.team, seamShape: job.screen.sampler.seamShape, onPage: (done: number, total: number) => tick("pages", done, total) };
-  // the worker threads screen while this thread paints: the pages that need no pitch while
-  // the first screens run, then each pitch's pages as it comes back, the cover last
-  let atlas: ReturnType<typeof startAtlas> | undefined;
-  const begin = () => (atlas ??= startAtlas(base, job.screen.pitches.length));
-  const pitches = await screenAllPooled(job.screen, job.request, job.top, job.threads, { meanwhile: begin, onPitch: (i, p) => begin().pitch(i, p), tick, mapCells: ATLAS_MAP_CELLS });
-  const pdf = await begin().finish(pitches);
-  return { bytes: pdf.bytes, format: "pdf", pages: pdf.pages, pitches: pitches.length };
 }
 
 /** The sphere map of one screened pitch as a PNG picture (what `screen --map-png` writes). */

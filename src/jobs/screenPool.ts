@@ -82,8 +82,8 @@ export interface PoolHooks {
   onPitch?: (index: number, pitch: PooledPitch) => void;
   /** Progress: the stage, pitches done, pitches in all. */
   tick?: (stage: string, done: number, total: number) => void;
-  /** Called once the workers have their tasks (at once with no pool): this thread's own work meanwhile. */
-  meanwhile?: () => void;
+  /** Called once the workers have their tasks (at once with no pool): this thread's own work meanwhile, awaited before the screen resolves (with no pool, before it starts). */
+  meanwhile?: () => void | Promise<void>;
   /** Also draw each pitch's sphere-map cells as PDF content, on the thread that screens it. */
   mapCells?: MapCellsOptions;
 }
@@ -121,7 +121,7 @@ export async function screenAllPooled(job: ScreenJob, request: Request, top: Top
   };
   const pool = await openPool(count);
   if (!pool) {
-    meanwhile();
+    await meanwhile();
     for (let i = 0; i < n; i++) {
       const s = screenOne(job, job.pitches[i]);
       const mapValuesIn = s.result.scores.map((x) => x / M_PER_IN);
@@ -142,8 +142,7 @@ export async function screenAllPooled(job: ScreenJob, request: Request, top: Top
       const results = (await pool.run(task)) as PoolResult[];
       for (const r of results) take(r.index, { report: r.report, mapValuesIn: r.mapValuesIn, grid: gridOf(r.gridSpacingRad), ...(r.mapCellsPdf ? { mapCellsPdf: r.mapCellsPdf } : {}) });
     });
-    meanwhile();
-    await Promise.all(runs);
+    await Promise.all([...runs, meanwhile()]);
   } finally {
     await pool.destroy();
   }

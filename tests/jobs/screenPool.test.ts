@@ -29,7 +29,7 @@ describe("the screen on the worker pool", () => {
     const job = parseScreen({ ...REQUEST, cache: "none" });
     const order: number[] = [];
     let waited = 0;
-    const pooled = await screenAllPooled(job, REQUEST, {}, 2, { onPitch: (i) => order.push(i), meanwhile: () => waited++ });
+    const pooled = await screenAllPooled(job, REQUEST, {}, 2, { onPitch: (i) => order.push(i), meanwhile: () => { waited++; } });
     expect(order).toEqual([0, 1, 2, 3, 4, 5]);
     expect(waited).toBe(1);
     job.pitches.forEach((p, i) => {

@@ -17,7 +17,8 @@ import type { SphereGrid } from "../../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { TOOL_VERSION } from "../../version.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
-import { sphereMapScene, type MapCellsOptions } from "../sphereMapDrawing.js";
+import { sphereMapScene } from "../sphereMapDrawing.js";
+import { ATLAS_MAP_CELLS } from "./atlasMap.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "./card.js";
 import { openPdf, type Page } from "./document.js";
 import type { Layout } from "./layouts.js";
@@ -34,9 +35,6 @@ export interface AtlasPitch {
   /** The map's cells already made as PDF content (sphereMapCellsPdf with ATLAS_MAP_CELLS), or undefined to draw them here. */
   readonly mapCellsPdf?: Uint8Array;
 }
-
-/** The atlas's sphere map: its width and title fix where the cells fall (the worker that screens a pitch draws them). */
-export const ATLAS_MAP_CELLS: MapCellsOptions = { widthPx: 720, titled: true };
 
 export interface AtlasInput {
   readonly layout: Layout;

@@ -6,7 +6,8 @@
  * case is made from a real screen report with its reach set out of reach.
  */
 import { describe, expect, it } from "vitest";
-import { outOfReachMessage, parseAtlas } from "../../../src/jobs/paper.js";
+import { parseAtlas } from "../../../src/jobs/atlas.js";
+import { outOfReachMessage } from "../../../src/jobs/paper.js";
 import { screenText } from "../../../src/jobs/formats/text.js";
 import { parseScreen, screenOne } from "../../../src/jobs/screen.js";
 import { listOrientations } from "../../../src/render/page3d/data.js";
