@@ -251,20 +251,22 @@ export function sphereMapCellsPdf(values: Float64Array, grid: SphereGrid, option
   const digits = options.digits ?? 1;
   const [lo, hi] = valueRange(values, options.range);
   const { toPx } = mapFrame(options.widthPx, options.titled);
+  // corners as whole steps of 10^-digits px (what the drawing's paths round to), written
+  // as integers under one scaling: shorter to write, to compress and to read
   const k = 10 ** digits;
   const byLevel = new Map<number, string[]>();
   forEachCellRun(values, grid, lo, hi, levels, toPx, (level, ring) => {
-    let ops = "";
-    for (let i = 0; i + 1 < ring.length; i += 2) ops += `${Math.round(ring[i] * k) / k} ${Math.round(ring[i + 1] * k) / k} ${i === 0 ? "m" : "l"}\n`;
-    const list = byLevel.get(level) ?? [];
-    list.push(`${ops}h\n`);
-    byLevel.set(level, list);
+    let ops = `${Math.round(ring[0] * k)} ${Math.round(ring[1] * k)} m`;
+    for (let i = 2; i + 1 < ring.length; i += 2) ops += `\n${Math.round(ring[i] * k)} ${Math.round(ring[i + 1] * k)} l`;
+    const list = byLevel.get(level);
+    if (list) list.push(ops);
+    else byLevel.set(level, [ops]);
   });
-  let out = "";
+  let out = `${1 / k} 0 0 ${1 / k} 0 0 cm\n${CELL_STROKE_PX * k} w\n1 j\n`;
   for (const level of [...byLevel.keys()].sort((a, b) => a - b)) {
     const hex = cellColour(level, levels);
     const rgb = [1, 3, 5].map((i) => Math.round((parseInt(hex.slice(i, i + 2), 16) / 255) * 1e4) / 1e4).join(" ");
-    out += `q\n${rgb} rg\n${rgb} RG\n${CELL_STROKE_PX} w\n1 j\n${byLevel.get(level)!.join("")}B\nQ\n`;
+    out += `${rgb} rg\n${rgb} RG\n${byLevel.get(level)!.join("\nh\n")}\nh\nB\n`;
   }
   return deflateSync(Buffer.from(out, "latin1"));
 }

@@ -59,11 +59,14 @@ describe("a sphere map's cells made apart as one form (sphereMapCellsPdf)", () =
   for (let i = 0; i < grid.count; i++) values[i] = Math.sin(3 * grid.points[3 * i]) + grid.points[3 * i + 2] ** 2;
   const options = { widthPx: 720, title: "test map", valueLabel: "value", seamShape: null };
 
-  it("holds one fill-and-stroke per colour step, in the map's px inside its box [PDF 32000-1:2008, 8.5.3: B fills and strokes]", () => {
+  it("holds one fill-and-stroke per colour step, its corners whole steps of 0.1 px inside the map's box [PDF 32000-1:2008, 8.5.3: B fills and strokes]", () => {
     const ops = inflateSync(sphereMapCellsPdf(values, grid, { widthPx: 720, titled: true })).toString("latin1");
     const paths = sphereMapScene(values, grid, options).children.find((c) => c.attrs.class === "sa-cells")!.children;
     expect(ops.match(/^B$/gm)!.length).toBe(paths.length);
-    const xs = [...ops.matchAll(/^([-\d.]+) ([-\d.]+) [ml]$/gm)].map((m) => [Number(m[1]), Number(m[2])]);
+    // one scaling first (corners as whole steps of 0.1 px), then the corners
+    const cm = /^([\d.]+) 0 0 ([\d.]+) 0 0 cm$/m.exec(ops)!;
+    expect(Number(cm[1])).toBe(0.1);
+    const xs = [...ops.matchAll(/^(-?\d+) (-?\d+) [ml]$/gm)].map((m) => [Number(m[1]) * 0.1, Number(m[2]) * 0.1]);
     expect(xs.length).toBeGreaterThan(grid.count / 2);
     for (const [x, y] of xs) {
       expect(x).toBeGreaterThanOrEqual(0);
