@@ -4,7 +4,6 @@
  * clinic handout, and the sphere map as a picture. Screening goes through the one
  * shared path (pipeline.ts); the drawing is src/render/paper/.
  */
-import { M_PER_IN } from "../../geometry/units.js";
 import { InputError } from "../io/errors.js";
 import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
 import { renderCardSvg } from "../render/paper/cardSvg.js";
@@ -22,7 +21,7 @@ import { buildModel, modelChoice } from "./request/model.js";
 import { samplerSettings } from "./request/settings.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { seamFor } from "../sampling/measure.js";
-import { parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
+import { mapValuesIn, parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
 import { assertPrintable, checkNames, layoutOf } from "./paperRequest.js";
 
 /** What a paper job produces. */
@@ -115,11 +114,6 @@ export async function runCard(job: CardJob): Promise<PaperOutput> {
   if (job.format === "png") return { bytes: sceneToPng(cardScene(layout, contents[0])), format: "png", pages: 1, pitches: screened.length };
   const pages = layout.kind === "card" ? [cardPage(layout, contents[0])] : sheetPages(layout, contents);
   return { bytes: await pdfOfPages(pages, contents[0].title), format: "pdf", pages: pages.length, pitches: screened.length };
-}
-
-/** The values a sphere map shows for a screened pitch: seam movement toward the wanted direction (its size for "any"), inches. */
-export function mapValuesIn(p: ScreenedPitch): Float64Array {
-  return p.result.scores.map((x) => x / M_PER_IN);
 }
 
 /** The sphere map of one screened pitch as a PNG picture (what `screen --map-png` writes). */

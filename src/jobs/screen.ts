@@ -13,7 +13,7 @@ import { cacheChoice } from "./request/runtime.js";
 import type { Request } from "./request/values.js";
 import { screenJobOf, type ScreenJob, type TopChoice } from "./screenJob.js";
 
-export { runScreen, screenOne, type ScreenedPitch, type ScreenJob, type ScreenOutcome } from "./screenJob.js";
+export { mapValuesIn, runScreen, screenOne, type ScreenedPitch, type ScreenJob, type ScreenOutcome } from "./screenJob.js";
 
 export function parseScreen(request: Request, top: TopChoice = {}): ScreenJob {
   return withMapCache(screenJobOf(request, { pitches: () => pitchesFromRequest(request), profile: () => modelChoice(request).profile }, top), request);

@@ -5,6 +5,7 @@
  * which reads pitch and profile files) and the workbench page's worker build and run
  * the same job by the same code, and their numbers cannot disagree.
  */
+import { M_PER_IN } from "../../geometry/units.js";
 import type { AirConditions } from "../physics/air.js";
 import type { SeamModel } from "../physics/seamModel/model.js";
 import type { SeamModelProfile } from "../physics/seamModel/parameters.js";
@@ -35,6 +36,11 @@ export interface ScreenedPitch {
   readonly input: PitchInput;
   readonly result: ScreenResult;
   readonly report: ScreenReport;
+}
+
+/** The values a sphere map shows for a screened pitch: seam movement toward the wanted direction (its size for "any") per grid cell, inches. */
+export function mapValuesIn(p: ScreenedPitch): Float64Array {
+  return p.result.scores.map((x) => x / M_PER_IN);
 }
 
 export interface ScreenOutcome {

@@ -5,17 +5,17 @@
  * worker rebuilds the same job from the request as typed (the same files, model,
  * settings and cache) and screens the pitches it is given with the same code, so the
  * numbers are this thread's to the last bit. Meanwhile this thread is free to draw each
- * pitch as its screen comes back (and, for the atlas, the worker also draws each pitch's
- * sphere-map cells as PDF content, the heaviest part of its pages). With 0 threads, or no worker file (the TypeScript
- * sources under a test runner), every pitch is screened here, in order.
+ * pitch as its screen comes back (for the atlas, the worker also draws each pitch's
+ * sphere-map cells as PDF content, the heaviest part of its pages). With 0 threads, or
+ * no worker file (the TypeScript sources under a test runner), every pitch is screened
+ * here, in order, by the same code (pooledPitch).
  */
 import { equalAreaGrid, type SphereGrid } from "../../geometry/sphereGrid.js";
-import { M_PER_IN } from "../../geometry/units.js";
 import type { ScreenReport } from "../screening/report.js";
 import { coreThreads, openPool } from "./pool.js";
 import type { Request } from "./request/values.js";
 import { sphereMapCellsPdf, type MapCellsOptions } from "../render/sphereMapDrawing.js";
-import { parseScreen, screenOne, type ScreenJob } from "./screen.js";
+import { mapValuesIn, parseScreen, screenOne, type ScreenJob } from "./screen.js";
 import type { TopChoice } from "./screenJob.js";
 
 /** A worker's task: the request as given and the screen's top options, and which pitches. */
@@ -90,16 +90,23 @@ export interface PoolHooks {
 
 let built: { key: string; job: ScreenJob } | undefined;
 
+/** Pitch `i` of `job` screened, with its map's values in inches and, when asked for, its cells as PDF content: what either side of the pool makes of a pitch. */
+function pooledPitch(job: ScreenJob, i: number, mapCells: MapCellsOptions | undefined): PooledPitch {
+  const s = screenOne(job, job.pitches[i]);
+  const values = mapValuesIn(s);
+  const mapCellsPdf = mapCells ? sphereMapCellsPdf(values, s.result.grid, mapCells) : undefined;
+  return { report: s.report, mapValuesIn: values, grid: s.result.grid, ...(mapCellsPdf ? { mapCellsPdf } : {}) };
+}
+
 /** A worker's side of a screen task: the job built once per request, the pitches screened. */
 export function screenPitches(task: ScreenTask): PoolResult[] {
   const key = JSON.stringify([task.request, task.top]);
   if (built?.key !== key) built = { key, job: parseScreen(task.request, task.top) };
   const job = built.job;
   return task.indices.map((i) => {
-    const s = screenOne(job, job.pitches[i]);
-    const mapValuesIn = s.result.scores.map((x) => x / M_PER_IN);
-    const mapCellsPdf = task.mapCells ? sphereMapCellsPdf(mapValuesIn, s.result.grid, task.mapCells) : undefined;
-    return { index: i, report: s.report, mapValuesIn, gridSpacingRad: s.result.settings.gridSpacingRad, ...(mapCellsPdf ? { mapCellsPdf } : {}) };
+    // the grid is rebuilt on the calling thread from its spacing, not sent
+    const { grid, ...rest } = pooledPitch(job, i, task.mapCells);
+    return { index: i, ...rest, gridSpacingRad: grid.spacingRad };
   });
 }
 
@@ -122,12 +129,7 @@ export async function screenAllPooled(job: ScreenJob, request: Request, top: Top
   const pool = await openPool(count);
   if (!pool) {
     await meanwhile();
-    for (let i = 0; i < n; i++) {
-      const s = screenOne(job, job.pitches[i]);
-      const mapValuesIn = s.result.scores.map((x) => x / M_PER_IN);
-      const mapCellsPdf = mapCells ? sphereMapCellsPdf(mapValuesIn, s.result.grid, mapCells) : undefined;
-      take(i, { report: s.report, mapValuesIn, grid: s.result.grid, ...(mapCellsPdf ? { mapCellsPdf } : {}) });
-    }
+    for (let i = 0; i < n; i++) take(i, pooledPitch(job, i, mapCells));
     return out;
   }
   const grids = new Map<number, SphereGrid>();
