@@ -14,7 +14,7 @@ import { equalAreaGrid, type SphereGrid } from "../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../screening/report.js";
 import { coreThreads, openPool } from "./pool.js";
 import type { Request } from "./request/values.js";
-import { sphereMapCellsPdf, type MapCellsOptions } from "../render/sphereMapDrawing.js";
+import { sphereMapCellsPdf, type MapCells, type MapCellsOptions } from "../render/sphereMapDrawing.js";
 import { mapValuesIn, parseScreen, screenOne, type ScreenJob } from "./screen.js";
 import type { TopChoice } from "./screenJob.js";
 
@@ -34,7 +34,7 @@ export interface PoolResult {
   readonly report: ScreenReport;
   readonly mapValuesIn: Float64Array;
   readonly gridSpacingRad: number;
-  readonly mapCellsPdf?: Uint8Array;
+  readonly mapCellsPdf?: MapCells;
 }
 
 export interface PooledPitch {
@@ -43,7 +43,7 @@ export interface PooledPitch {
   readonly mapValuesIn: Float64Array;
   readonly grid: SphereGrid;
   /** The sphere map's cells as PDF content (render/sphereMapDrawing.ts sphereMapCellsPdf), when asked for. */
-  readonly mapCellsPdf?: Uint8Array;
+  readonly mapCellsPdf?: MapCells;
 }
 
 /** Below this many pitches, "auto" screens on this thread: a worker's start costs more than it saves. */

@@ -55,12 +55,12 @@ export interface SphereMapOptions {
   /** Prefix of the ids in the SVG (default "sa"). */
   readonly idPrefix?: string;
   /**
-   * The cells already drawn as PDF content (sphereMapCellsPdf with this map's width,
-   * title, levels, range and digits): the drawing then carries them as one node for the
-   * PDF painter instead of a path per colour step. For PDF only; an SVG of such a
-   * drawing has no cells.
+   * The cells already drawn as PDF content (sphereMapCellsPdf): the drawing then carries
+   * them as one node for the PDF painter instead of a path per colour step. They must
+   * have been drawn for this map's width, title, levels, range and digits (checked:
+   * RangeError). For PDF only; an SVG of such a drawing has no cells.
    */
-  readonly cellsPdf?: Uint8Array;
+  readonly cellsPdf?: MapCells;
 }
 
 /** Longest stretch of a parallel drawn as one straight segment, radians. */
@@ -90,15 +90,17 @@ export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: 
   const prefix = options.idPrefix ?? "sa";
   const [lo, hi] = valueRange(values, options.range);
 
-  const { scale, titlePx, mapHeightPx, cx, cy, heightPx, toPx } = mapFrame(widthPx, options.title !== undefined && options.title !== "");
+  const { scale, titlePx, mapHeightPx, cx, cy, heightPx, toPx } = mapFrame(widthPx, Boolean(options.title));
 
   const draw = createScene(widthPx, heightPx).attr({ "font-family": "DejaVu Sans, Verdana, sans-serif" });
   if (options.title) draw.element("title").words(options.title);
 
   // cells: runs of equal colour step within a ring, one path per step
   const cells = draw.group().attr({ class: "sa-cells" });
-  if (options.cellsPdf) cells.pdfContent = options.cellsPdf;
-  else {
+  if (options.cellsPdf) {
+    assertCellsFit(options.cellsPdf.options, { widthPx, titled: Boolean(options.title), levels, range: options.range, digits });
+    cells.pdfContent = options.cellsPdf.deflated;
+  } else {
     const byLevel = new Map<number, string[]>();
     forEachCellRun(values, grid, lo, hi, levels, toPx, (level, ring) => {
       const list = byLevel.get(level) ?? [];
@@ -237,6 +239,23 @@ export interface MapCellsOptions {
   readonly digits?: number;
 }
 
+/** A map's cells as deflated PDF content, with the options they were drawn for. */
+export interface MapCells {
+  readonly options: MapCellsOptions;
+  readonly deflated: Uint8Array;
+}
+
+/** Throws RangeError unless cells drawn with `drawn` fall where a map drawn with `map` puts its cells. */
+function assertCellsFit(drawn: MapCellsOptions, map: Required<Omit<MapCellsOptions, "range">> & Pick<MapCellsOptions, "range">): void {
+  const same =
+    drawn.widthPx === map.widthPx &&
+    drawn.titled === map.titled &&
+    (drawn.levels ?? 64) === map.levels &&
+    (drawn.digits ?? 1) === map.digits &&
+    (drawn.range === undefined ? map.range === undefined : map.range !== undefined && drawn.range[0] === map.range[0] && drawn.range[1] === map.range[1]);
+  if (!same) throw new RangeError(`map cells drawn for ${JSON.stringify(drawn)} do not fit a map drawn with ${JSON.stringify(map)}`);
+}
+
 /**
  * The map's cells as PDF content operators (the drawing's px, y down, as sphereMapScene
  * places them), deflated: each colour step filled and stroked in its colour, every
@@ -245,7 +264,7 @@ export interface MapCellsOptions {
  * (render/paper/pdfScene.ts), so the page's own thread neither builds nor compresses
  * thousands of subpaths.
  */
-export function sphereMapCellsPdf(values: Float64Array, grid: SphereGrid, options: MapCellsOptions): Uint8Array {
+export function sphereMapCellsPdf(values: Float64Array, grid: SphereGrid, options: MapCellsOptions): MapCells {
   if (values.length !== grid.count) throw new RangeError(`${values.length} values for a grid of ${grid.count} cells`);
   const levels = options.levels ?? 64;
   const digits = options.digits ?? 1;
@@ -268,7 +287,7 @@ export function sphereMapCellsPdf(values: Float64Array, grid: SphereGrid, option
     const rgb = [1, 3, 5].map((i) => Math.round((parseInt(hex.slice(i, i + 2), 16) / 255) * 1e4) / 1e4).join(" ");
     out += `${rgb} rg\n${rgb} RG\n${byLevel.get(level)!.join("\nh\n")}\nh\nB\n`;
   }
-  return deflateSync(Buffer.from(out, "latin1"));
+  return { options, deflated: deflateSync(Buffer.from(out, "latin1")) };
 }
 
 function valueRange(values: Float64Array, range?: readonly [number, number]): [number, number] {

@@ -17,7 +17,7 @@ import type { SphereGrid } from "../../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { TOOL_VERSION } from "../../version.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
-import { sphereMapScene } from "../sphereMapDrawing.js";
+import { sphereMapScene, type MapCells } from "../sphereMapDrawing.js";
 import { ATLAS_MAP_CELLS } from "./atlasMap.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "./card.js";
 import { openPdf, type Page } from "./document.js";
@@ -33,7 +33,7 @@ export interface AtlasPitch {
   readonly mapValuesIn: Float64Array;
   readonly grid: SphereGrid;
   /** The map's cells already made as PDF content (sphereMapCellsPdf with ATLAS_MAP_CELLS), or undefined to draw them here. */
-  readonly mapCellsPdf?: Uint8Array;
+  readonly mapCellsPdf?: MapCells;
 }
 
 export interface AtlasInput {

@@ -276,6 +276,15 @@ function drawText(doc: Doc, node: SceneNode, s: Style): void {
   }
 }
 
+/** The pdfkit 0.20 methods its type declarations leave out (raw content, object references, a page's XObject resources). */
+function pdfkitInternals(doc: Doc) {
+  return doc as unknown as {
+    addContent(s: string): void;
+    ref(data: object): { end(chunk: Uint8Array): void };
+    page: { xobjects: Record<string, unknown> };
+  };
+}
+
 const forms = new WeakMap<Doc, number>();
 
 /**
@@ -288,11 +297,7 @@ function placeForm(doc: Doc, deflated: Uint8Array, box: { width: number; height:
   const n = (forms.get(doc) ?? 0) + 1;
   forms.set(doc, n);
   const name = `Fm${n}`;
-  const d = doc as unknown as {
-    ref(data: object): { end(chunk: Uint8Array): void };
-    page: { xobjects: Record<string, unknown> };
-    addContent(s: string): void;
-  };
+  const d = pdfkitInternals(doc);
   const ref = d.ref({ Type: "XObject", Subtype: "Form", BBox: [0, 0, box.width, box.height], Filter: "FlateDecode" });
   ref.end(deflated);
   d.page.xobjects[name] = ref;
@@ -345,7 +350,7 @@ function paintNode(doc: Doc, root: SceneNode, node: SceneNode, parent: Style): v
       if (d) {
         const ops = pathOperators(d);
         if (ops === undefined) doc.path(d);
-        else (doc as unknown as { addContent(s: string): void }).addContent(ops);
+        else pdfkitInternals(doc).addContent(ops);
         paint(doc, root, s, () => [0, 0, 1, 1]);
       }
       break;

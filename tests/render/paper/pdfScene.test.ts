@@ -14,7 +14,7 @@ import { DEG } from "../../../geometry/units.js";
 import { pdfOfPages } from "../../../src/render/paper/document.js";
 import { pathOperators } from "../../../src/render/paper/pdfScene.js";
 import { createScene, nestScene } from "../../../src/render/scene.js";
-import { sphereMapCellsPdf, sphereMapScene } from "../../../src/render/sphereMapDrawing.js";
+import { sphereMapCellsPdf, sphereMapScene, type MapCells } from "../../../src/render/sphereMapDrawing.js";
 import { itWithPoppler, renderGray } from "../../support/poppler.js";
 
 /** What pdfkit's own path parser writes for `d` (PDF 32000-1:2008, 8.5.2 path-construction operators). */
@@ -60,7 +60,7 @@ describe("a sphere map's cells made apart as one form (sphereMapCellsPdf)", () =
   const options = { widthPx: 720, title: "test map", valueLabel: "value", seamShape: null };
 
   it("holds one fill-and-stroke per colour step, its corners whole steps of 0.1 px inside the map's box [PDF 32000-1:2008, 8.5.3: B fills and strokes]", () => {
-    const ops = inflateSync(sphereMapCellsPdf(values, grid, { widthPx: 720, titled: true })).toString("latin1");
+    const ops = inflateSync(sphereMapCellsPdf(values, grid, { widthPx: 720, titled: true }).deflated).toString("latin1");
     const paths = sphereMapScene(values, grid, options).children.find((c) => c.attrs.class === "sa-cells")!.children;
     expect(ops.match(/^B$/gm)!.length).toBe(paths.length);
     // one scaling first (corners as whole steps of 0.1 px), then the corners
@@ -76,13 +76,13 @@ describe("a sphere map's cells made apart as one form (sphereMapCellsPdf)", () =
   });
 
   itWithPoppler("renders the same pixels as the cells painted as paths, at 100 dpi [poppler pdftoppm]", async () => {
-    const pageOf = (cellsPdf?: Uint8Array) => {
+    const pageOf = (cellsPdf?: MapCells) => {
       const scene = createScene(612, 792);
       nestScene(scene, sphereMapScene(values, grid, { ...options, ...(cellsPdf ? { cellsPdf } : {}) }), 36, 36, 540, 400);
       return { widthIn: 8.5, heightIn: 11, scene };
     };
     const dir = mkdtempSync(join(tmpdir(), "seam-atlas-form-"));
-    const render = async (cellsPdf: Uint8Array | undefined, name: string) => {
+    const render = async (cellsPdf: MapCells | undefined, name: string) => {
       const f = join(dir, `${name}.pdf`);
       writeFileSync(f, await pdfOfPages([pageOf(cellsPdf)], name));
       return renderGray(f, 1, 100, join(dir, name));
