@@ -18,11 +18,12 @@
  *   optional package (73 MB, a development dependency, not installed for users by
  *   default): read only if it resolves, the file for each character chosen by the
  *   unicode-range declarations of the package's own 400.css / 700.css. Its files
- *   hold 80 of the 11,172 Hangul syllables, so Hangul is not set in it: Korean
- *   prints as U+FFFD rather than half its letters.
+ *   hold 80 of the 11,172 Hangul syllables, so Hangul is not set in it;
+ * - Noto Sans KR (@fontsource/noto-sans-kr) for Hangul, optional in the same way
+ *   (54 MB), its files chosen by its own CSS the same way: they hold every syllable.
  * A character none holds (emoji, other scripts) prints as U+FFFD. When Noto Sans SC
- * is not installed and a Chinese or Japanese character needs it, one line on
- * standard error (once per process) names the package to install.
+ * or KR is not installed and a character needs it, one line on standard error (once
+ * per process) names the package to install.
  */
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
@@ -36,14 +37,14 @@ import { typesetter, type FontWeight, type TextRun as TypesetRun, type TypesetFa
 export { MISSING_GLYPH, type FontWeight } from "./typeset.js";
 export const FONT_FAMILY = "Noto Sans";
 /** The SVG font-family list written into drawings: ours first (the fallback faces next, for a viewer that has them), then what a viewer has. */
-export const SVG_FONT_FAMILY = "Noto Sans, Noto Sans Arabic, Noto Sans Hebrew, Noto Sans SC, DejaVu Sans, Verdana, sans-serif";
+export const SVG_FONT_FAMILY = "Noto Sans, Noto Sans Arabic, Noto Sans Hebrew, Noto Sans SC, Noto Sans KR, DejaVu Sans, Verdana, sans-serif";
 
 /** The subsets, in the order a character is looked up. */
 export const FONT_SUBSETS = ["latin", "latin-ext", "cyrillic", "cyrillic-ext", "greek", "greek-ext", "vietnamese"] as const;
 export type FontSubset = (typeof FONT_SUBSETS)[number];
 
-/** The fallback faces' files: Arabic, Hebrew, or a Noto Sans SC file ("sc-115"). */
-export type FallbackSubset = "arabic" | "hebrew" | `sc-${string}`;
+/** The fallback faces' files: Arabic, Hebrew, or a Noto Sans SC or KR file ("sc-115", "kr-116"). */
+export type FallbackSubset = "arabic" | "hebrew" | `sc-${string}` | `kr-${string}`;
 
 export interface FontFace extends TypesetFace {
   /** A name unique to this file, as registered in a PDF (e.g. "NotoSans-cyrillic-700", "NotoSansArabic-arabic-400"). */
@@ -129,14 +130,23 @@ export function allFaces(weight: FontWeight): FontFace[] {
   return FONT_SUBSETS.map((s) => fontFace(s, weight));
 }
 
-/** The fallback packages, pinned in package.json (Noto Sans SC as a development dependency: optional to users). */
+/** The fallback packages, pinned in package.json (Noto Sans SC and KR as development dependencies: optional to users). */
 export const FALLBACK_PACKAGES = {
   arabic: "@fontsource/noto-sans-arabic",
   hebrew: "@fontsource/noto-sans-hebrew",
   cjk: "@fontsource/noto-sans-sc",
+  korean: "@fontsource/noto-sans-kr",
 } as const;
-/** The version of Noto Sans SC the notice asks for (the one package.json pins). */
+/** The version of Noto Sans SC and KR the notices ask for (the one package.json pins). */
 const CJK_VERSION = "5.3.0";
+
+/** The optional packages split into many files by unicode-range: Noto Sans SC (Chinese, Japanese) and Noto Sans KR (Hangul). */
+export type CjkPackage = "cjk" | "korean";
+
+const CJK_FILES: Record<CjkPackage, { family: string; stem: string; tag: "sc" | "kr"; readers: string }> = {
+  cjk: { family: "NotoSansSC", stem: "noto-sans-sc", tag: "sc", readers: "Chinese and Japanese characters" },
+  korean: { family: "NotoSansKR", stem: "noto-sans-kr", tag: "kr", readers: "Korean (Hangul) characters" },
+};
 
 const fallbackFaces = new BoundedCache<string, FontFace>("fallback faces", 256);
 
@@ -166,31 +176,33 @@ export function scriptFace(script: "arabic" | "hebrew", weight: FontWeight): Fon
   });
 }
 
-/** One unicode-range of a Noto Sans SC file: [first, last] code points and the file's name. */
+/** One unicode-range of a Noto Sans SC or KR file: [first, last] code points and the file's name. */
 interface CjkRange {
   readonly first: number;
   readonly last: number;
   readonly file: string;
 }
 
-const cjkRanges = new Map<FontWeight, CjkRange[] | null>();
+const cjkRanges = new Map<string, CjkRange[] | null>();
 
 /**
- * The unicode-range declarations of Noto Sans SC's CSS for one weight (400.css or
- * 700.css), sorted by first code point, or null when the package is not installed.
+ * The unicode-range declarations of one optional package's CSS (Noto Sans SC by
+ * default, or KR) for one weight (400.css or 700.css), sorted by first code point, or
+ * null when the package is not installed.
  * @throws RangeError when the CSS declares no file with a range (a changed package layout)
  */
-export function cjkUnicodeRanges(weight: FontWeight): readonly CjkRange[] | null {
-  let ranges = cjkRanges.get(weight);
+export function cjkUnicodeRanges(weight: FontWeight, pkg: CjkPackage = "cjk"): readonly CjkRange[] | null {
+  const key = `${pkg}-${weight}`;
+  let ranges = cjkRanges.get(key);
   if (ranges !== undefined) return ranges;
   let dir: string | null;
   try {
-    dir = packageDir(FALLBACK_PACKAGES.cjk);
+    dir = packageDir(FALLBACK_PACKAGES[pkg]);
   } catch {
     dir = null;
   }
   ranges = dir === null ? null : parseUnicodeRanges(readFileSync(join(dir, `${weight === "bold" ? 700 : 400}.css`), "utf8"));
-  cjkRanges.set(weight, ranges);
+  cjkRanges.set(key, ranges);
   return ranges;
 }
 
@@ -230,28 +242,32 @@ function cjkFileFor(ranges: readonly CjkRange[], cp: number): string | null {
   return null;
 }
 
-// Korean: the SC files hold too few syllables to set a name (see the header)
+// Korean: the SC files hold too few syllables to set a name (see the header); the KR files hold them all
 const HANGUL = /\p{Script=Hangul}/u;
 // what only a CJK face would print: the notice is for these
 const HAN_KANA = /[\p{Script=Han}\p{Script=Hiragana}\p{Script=Katakana}\p{Script=Bopomofo}]/u;
 
-/** The Noto Sans SC file that holds `cp` by the package's CSS, parsed (cached); null when none or not installed. */
+/**
+ * The file that holds `cp` by its package's CSS, parsed (cached): Noto Sans KR for
+ * Hangul, Noto Sans SC for every other character; null when none or not installed.
+ */
 export function cjkFace(cp: number, weight: FontWeight): FontFace | null {
-  if (HANGUL.test(String.fromCodePoint(cp))) return null;
-  const ranges = cjkUnicodeRanges(weight);
+  const ch = String.fromCodePoint(cp);
+  const hangul = HANGUL.test(ch);
+  const pkg: CjkPackage = hangul ? "korean" : "cjk";
+  const ranges = cjkUnicodeRanges(weight, pkg);
+  const { family, stem, tag, readers } = CJK_FILES[pkg];
   if (ranges === null) {
-    if (HAN_KANA.test(String.fromCodePoint(cp))) {
-      addNotice(`Chinese and Japanese characters print as \ufffd; to print them, install the font package: npm install ${FALLBACK_PACKAGES.cjk}@${CJK_VERSION}`);
-    }
+    if (hangul || HAN_KANA.test(ch)) addNotice(`${readers} print as \ufffd; to print them, install the font package: npm install ${FALLBACK_PACKAGES[pkg]}@${CJK_VERSION}`);
     return null;
   }
   const file = cjkFileFor(ranges, cp);
   if (!file) return null;
-  const name = /^noto-sans-sc-(.+)-[0-9]00-normal\.woff$/.exec(file)?.[1] ?? file;
-  const key = `NotoSansSC-${name}-${weight === "bold" ? 700 : 400}`;
-  return fallbackFaces.get(key, () =>
-    parsedFace(key, `sc-${name}`, weight, readFileSync(join(packageDir(FALLBACK_PACKAGES.cjk), "files", file)), (c) => !HANGUL.test(String.fromCodePoint(c))),
-  );
+  const name = new RegExp(`^${stem}-(.+)-[0-9]00-normal\\.woff$`).exec(file)?.[1] ?? file;
+  const key = `${family}-${name}-${weight === "bold" ? 700 : 400}`;
+  // a file is asked only for its own package's characters: SC never sets Hangul, KR only Hangul
+  const covers = hangul ? (c: number) => HANGUL.test(String.fromCodePoint(c)) : (c: number) => !HANGUL.test(String.fromCodePoint(c));
+  return fallbackFaces.get(key, () => parsedFace(key, `${tag}-${name}`, weight, readFileSync(join(packageDir(FALLBACK_PACKAGES[pkg]), "files", file)), covers));
 }
 
 /** The first fallback face that holds every code point of one character, or null. */

@@ -124,16 +124,16 @@ describe("grip card", () => {
     expect(xmlProblems(svg.trim())).toEqual([]);
   });
 
-  itWithPoppler("prints a name in any script: accents, Cyrillic, Arabic and Hebrew (right to left, UAX #9), Chinese and Japanese as themselves, Hangul and emoji as U+FFFD placeholders that leave the next word whole (pdftotext -raw)", () => {
+  itWithPoppler("prints a name in any script: accents, Cyrillic, Arabic and Hebrew (right to left, UAX #9), Chinese, Japanese and Korean as themselves, Thai and emoji as U+FFFD placeholders that leave the next word whole (pdftotext -raw)", () => {
     const out = join(tmp, "names.pdf");
-    const typed = "Zoë Ярослава محمد علي דוד לוי 李小龙 山田 太郎 김민준 👍🏽 sinker";
+    const typed = "Zoë Ярослава محمد علي דוד לוי 李小龙 山田 太郎 김민준 สม 👍🏽 sinker";
     const r = runCli(["card", ...SINKER.filter((a) => a !== "sinker" && a !== "--name"), "--name", typed, "--out", out]);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toBe("");
     const text = flat(pdfRawText(out));
     // UAX #9: the four right-to-left words form one stretch, drawn last word first
-    expect(visualWordOrder(typed)).toBe("Zoë Ярослава לוי דוד علي محمد 李小龙 山田 太郎 김민준 👍🏽 sinker");
-    expect(text).toContain("Zoë Ярослава לוי דוד علي محمد 李小龙 山田 太郎 \ufffd\ufffd\ufffd \ufffd sinker: grip 1");
+    expect(visualWordOrder(typed)).toBe("Zoë Ярослава לוי דוד علي محمد 李小龙 山田 太郎 김민준 สม 👍🏽 sinker");
+    expect(text).toContain("Zoë Ярослава לוי דוד علي محمد 李小龙 山田 太郎 김민준 \ufffd\ufffd \ufffd sinker: grip 1");
   });
 
   it("as PNG draws the letters of an Arabic name: the picture differs from the same card named with U+FFFD marks", () => {

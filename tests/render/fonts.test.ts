@@ -49,15 +49,15 @@ describe("the embedded face (Noto Sans from @fontsource/noto-sans)", () => {
     for (const r of runs2) for (const ch of r.text) if (ch !== " ") expect(r.face.holds(ch.codePointAt(0)!)).toBe(true);
   });
 
-  it("prints one U+FFFD for each character no shipped face holds (Hangul, an emoji with skin tone, a family emoji), never stray glyphs", () => {
-    expect(printable("김민준")).toBe(MISSING_GLYPH.repeat(3));
+  it("prints one U+FFFD for each character no shipped face holds (Thai, an emoji with skin tone, a family emoji), never stray glyphs", () => {
+    expect(printable("สม")).toBe(MISSING_GLYPH.repeat(2));
     expect(printable("A👍🏽B")).toBe(`A${MISSING_GLYPH}B`);
     expect(printable("x👨‍👩‍👧y")).toBe(`x${MISSING_GLYPH}y`);
     expect(fontFace("latin", "normal").font.hasGlyphForCodePoint(0xfffd)).toBe(true);
   });
 
-  it("sets Arabic, Hebrew, Chinese and Japanese in the fallback faces, each character in a file that holds it, and prints them as typed", () => {
-    for (const [name, family] of [["محمد علي", "NotoSansArabic"], ["דוד לוי", "NotoSansHebrew"], ["李小龙", "NotoSansSC"], ["山田 太郎", "NotoSansSC"], ["さくら カナ", "NotoSansSC"]] as const) {
+  it("sets Arabic, Hebrew, Chinese, Japanese and Korean in the fallback faces, each character in a file that holds it, and prints them as typed", () => {
+    for (const [name, family] of [["محمد علي", "NotoSansArabic"], ["דוד לוי", "NotoSansHebrew"], ["李小龙", "NotoSansSC"], ["山田 太郎", "NotoSansSC"], ["さくら カナ", "NotoSansSC"], ["김민준", "NotoSansKR"], ["이서연 박", "NotoSansKR"]] as const) {
       expect(printable(name)).toBe(name);
       for (const r of textRuns(name)) {
         expect(r.face.key.startsWith(`${family}-`), `${name}: ${r.face.key}`).toBe(true);
@@ -80,12 +80,29 @@ describe("the embedded face (Noto Sans from @fontsource/noto-sans)", () => {
     }
   });
 
-  it("leaves Hangul out of Noto Sans SC, whose files hold only some syllables (김 is in one, 민 in none): Korean prints as U+FFFD whole", () => {
-    const ranges = cjkUnicodeRanges("normal")!;
-    const inCss = (cp: number) => ranges.some((r) => cp >= r.first && cp <= r.last);
-    expect(inCss(0xae40)).toBe(true);
-    expect(inCss(0xbbfc)).toBe(false);
-    expect(cjkFace(0xae40, "normal")).toBe(null);
+  it("sets Hangul in Noto Sans KR, never in Noto Sans SC, whose files hold only some syllables (김 is in one, 민 in none)", () => {
+    const sc = cjkUnicodeRanges("normal")!;
+    const inSc = (cp: number) => sc.some((r) => cp >= r.first && cp <= r.last);
+    expect(inSc(0xae40)).toBe(true);
+    expect(inSc(0xbbfc)).toBe(false);
+    for (const cp of [0xae40, 0xbbfc]) expect(cjkFace(cp, "normal")!.key.startsWith("NotoSansKR-")).toBe(true);
+  });
+
+  it("finds every Hangul syllable (U+AC00 to U+D7A3: SBase and SCount = 11,172 of the Unicode Standard, sec. 3.12) in a Noto Sans KR file by the package's own CSS, in both weights, and the file holds it (cross-check of the CSS against the files' cmaps, every 37th syllable)", () => {
+    for (const weight of ["normal", "bold"] as const) {
+      const css = readFileSync(join(dirname(createRequire(import.meta.url).resolve("@fontsource/noto-sans-kr/LICENSE")), weight === "bold" ? "700.css" : "400.css"), "utf8");
+      const ranges = parseUnicodeRanges(css);
+      expect(cjkUnicodeRanges(weight, "korean")).toEqual(ranges);
+      const w = weight === "bold" ? 700 : 400;
+      for (let cp = 0xac00; cp <= 0xd7a3; cp++) {
+        const rule = ranges.find((r) => cp >= r.first && cp <= r.last);
+        expect(rule, `U+${cp.toString(16)}`).toBeDefined();
+        if ((cp - 0xac00) % 37 !== 0 && cp !== 0xd7a3) continue;
+        const face = cjkFace(cp, weight)!;
+        expect(face.key).toBe(`NotoSansKR-${/^noto-sans-kr-(.+)-[0-9]00-normal\.woff$/.exec(rule!.file)![1]}-${w}`);
+        expect(face.font.hasGlyphForCodePoint(cp), `U+${cp.toString(16)}`).toBe(true);
+      }
+    }
   });
 
   it("parses CSS unicode-range lists (CSS Fonts Level 4, sec. 4.5): single code points, ranges and wildcards", () => {

@@ -19,8 +19,9 @@ export const NAMES = {
   hebrew: "דוד לוי",
   chinese: "李小龙",
   japanese: "山田 太郎",
-  // no face shipped holds Hangul or emoji: each grapheme prints as U+FFFD
-  lacked: "김민준 👍🏽 Karim",
+  korean: "김민준",
+  // no face shipped holds Thai or emoji: each grapheme prints as U+FFFD
+  lacked: "สม 👍🏽 Karim",
 } as const;
 
 function throwsOf(n: number, armIn: number, upIn: number, spinMinutes: number, gapMinutes: number): ReportThrow[] {

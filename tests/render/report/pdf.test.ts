@@ -2,8 +2,8 @@
  * The bullpen report's pages: their order and count, the same bytes for the same
  * data, every word inside its page, and names in any script read back from the PDF
  * by poppler's pdftotext exactly as typed where a face holds the script (accents,
- * Cyrillic, Greek, Vietnamese, Arabic, Hebrew, Chinese, Japanese), as one U+FFFD per
- * character where none does (Hangul, emoji), the next word whole either way.
+ * Cyrillic, Greek, Vietnamese, Arabic, Hebrew, Chinese, Japanese, Korean), as one U+FFFD per
+ * character where none does (Thai, emoji), the next word whole either way.
  */
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
@@ -54,7 +54,7 @@ describe("bullpen report pages", () => {
     }
   });
 
-  itWithPoppler("print names in Latin with accents, Cyrillic, Greek, Vietnamese, Arabic, Hebrew, Chinese and Japanese as typed (Arabic and Hebrew words right to left, UAX #9), and Hangul and emoji as one U+FFFD each with the next word whole (pdftotext -raw) [README: Any name]", async () => {
+  itWithPoppler("print names in Latin with accents, Cyrillic, Greek, Vietnamese, Arabic, Hebrew, Chinese, Japanese and Korean as typed (Arabic and Hebrew words right to left, UAX #9), and Thai and emoji as one U+FFFD each with the next word whole (pdftotext -raw) [README: Any name]", async () => {
     const r = reportOf(Object.values(NAMES).map((n) => pitcher(n, ["sinker", "slider"])));
     const pdf = join(tmp, "names.pdf");
     writeFileSync(pdf, await renderBullpenPdf(r));
@@ -63,7 +63,7 @@ describe("bullpen report pages", () => {
     expect(pages).toBeGreaterThanOrEqual(1 + 2 * names);
     // -raw: words in drawing order, right-to-left words read back logically (tests/support/bidi.ts)
     const text = pdfRawText(pdf);
-    for (const n of [NAMES.latin, NAMES.cyrillic, NAMES.greek, NAMES.vietnamese, NAMES.arabic, NAMES.hebrew, NAMES.chinese, NAMES.japanese]) {
+    for (const n of [NAMES.latin, NAMES.cyrillic, NAMES.greek, NAMES.vietnamese, NAMES.arabic, NAMES.hebrew, NAMES.chinese, NAMES.japanese, NAMES.korean]) {
       const shown = visualWordOrder(n);
       expect(text).toContain(`${shown} (right-handed): sinker 8, slider 8`);
       expect(text).toContain(`${shown}: movement and direction`);
@@ -71,7 +71,7 @@ describe("bullpen report pages", () => {
     }
     // UAX #9 for "محمد علي": the second word drawn first, at the left
     expect(visualWordOrder(NAMES.arabic)).toBe("علي محمد");
-    const lacked = `${MISSING_GLYPH.repeat(3)} ${MISSING_GLYPH} Karim`;
+    const lacked = `${MISSING_GLYPH.repeat(2)} ${MISSING_GLYPH} Karim`;
     expect(text).toContain(`${lacked} (right-handed): sinker 8, slider 8`);
     expect(text).toContain(`${lacked}: movement and direction`);
     // each name also heads its two charts, read word by word from the chart page
