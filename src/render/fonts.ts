@@ -31,6 +31,7 @@ import { dirname, join } from "node:path";
 import { inflateSync } from "node:zlib";
 import * as fontkit from "fontkit";
 import { BoundedCache } from "../../geometry/cache.js";
+import { visualOrder } from "./bidi.js";
 import { addNotice } from "./notices.js";
 import { typesetter, type FontWeight, type TextRun as TypesetRun, type TypesetFace } from "./typeset.js";
 
@@ -292,7 +293,12 @@ const text = typesetter<FontFace>({
 });
 
 export type TextRun = TypesetRun<FontFace>;
-export const { textRuns, visualRuns, printable, measureText, runsWidth, fontMetricsEm, wrapText } = text;
+export const { textRuns, printable, measureText, runsWidth, fontMetricsEm, wrapText } = text;
+
+/** `text` as runs in the order they are drawn from left to right (render/bidi.ts: UAX #9 for a left-to-right line). */
+export function visualRuns(text: string, weight: FontWeight = "normal"): TextRun[] {
+  return visualOrder(textRuns(text, weight));
+}
 
 /**
  * The outline of `text` set at `size` with its baseline starting at (x, y) (y down),

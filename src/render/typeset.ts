@@ -14,14 +14,7 @@
  * subsets, a face set may name fallback faces (other scripts' faces), asked for a
  * character none of the subsets holds.
  *
- * Right-to-left text (`visualRuns`): the base direction is always left to right, and
- * each maximal right-to-left stretch (Arabic or Hebrew letters, with the spaces and
- * punctuation between two of them) is shown right to left, word by word; each word
- * is laid out by its face, which shapes it (Arabic joining) and reverses its glyphs.
- * That is the result of the Unicode Bidirectional Algorithm (UAX #9, rules W1-W7,
- * N1-N2, I1, L2) for a left-to-right paragraph holding right-to-left words and no
- * digits between them; digits inside a right-to-left stretch (which UAX #9 keeps left
- * to right within it) end the stretch here, and brackets are not mirrored (L4).
+ * The order runs are drawn in (right-to-left words and numbers) is render/bidi.ts's.
  */
 import { BoundedCache } from "../../geometry/cache.js";
 
@@ -63,12 +56,6 @@ const graphemes = new Intl.Segmenter("en", { granularity: "grapheme" });
 // marks emoji sequences) and the non-characters
 // eslint-disable-next-line no-control-regex
 const CONTROL = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u200b\u200c\u200e\u200f\u202a-\u202e\u2060-\u2069\ufeff\ufffe\uffff]/g;
-
-// a right-to-left letter (bidi class R or AL): the Hebrew and Arabic scripts' letters and marks, not their digits
-const RTL_LETTER = /(?!\p{N})[\p{Script=Hebrew}\p{Script=Arabic}]/u;
-const RTL_LETTER_START = /^(?!\p{N})[\p{Script=Hebrew}\p{Script=Arabic}]/u;
-// a neutral for UAX #9 (whitespace, punctuation, symbols, U+FFFD); digits are not
-const NEUTRAL_START = /^[\p{Z}\p{P}\p{S}\t]/u;
 
 /** The text functions for one face set. */
 export function typesetter<F extends TypesetFace>(set: FaceSet<F>) {
@@ -198,64 +185,8 @@ export function typesetter<F extends TypesetFace>(set: FaceSet<F>) {
     return out;
   }
 
-  /**
-   * `text` as runs in the order they are drawn from left to right (see the header:
-   * right-to-left stretches reversed word by word, each right-to-left word its own run,
-   * which its face lays out right to left). The same runs as `textRuns` when the text
-   * holds no right-to-left letter; their widths always add up to the same total.
-   */
-  function visualRuns(text: string, weight: FontWeight = "normal"): TextRun<F>[] {
-    const runs = textRuns(text, weight);
-    if (!runs.some((r) => RTL_LETTER.test(r.text))) return runs;
-    // each grapheme with its face and its class: R (right-to-left letter), N (neutral) or L
-    const items: { face: F; text: string; cls: "R" | "N" | "L"; neutral: boolean }[] = [];
-    for (const r of runs) {
-      for (const { segment } of graphemes.segment(r.text)) {
-        const cls = RTL_LETTER_START.test(segment) ? "R" : NEUTRAL_START.test(segment) ? "N" : "L";
-        items.push({ face: r.face, text: segment, cls, neutral: cls === "N" });
-      }
-    }
-    // UAX #9 N1-N2 with sos = eos = L: neutrals between two R letters are R, all others L
-    for (let i = 0; i < items.length; ) {
-      if (items[i].cls !== "N") {
-        i++;
-        continue;
-      }
-      let j = i;
-      while (j < items.length && items[j].cls === "N") j++;
-      const cls = i > 0 && items[i - 1].cls === "R" && j < items.length && items[j].cls === "R" ? "R" : "L";
-      for (let k = i; k < j; k++) items[k].cls = cls;
-      i = j;
-    }
-    const out: TextRun<F>[] = [];
-    for (let i = 0; i < items.length; ) {
-      const face = items[i].face;
-      let j = i;
-      if (items[i].cls === "L") {
-        // a left-to-right stretch: consecutive graphemes of one face in one run
-        let piece = "";
-        while (j < items.length && items[j].cls === "L" && items[j].face === face) piece += items[j++].text;
-        out.push({ face, text: piece });
-        i = j;
-        continue;
-      }
-      // a right-to-left stretch: its words (letters of one face) and each neutral alone, last first
-      const stretch: { face: F; text: string; word: boolean }[] = [];
-      for (; j < items.length && items[j].cls === "R"; j++) {
-        const it = items[j];
-        const last = stretch[stretch.length - 1];
-        if (!it.neutral && last?.word && last.face === it.face) last.text += it.text;
-        else stretch.push({ face: it.face, text: it.text, word: !it.neutral });
-      }
-      for (let k = stretch.length - 1; k >= 0; k--) out.push({ face: stretch[k].face, text: stretch[k].text });
-      i = j;
-    }
-    return out;
-  }
-
   return {
     textRuns,
-    visualRuns,
     measureText,
     wrapText,
     /** `text` as it prints: NFC, no control characters, every grapheme the face lacks as MISSING_GLYPH. */

@@ -127,6 +127,25 @@ describe("the embedded face (Noto Sans from @fontsource/noto-sans)", () => {
     expect(visualRuns("Zoë Ярослава")).toEqual(textRuns("Zoë Ярослава"));
   });
 
+  it("orders numbers and brackets inside right-to-left text as UAX #9 does (hand-derived from its rules W2, W7, N0, N1, I1-I2, L2, L4)", () => {
+    const order = (t: string) => visualRuns(t).map((r) => r.text).join("|");
+    // European digits between Hebrew words: EN (W7 finds R before them, not L) at level 2 (I1), the spaces R by N1 (numbers count as R), so the number stays left to right inside the reversed stretch (L2)
+    expect(order("מכבי 2024 תל אביב")).toBe("אביב| |תל| |2024| |מכבי");
+    expect(order("מחנה אימון 2027")).toBe("2027| |אימון| |מחנה");
+    // Arabic-Indic digits after an Arabic word: AN (W2) at level 2, each digit its own run so no face reverses them
+    expect(order("نادي ٢٠٢٧")).toBe("٢|٠|٢|٧| |نادي");
+    // ... and alone in a left-to-right line: reversed twice by L2 (levels 2 and 1), so in typed order
+    expect(order("٢٠٢٧")).toBe("٢|٠|٢|٧");
+    // brackets around an Arabic word after an Arabic word: N0 gives them R, so they sit at level 1 and print mirrored (L4)
+    expect(order("محمد (علي)")).toBe("(|علي|)| |محمد");
+    // brackets around a Hebrew word inside English: N0 gives them the paragraph's L, unmirrored, in place
+    expect(order("abc (דוד) def")).toBe("abc (|דוד|) def");
+    // two punctuation marks between Hebrew words: R by N1, reversed one by one
+    expect(order("דוד?! לוי")).toBe("לוי| |!|?|דוד");
+    // a mirrored bracket is as wide as the one typed, so a line's measured width holds when drawn
+    for (const [a, b] of [["(", ")"], ["[", "]"], ["{", "}"], ["«", "»"], ["<", ">"]]) expect(measureText(a, 1)).toBeCloseTo(measureText(b, 1), 12);
+  });
+
   it("measures Arabic as pdfkit lays it out: our width of 'محمد علي' at 10 pt equals pdfkit's widthOfString in the same face (fontkit's shaping, both routes), to 1e-9 pt", () => {
     const doc = new PDFDocument({ size: [100, 100] });
     const face = scriptFace("arabic", "normal");
