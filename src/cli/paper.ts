@@ -33,7 +33,7 @@ export function registerPaper(y: Argv): Argv {
       "card",
       "print a grip card (PDF, or SVG with --svg, PNG with --png) or a sheet of cards: the ball in the pitcher's and the catcher's view, how to hold it in a player's words, and the grip beside the four-seam and two-seam holds",
       (c) =>
-        withCacheOption(withAirOptions(withScreenOptions(
+        withThreadsOption(withCacheOption(withAirOptions(withScreenOptions(
           withSamplerOptions(
             withPitchOptions(c)
               .option("candidate", textOption("which of the screen's candidates (1 = best) [default: 1]"))
@@ -46,7 +46,7 @@ export function registerPaper(y: Argv): Argv {
               .example("$0 card --demo --pitch-name 'Iris Talvela/sinker' --layout letter-4-cards-3x5", "a sheet of grip cards and the classic holds to cut out")
               .example("$0 card --demo --layout letter-2-cards-4x6", "a staff sheet: one card per pitch"),
           ),
-        ))),
+        ))), "for a staff sheet, one per core (at most 8) for 3 pitches or more, else none"),
       async (argv) => {
         const { parseCard, runCard } = await import("../jobs/paper.js");
         const job = parseCard(argv);

@@ -1,8 +1,9 @@
 /**
  * The paper jobs: a grip card (PDF, SVG or PNG), a sheet of cards (one pitch's grips
  * with the classic holds, or one card per pitch for a staff), the ranked atlas, the
- * clinic handout, and the sphere map as a picture. Screening goes through the one
- * shared path (pipeline.ts); the drawing is src/render/paper/.
+ * clinic handout, and the sphere map as a picture. One pitch is screened here; a
+ * staff sheet's pitches on the worker pool as the atlas's are (screenPool.ts); the
+ * drawing is src/render/paper/.
  */
 import { InputError } from "../io/errors.js";
 import { cardContent, cardScene, outOfReachContent, sheetScenes, type CardContent } from "../render/paper/card.js";
@@ -16,13 +17,15 @@ import { sphereMapScene } from "../render/sphereMapDrawing.js";
 import { fixed } from "../render/numbers.js";
 import type { ScreenReport } from "../screening/report.js";
 import { TOP_RANGE } from "../screening/screen.js";
-import { screenAll } from "./pipeline.js";
 import { buildModel, modelChoice } from "./request/model.js";
 import { samplerSettings } from "./request/settings.js";
+import { threadsChoice } from "./request/runtime.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { seamFor } from "../sampling/measure.js";
 import { mapValuesIn, parseScreen, screenOne, type ScreenedPitch, type ScreenJob } from "./screen.js";
 import { assertPrintable, checkNames, layoutOf } from "./paperRequest.js";
+import type { TopChoice } from "./screenJob.js";
+import { screenAllPooled } from "./screenPool.js";
 
 /** What a paper job produces. */
 export interface PaperOutput {
@@ -36,6 +39,11 @@ export type PictureFormat = "pdf" | "svg" | "png";
 
 export interface CardJob {
   readonly screen: ScreenJob;
+  /** The screen's request and top options: a worker thread builds the same job from them (screenPool.ts). */
+  readonly screenRequest: Request;
+  readonly top: TopChoice;
+  /** Worker threads for a staff sheet (--threads; "auto": screenPool.ts autoScreenThreads). */
+  readonly threads: number | "auto";
   readonly layout: Layout;
   readonly format: PictureFormat;
   readonly candidate: number;
@@ -57,12 +65,14 @@ export function parseCard(request: Request): CardJob {
     reference = r;
   }
   const perPage = layout.kind === "card" ? 1 : layout.grid!.columns * layout.grid!.rows;
-  const screen = parseScreen({ ...request, top: undefined }, { atLeast: Math.max(n, perPage) });
+  const screenRequest: Request = { ...request, top: undefined };
+  const top: TopChoice = { atLeast: Math.max(n, perPage) };
+  const screen = parseScreen(screenRequest, top);
   if (layout.kind === "card" && screen.pitches.length !== 1) {
     throw new InputError(`card takes one pitch for a card layout; the file has ${screen.pitches.length} (choose one with --pitch-name, or give a sheet layout for a staff sheet, one card per pitch)`);
   }
   checkNames(screen);
-  return { screen, layout, format, candidate: n, reference };
+  return { screen, screenRequest, top, threads: threadsChoice(request), layout, format, candidate: n, reference };
 }
 
 /** The one line `card` stops with when the wanted direction is out of reach. */
@@ -85,10 +95,13 @@ function sheetPages(layout: Layout, contents: readonly CardContent[]): Page[] {
 export async function runCard(job: CardJob): Promise<PaperOutput> {
   const { layout } = job;
   const s = job.screen.sampler;
-  const screened = job.screen.pitches.length === 1 ? [screenOne(job.screen, job.screen.pitches[0])] : screenAll(job.screen);
+  const reports =
+    job.screen.pitches.length === 1
+      ? [screenOne(job.screen, job.screen.pitches[0]).report]
+      : (await screenAllPooled(job.screen, job.screenRequest, job.top, job.threads)).map((p) => p.report);
   const contents: CardContent[] = [];
-  if (screened.length === 1) {
-    const { report } = screened[0];
+  if (reports.length === 1) {
+    const report = reports[0];
     if (job.reference !== undefined) {
       const o = report.references.find((r) => r.reference === job.reference)!;
       contents.push(cardContent(report, o, s.seamShape, "card1"));
@@ -104,16 +117,16 @@ export async function runCard(job: CardJob): Promise<PaperOutput> {
     }
   } else {
     // a staff sheet: one card per pitch, its best grip or, out of reach, what the seams can do instead
-    screened.forEach(({ report }, i) => {
+    reports.forEach((report, i) => {
       if (job.reference !== undefined) contents.push(cardContent(report, report.references.find((r) => r.reference === job.reference)!, s.seamShape, `p${i}`));
       else if (report.reach.outOfReach || !report.candidates.length) contents.push(outOfReachContent(report));
       else contents.push(cardContent(report, report.candidates[Math.min(job.candidate, report.candidates.length) - 1], s.seamShape, `p${i}`));
     });
   }
-  if (job.format === "svg") return { bytes: renderCardSvg(layout, contents[0]), format: "svg", pages: 1, pitches: screened.length };
-  if (job.format === "png") return { bytes: sceneToPng(cardScene(layout, contents[0])), format: "png", pages: 1, pitches: screened.length };
+  if (job.format === "svg") return { bytes: renderCardSvg(layout, contents[0]), format: "svg", pages: 1, pitches: reports.length };
+  if (job.format === "png") return { bytes: sceneToPng(cardScene(layout, contents[0])), format: "png", pages: 1, pitches: reports.length };
   const pages = layout.kind === "card" ? [cardPage(layout, contents[0])] : sheetPages(layout, contents);
-  return { bytes: await pdfOfPages(pages, contents[0].title), format: "pdf", pages: pages.length, pitches: screened.length };
+  return { bytes: await pdfOfPages(pages, contents[0].title), format: "pdf", pages: pages.length, pitches: reports.length };
 }
 
 /** The sphere map of one screened pitch as a PNG picture (what `screen --map-png` writes). */

@@ -106,4 +106,14 @@ describe("one worker pool", () => {
     expect(ref.subarray(0, 5).toString("latin1")).toBe("%PDF-");
     for (const f of ["two-cold.pdf", "two-warm.pdf"]) expect(readFileSync(join(dir, f)).equals(ref)).toBe(true);
   });
+
+  it("card: a staff sheet has the same PDF bytes on this thread (--threads 0) and on 2 worker threads [determinism: one code path, the same inputs]", () => {
+    const dir = fresh();
+    const cache = join(dir, "cache");
+    const args = (threads: string, out: string) => ["card", "--demo", "--grid", "8", "--layout", "letter-2-cards-4x6", "--threads", threads, "--cache", cache, "--out", join(dir, out)];
+    for (const [t, f] of [["2", "two.pdf"], ["0", "zero.pdf"]]) expect(runCli(args(t, f)).code).toBe(0);
+    const ref = readFileSync(join(dir, "zero.pdf"));
+    expect(ref.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+    expect(readFileSync(join(dir, "two.pdf")).equals(ref)).toBe(true);
+  });
 });
