@@ -25,7 +25,7 @@ export function registerExplain(y: Argv): Argv {
           .option("columns", textOption("batch: map our column keys to your headers, key=Header,... (e.g. speed_kmh=Velo,move_up_in=IVB)"))
           .option("out", textOption("where the batch results go (.csv or .json; - for standard output); for one pitch, also write its JSON here"))
           .option("format", textOption("csv or json for the batch output [default: from --out's extension; csv on standard output or a device]"))
-          .option("on-bad-row", textOption("skip: report a bad row's line and go on; stop: stop there with exit status 2 (rows already done are kept) [default: skip]"))
+          .option("on-bad-row", textOption("skip: report a bad row's line and go on; stop: stop there with exit status 2, writing nothing [default: skip]"))
           .option("summary", textOption("batch: per pitcher and pitch type, one seam orientation fitted to all its throws (.json or .csv)"))
           .option("report", textOption("batch: the bullpen report, a PDF per pitcher (.pdf)"))
           .option("report-svg", textOption("batch: also each of the report's charts as SVG, in this folder"))
@@ -92,8 +92,13 @@ export function registerExplain(y: Argv): Argv {
           },
           progress: (done, read) => bar.tick(done, read.bytesRead, read.totalBytes),
         });
+        if (summary.stoppedAt !== undefined) {
+          // bad input writes no file and replaces none: the rows before the bad one go too
+          sink.abort();
+          const printed = sink.target.kind === "stdout" ? `; ${summary.done} row(s) before it already printed` : "";
+          throw new InputError(`stopped at ${summary.stoppedAt} (--on-bad-row stop: nothing written${printed})`);
+        }
         if (job.format === "json") await sink.write(json.batchJsonClose());
-        // also after a stop: the rows before the bad one are the output
         await sink.commit();
       } catch (err) {
         sink.abort();
@@ -140,9 +145,6 @@ export function registerExplain(y: Argv): Argv {
           charts.forEach((p, i) => writeOutput(p!, built.pngs[i].png));
           wrote.push(`${built.pngs.length} PNG chart(s) in ${quote(job.reportPng)}`);
         }
-      }
-      if (summary.stoppedAt !== undefined) {
-        throw new InputError(`stopped at ${summary.stoppedAt} (${summary.done} row(s) before it written to ${wrote.join(", ")})`);
       }
       say(
         `explained ${summary.done} pitch(es) in ${seconds.toFixed(1)} s (${Math.round(summary.done / Math.max(0.001, seconds))} rows/s${summary.threads ? `, ${summary.threads} worker threads` : ""})${summary.skipped ? `, skipped ${summary.skipped} bad row(s)` : ""}; wrote ${wrote.join(", ")}\n`,

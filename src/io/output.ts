@@ -22,8 +22,7 @@
  * the old contents (a rename gives the name a new inode).
  *
  * The streamed form buffers up to FLUSH_BYTES and writes in order. `commit()` makes
- * what was written so far the output (also when a batch stops on a bad row: the
- * rows before it are kept); `abort()` throws it away.
+ * what was written the output; `abort()` throws it away (a batch stopped by a bad row).
  */
 import { close, closeSync, constants, fchmodSync, fchownSync, fstat, fstatSync, fsync, fsyncSync, open, openSync, renameSync, statSync, write, writeSync, type Stats } from "node:fs";
 import { dirname } from "node:path";

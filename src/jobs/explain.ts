@@ -339,7 +339,7 @@ interface Group {
 
 /**
  * Streams the batch: rows in blocks through the runner, out through `events` in file
- * order; a bad row is skipped or stops the run (job.onBadRow), the rows before it kept.
+ * order; a bad row is skipped or stops the run (job.onBadRow: the caller then writes nothing).
  */
 export async function runExplainBatch(job: ExplainBatchJob, opened: { reader: CsvReader; columns: ColumnMap }, events: BatchEvents): Promise<BatchSummary> {
   const { reader, columns } = opened;

@@ -176,14 +176,17 @@ describe("seam-atlas explain, a batch", () => {
     expect(Math.abs(png.readUInt32BE(20) - Math.round((1600 * 470) / 520))).toBeLessThanOrEqual(1);
   }, 120_000);
 
-  it("with --on-bad-row stop, stops at the bad row with exit 2 and keeps the rows before it", () => {
+  it("with --on-bad-row stop, stops at the bad row with exit 2 and writes nothing, replacing no file [README, Bad input]", () => {
     const csv = join(tmp, "session2.csv");
     writeFileSync(csv, "hand,speed_mph,spin_rpm,tilt,move_arm_in,move_up_in\nright,92,2150,1:45,16,12\nright,92,2150,25:00,16,12\nright,92,2150,1:45,16,12\n");
     const out = join(tmp, "session2.json");
-    const r = runCli(["explain", "--csv-in", csv, "--out", out, "--on-bad-row", "stop", "--cache", CACHE]);
+    const summary = join(tmp, "session2-summary.json");
+    writeFileSync(out, "an earlier run's output\n");
+    const r = runCli(["explain", "--csv-in", csv, "--out", out, "--summary", summary, "--on-bad-row", "stop", "--cache", CACHE]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/stopped at .*line 3/);
+    expect(r.stderr).toMatch(/stopped at .*line 3.*nothing written/);
     expect(r.stderr.trim().split("\n")).toHaveLength(1);
-    expect(JSON.parse(readFileSync(out, "utf8")).rows).toHaveLength(1);
+    expect(readFileSync(out, "utf8")).toBe("an earlier run's output\n");
+    expect(existsSync(summary)).toBe(false);
   });
 });

@@ -4,7 +4,7 @@
  * replaced file's mode kept, whole files when two runs write one file, the batch
  * CSV's edge cases, and sphere maps named per pitch. Each check names its source.
  */
-import { chmodSync, lstatSync, mkdtempSync, openSync, closeSync, constants, readdirSync, readFileSync, readlinkSync, statSync, symlinkSync, writeFileSync } from "node:fs";
+import { chmodSync, existsSync, lstatSync, mkdtempSync, openSync, closeSync, constants, readdirSync, readFileSync, readlinkSync, statSync, symlinkSync, writeFileSync } from "node:fs";
 import { readFile } from "node:fs/promises";
 import { execFileSync, spawn } from "node:child_process";
 import { tmpdir } from "node:os";
@@ -135,16 +135,15 @@ describe("explain's batch CSV", () => {
     expect(text).toContain("\n5,'=HYPERLINK(1),sinker,");
   });
 
-  it("--on-bad-row stop: exit 2, one line naming the row, and the rows before it kept, whole [README, explain]", () => {
+  it("--on-bad-row stop: exit 2, one line naming the row, nothing written and no temporary file left [README, explain; Bad input]", () => {
     const csv = join(tmp, "stop.csv");
     writeFileSync(csv, `${HEADER}\nA,sinker,right,92,2150,1:45,16.5,12.5\nB,sinker,right,92,2150,1:45,16.5,NaN\nC,sinker,right,92,2150,1:45,16.5,12.5\n`);
     const out = join(tmp, "stop.json");
     const r = runCli(["explain", "--csv-in", csv, "--out", out, "--grid", "15", "--on-bad-row", "stop"]);
     expect(r.code).toBe(2);
     expect(r.stderr.trim().split("\n")).toHaveLength(1);
-    expect(r.stderr).toMatch(/^seam-atlas: stopped at --csv-in ".*stop\.csv" line 3, column "move_up_in": "NaN" is not a number; expected a number of inches \(1 row\(s\) before it written to ".*stop\.json"\)\n$/);
-    const doc = JSON.parse(readFileSync(out, "utf8")); // RFC 8259: a whole document
-    expect(doc.rows.map((x: { input: { pitch: { pitcher: string } } }) => x.input.pitch.pitcher)).toEqual(["A"]);
+    expect(r.stderr).toMatch(/^seam-atlas: stopped at --csv-in ".*stop\.csv" line 3, column "move_up_in": "NaN" is not a number; expected a number of inches \(--on-bad-row stop: nothing written\)\n$/);
+    expect(existsSync(out)).toBe(false);
     expect(temps(tmp)).toEqual([]);
   });
 });
