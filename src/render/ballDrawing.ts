@@ -174,17 +174,19 @@ export function ballScene(model: BallModel, options: BallDrawingOptions = {}): S
   }
   draw.circle().attr({ cx: disc.centerXPx, cy: disc.centerYPx, r: disc.radiusPx, fill: "none", stroke: S.coverOutline, "stroke-width": 1.2 });
   const marks = draw.group().attr({ class: "sa-marks" });
-  if (ov.fingerPads?.length) drawFingerPads(marks, model.view, disc, ov.fingerPads, digits);
-  if (ov.fingers?.length) drawFingers(marks, model.view, disc, ov.fingers, digits);
-  if (ov.landmarks) drawLandmarks(marks, model.view, disc, model.seamShape, ov.landmarks);
+  // every mark's words in one layer over all the marks, each on its halo: no arrow or pad covers a letter
+  const labels = draw.group().attr({ class: "sa-labels" });
+  if (ov.fingerPads?.length) drawFingerPads(marks, model.view, disc, ov.fingerPads, digits, labels);
+  if (ov.fingers?.length) drawFingers(marks, model.view, disc, ov.fingers, digits, labels);
+  if (ov.landmarks) drawLandmarks(marks, model.view, disc, model.seamShape, ov.landmarks, labels);
   if (ov.spinAxis) drawSpinAxis(under, marks, model.view, disc, ov.spinAxis, digits);
-  if (ov.push) drawPushArrow(marks, model.view, disc, ov.push, digits);
+  if (ov.push) drawPushArrow(marks, model.view, disc, ov.push, digits, labels);
 
   if (model.title) addText(draw, sizePx / 2, 21, model.title, { sizePx: 15, fill: S.ink, anchor: "middle", weight: "bold", className: "sa-title" });
   if (model.sides) {
     const y = disc.centerYPx + disc.radiusPx + 12;
-    addText(draw, disc.centerXPx - disc.radiusPx * 1.02, y, model.sides.left, { sizePx: 11, fill: S.ink, className: "sa-side" });
-    addText(draw, disc.centerXPx + disc.radiusPx * 1.02, y, model.sides.right, { sizePx: 11, fill: S.ink, anchor: "end", className: "sa-side" });
+    addText(draw, disc.centerXPx - disc.radiusPx * 1.02, y, model.sides.left, { sizePx: 11, fill: S.ink, haloPx: 2.5, className: "sa-side" });
+    addText(draw, disc.centerXPx + disc.radiusPx * 1.02, y, model.sides.right, { sizePx: 11, fill: S.ink, anchor: "end", haloPx: 2.5, className: "sa-side" });
   }
   if (model.caption) {
     addText(draw, sizePx / 2, titlePx + sizePx + 14, model.caption, { sizePx: 11, fill: S.ink, anchor: "middle", className: "sa-caption" });

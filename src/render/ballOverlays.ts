@@ -152,7 +152,7 @@ export function drawFlowBand(g: G, view: View, disc: DiscPlacement, overlay: Flo
  * direction from the centre, which traces the limb arc inside the cap for caps
  * smaller than a hemisphere; one facing away entirely is a faded dashed outline.
  */
-export function drawFingerPads(g: G, view: View, disc: DiscPlacement, pads: readonly FingerPad[], digits: number): void {
+export function drawFingerPads(g: G, view: View, disc: DiscPlacement, pads: readonly FingerPad[], digits: number, labels: G = g): void {
   const group = g.group().attr({ class: "sa-pads" });
   const r = disc.radiusPx;
   for (const pad of pads) {
@@ -181,15 +181,13 @@ export function drawFingerPads(g: G, view: View, disc: DiscPlacement, pads: read
       }
       group.path().attr({ d: polylinePath(xy, true, digits), ...style });
     }
-    addText(group, centre.xPx, centre.yPx + 4, pad.label, {
-      sizePx: 11, fill: S.padOutline, anchor: "middle", weight: "bold", haloPx: 2.5,
-      opacity: centre.depthPx > 0 ? 1 : S.hiddenOpacity, className: "sa-pad-label",
-    });
+    // the letter at full strength over every mark: a pad on the far side says so by its dashed outline
+    addText(labels, centre.xPx, centre.yPx + 4, pad.label, { sizePx: 11, fill: S.padOutline, anchor: "middle", weight: "bold", haloPx: 2.5, className: "sa-pad-label" });
   }
 }
 
 /** The push as an arrow from the ball's centre, 1.3 ball radii long when it lies across the line of sight. */
-export function drawPushArrow(g: G, view: View, disc: DiscPlacement, push: PushArrow, digits: number): void {
+export function drawPushArrow(g: G, view: View, disc: DiscPlacement, push: PushArrow, digits: number, labels: G = g): void {
   const u = unit3(push.direction);
   const [x, y, z] = push.frame === "view" ? u : [dot3(u, view.right), dot3(u, view.up), dot3(u, view.toViewer)];
   const group = g.group().attr({ class: "sa-push" });
@@ -208,18 +206,20 @@ export function drawPushArrow(g: G, view: View, disc: DiscPlacement, push: PushA
     const tx = cx + len * ux, ty = cy + len * uy;
     group.path().attr({ d: polylinePath([cx, cy, tx - 8 * ux, ty - 8 * uy], false, digits), stroke: S.push, "stroke-width": 3, fill: "none" });
     group.polygon().attr({ points: pointsAttribute(arrowHead(tx, ty, ux, uy, 13), digits), fill: S.push });
-    // beside the shaft near its head (above it for a sideways arrow), text running away from the shaft
-    const side = uy > 0 ? 1 : -1;
+    // beside the shaft on its upper side, text running away from it: clear of the side words
+    // under the ball; an arrow pointing steeply down has it halfway along, inside the ball
+    const side = Math.abs(ux) < 0.35 ? (uy > 0 ? 1 : -1) : ux > 0 ? -1 : 1;
     const ox = -side * 11 * uy, oy = side * 11 * ux;
-    labelX = cx + 0.8 * len * ux + ox;
-    labelY = cy + 0.8 * len * uy + oy + 4;
+    const along = uy > 0.6 ? 0.55 : 0.8;
+    labelX = cx + along * len * ux + ox;
+    labelY = cy + along * len * uy + oy + 4;
     anchor = ox > 3 ? "start" : ox < -3 ? "end" : "middle";
   }
-  if (push.label) addText(group, labelX, labelY, push.label, { sizePx: 11, fill: S.push, anchor, weight: "bold", haloPx: 2.5 });
+  if (push.label) addText(labels, labelX, labelY, push.label, { sizePx: 11, fill: S.push, anchor, weight: "bold", haloPx: 2.5 });
 }
 
 /** Dots and names of the landmarks (geometry/landmarks.ts) that face the viewer; `names` picks some (case-insensitive). */
-export function drawLandmarks(g: G, view: View, disc: DiscPlacement, b: number, names: readonly string[] | "all"): void {
+export function drawLandmarks(g: G, view: View, disc: DiscPlacement, b: number, names: readonly string[] | "all", labels: G = g): void {
   const wanted = names === "all" ? null : new Set(names.map((n) => n.toLowerCase()));
   const group = g.group().attr({ class: "sa-landmarks" });
   for (const l of findLandmarks(b)) {
@@ -227,7 +227,7 @@ export function drawLandmarks(g: G, view: View, disc: DiscPlacement, b: number, 
     const p = projectPoint(view, disc, l.direction);
     if (!(p.depthPx > 0)) continue;
     group.circle().attr({ cx: p.xPx, cy: p.yPx, r: 2.2, fill: S.landmark });
-    addText(group, p.xPx + 4, p.yPx - 4, l.name, { sizePx: 9, fill: S.landmark, haloPx: 2 });
+    addText(labels, p.xPx + 4, p.yPx - 4, l.name, { sizePx: 9, fill: S.landmark, haloPx: 2 });
   }
 }
 
@@ -254,7 +254,7 @@ const FINGER_BODY_IN = 1.1;
  * away from the viewer are left out; a pad wholly on the far side shows as a faded
  * dashed outline, so the thumb beneath the ball still reads in a view from above.
  */
-export function drawFingers(g: G, view: View, disc: DiscPlacement, fingers: readonly FingerMark[], digits: number): void {
+export function drawFingers(g: G, view: View, disc: DiscPlacement, fingers: readonly FingerMark[], digits: number, labels: G = g): void {
   const group = g.group().attr({ class: "sa-fingers" });
   const r = disc.radiusPx;
   const pxPerIn = r / BALL_RADIUS_IN;
@@ -316,8 +316,7 @@ export function drawFingers(g: G, view: View, disc: DiscPlacement, fingers: read
       }
       group.path().attr({ d: polylinePath(far, true, digits), fill: "none", stroke: S.padOutline, "stroke-width": 1, "stroke-dasharray": "3 2", opacity: 0.55, class: "sa-pad-far" });
     }
-    addText(group, centre.xPx, centre.yPx + 4, f.label, {
-      sizePx: 11, fill: S.padOutline, anchor: "middle", weight: "bold", haloPx: 3, opacity: centre.depthPx > 0 ? 1 : 0.7, className: "sa-pad-label",
-    });
+    // the letter at full strength over every mark: a finger on the far side says so by its dashed outline
+    addText(labels, centre.xPx, centre.yPx + 4, f.label, { sizePx: 11, fill: S.padOutline, anchor: "middle", weight: "bold", haloPx: 3, className: "sa-pad-label" });
   }
 }

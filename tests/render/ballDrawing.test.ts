@@ -248,8 +248,11 @@ describe("ball drawing: overlays appear only when asked for", () => {
 
   it("labels only the landmarks named (case-insensitive), and only where they face the viewer", () => {
     const one = renderBallSvg({ seamShape: b, view: waistView, overlays: { landmarks: ["TIP-B1", "waist-A", "waist-B"] } });
-    const m = /<g class="sa-landmarks">([\s\S]*?)<\/g>/.exec(one)!;
-    expect(texts(m[1]).sort()).toEqual(["tip-B1", "waist-A"]);
+    // the dots in the landmarks' group, their names in the one layer of words over every mark
+    const dots = /<g class="sa-landmarks">([\s\S]*?)<\/g>/.exec(one)!;
+    expect(dots[1].match(/<circle /g)).toHaveLength(2);
+    const words = /<g class="sa-labels">([\s\S]*?)<\/g>/.exec(one)!;
+    expect(texts(words[1]).sort()).toEqual(["tip-B1", "waist-A"]);
   });
 
   it("leaves the far-side seam out when asked, and draws it faded by default", () => {

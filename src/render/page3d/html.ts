@@ -13,8 +13,8 @@ export const PAGE_TITLE = "seam-atlas workbench";
 
 /** The safety line every page carries (README "Safety first", in the page's words). */
 export const CAUTION_TEXT =
-  "Pitching can injure. A change of grip or arm action changes the stress on the arm: ramp up throwing gradually, " +
-  "and get qualified coaching and medical advice (a licensed athletic trainer or physician). Follow your league's rules " +
+  "Pitching can injure. A change of grip or arm action changes the stress on the arm: keep to an arm-care programme, " +
+  "ramp up throwing gradually, stop at any pain, and get qualified coaching and medical advice (a licensed athletic trainer or physician). Follow your league's rules " +
   "on the ball and never alter it. These figures model the air flow; they are not advice for any one athlete, and local " +
   "rules and licensed practice come first.";
 

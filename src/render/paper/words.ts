@@ -17,8 +17,8 @@ import type { FingerReport, HoldTurnReport, OrientationReport, ScreenReport } fr
 
 /** The safety caution every card, sheet, atlas and handout carries (our wording). */
 export const CAUTION_SHORT =
-  "Caution: pitching can injure. A new grip changes arm stress - build up throwing gradually, " +
-  "get qualified coaching and medical advice, follow league rules on the ball and never alter it. Local rules and licensed practice come first.";
+  "Caution: pitching can injure. Keep to an arm-care programme, build a new grip up gradually and stop at any pain. " +
+  "Get qualified coaching and medical advice. Follow league rules on the ball and never alter it.";
 
 export const CAUTION_LONG = [
   "Pitching can injure the shoulder, elbow and back, and the risk grows with fatigue, volume and sudden changes.",
