@@ -80,12 +80,20 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
     nestScene(card, c.drawings.pitcher, p.x, p.y, p.w, p.h - keyH);
     nestScene(card, c.drawings.catcher, q.x, q.y, q.w, q.h - keyH);
     setText(card, CARD_KEY, { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: small, fill: "#333333" });
-    // whole sentences only: on a small card the last ones (where the axis goes, then the thumb) give way
-    const style = { sizePt: f.sizePt, leading: 1.2, paragraphGap: 0.25 };
+    // every sentence, the type a point and a half smaller at most, before the last ones
+    // (where the axis goes, which the technical line also says; then the thumb) give way
     const box = pt(b.howTo);
+    const fits = (lines: readonly string[], sizePt: number) => textHeight(lines.join("\n"), box.w, { sizePt, leading: 1.2, paragraphGap: 0.25 }) <= box.h;
+    const smallest = Math.max(MIN_TEXT_PT, f.sizePt - 1.5);
     let lines = [...c.howTo];
-    while (lines.length > 2 && textHeight(lines.join("\n"), box.w, style) > box.h) lines = lines.slice(0, -1);
-    setText(card, lines.join("\n"), box, style);
+    let size = f.sizePt;
+    for (;;) {
+      size = f.sizePt;
+      while (size > smallest && !fits(lines, size)) size = Math.max(smallest, size - 0.25);
+      if (fits(lines, size) || lines.length <= 2) break;
+      lines = lines.slice(0, -1);
+    }
+    setText(card, lines.join("\n"), box, { sizePt: size, leading: 1.2, paragraphGap: 0.25 });
   } else {
     // no grip to show: the words take the drawings' place
     const p = pt(b.viewPitcher), h = pt(b.howTo);

@@ -102,24 +102,48 @@ export interface TableColumn {
   readonly align?: "start" | "end";
 }
 
+/** The smallest type a table shrinks to so that its cells fit (points). */
+export const MIN_TABLE_PT = 6;
+
 /**
- * A table: a bold header row, then the rows, each cell one line (cut with an
- * ellipsis when too wide), hairlines under the header; one row (`emphasise`) can
- * be set in bold on a tint. Returns the height used, points.
+ * A table: a bold header row, then the rows, each cell one line; each column as wide
+ * as its widest cell and the room left shared by the columns' shares, the type made
+ * smaller (to MIN_TABLE_PT at least) when the cells need more than the box, and a cell
+ * still too wide cut with an ellipsis; hairlines under the header; one row
+ * (`emphasise`) can be set in bold on a tint. Returns the height used, points.
  */
-export function setTable(parent: SceneNode, columns: readonly TableColumn[], rows: readonly (readonly string[])[], box: BoxPt, sizePt: number, emphasise = -1): number {
+export function setTable(parent: SceneNode, columns: readonly TableColumn[], rows: readonly (readonly string[])[], box: BoxPt, size: number, emphasise = -1): number {
   const total = columns.reduce((s, c) => s + c.share, 0);
+  const GAP = 3;
+  // each column as wide as its widest cell, the room left shared out by the columns' shares;
+  // when the cells need more than the box, the type smaller (to MIN_TABLE_PT at least)
+  const natural = (sz: number) =>
+    columns.map((c, k) => {
+      let w = measureText(c.title, sz, "bold");
+      rows.forEach((r, i) => (w = Math.max(w, measureText(r[k], sz, i === emphasise ? "bold" : "normal"))));
+      return w + GAP;
+    });
+  let sizePt = size;
+  let need = natural(sizePt);
+  let sum = need.reduce((a, b) => a + b, 0);
+  if (sum > box.w) {
+    sizePt = Math.max(Math.min(size, MIN_TABLE_PT), (0.999 * sizePt * box.w) / sum);
+    need = natural(sizePt);
+    sum = need.reduce((a, b) => a + b, 0);
+  }
+  const spare = Math.max(0, box.w - sum);
+  const widths = columns.map((c, k) => (sum > box.w ? (box.w * c.share) / total : need[k] + (spare * c.share) / total));
   const pitch = sizePt * 1.3;
   const ascent = fontMetricsEm().ascent * sizePt;
   const xs: number[] = [];
   let x = box.x;
-  for (const c of columns) {
+  for (const w of widths) {
     xs.push(x);
-    x += (box.w * c.share) / total;
+    x += w;
   }
   const cell = (text: string, k: number, y: number, weight: FontWeight, fill: string) => {
     const c = columns[k];
-    const w = (box.w * c.share) / total - 3;
+    const w = widths[k] - GAP;
     let t = text;
     if (measureText(t, sizePt, weight) > w) {
       while (t && measureText(`${t}${ELLIPSIS}`, sizePt, weight) > w) t = t.slice(0, -1);
@@ -135,7 +159,8 @@ export function setTable(parent: SceneNode, columns: readonly TableColumn[], row
   rows.forEach((row, i) => {
     if (y - ascent + sizePt > box.y + box.h + 1e-6) return;
     if (i === emphasise) {
-      parent.rect().attr({ x: box.x - 1, y: y - ascent - 1, width: box.w + 2, height: sizePt * 1.25, fill: "#f1ece2", stroke: "none" });
+      // from just over the capitals to just under the descenders: clear of the row above and its rule
+      parent.rect().attr({ x: box.x - 1, y: y - 0.9 * sizePt, width: box.w + 2, height: 1.2 * sizePt, fill: "#f1ece2", stroke: "none" });
     }
     row.forEach((text, k) => cell(text, k, y, i === emphasise ? "bold" : "normal", INK));
     y += pitch;
