@@ -34,10 +34,16 @@ export const SEAM_PICTURE =
   "What you see on the ball: each of the two cover pieces is shaped like a dumbbell. Where the seam bends round the end of a piece it makes a horseshoe; " +
   "across the middle of each piece (its narrow waist) two seams run close together; the ends of the pieces are wide, smooth lobes.";
 
-/** The classic holds as coaches teach them (common practice, no source). */
+/** The classic holds as coaches teach them (common practice, no source): where the fingers go. */
+export const HOLD_GRIP: Record<string, string> = {
+  "four-seam": "four-seam hold: index and middle fingers across the wide seams",
+  "two-seam": "two-seam hold: index and middle fingers along the two close seams, where they run nearest each other across the narrow waist",
+};
+
+/** The classic holds with the seam passes that name them, which hold for a ball spinning end over end (no gyro); a card gives its own pitch's count. */
 export const HOLD_WORDS: Record<string, string> = {
-  "four-seam": "four-seam hold: index and middle fingers across the wide seams, so four seams pass the front of the ball each turn",
-  "two-seam": "two-seam hold: index and middle fingers along the two close seams, where they run nearest each other across the narrow waist, so two seams pass the front each turn",
+  "four-seam": `${HOLD_GRIP["four-seam"]}, so four seams pass the front of the ball each turn of pure backspin`,
+  "two-seam": `${HOLD_GRIP["two-seam"]}, so two seams pass the front each turn of pure backspin`,
 };
 
 export const WANT_WORDS: Record<string, string> = { arm: "arm-side", glove: "glove-side", up: "upward", down: "downward", any: "any" };
@@ -138,7 +144,7 @@ export function holdLines(r: ScreenReport, o: OrientationReport): string[] {
   const kind = g.kind === "breaking" ? "Breaking-ball grip" : g.kind === "changeup" ? "Changeup grip" : "Fastball grip";
   // a classic hold is a fastball hold, told as coaches teach it; a grip gets its pitch kind's pattern and the turn to it
   const lines = o.reference
-    ? [`The ${HOLD_WORDS[o.reference] ?? o.reference}; thumb beneath.`]
+    ? [`The ${HOLD_GRIP[o.reference] ?? o.reference}; thumb beneath. With this pitch's spin, ${o.crossingsPerRevolution === 1 ? "1 seam passes" : `${o.crossingsPerRevolution} seams pass`} the front of the ball each turn.`]
     : [`${kind}, ${g.pattern}${g.kindFromName ? "" : ` (the name "${r.input.pitch.name}" names no pitch kind, so the fastball pattern is used)`}.`];
   if (!o.reference && o.fromHold) lines.push(turnSentence(o.fromHold));
   lines.push(...o.fingers.map(fingerSentence));
