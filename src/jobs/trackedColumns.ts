@@ -219,19 +219,15 @@ export function readTrackedRow(record: Readonly<Record<string, string>>, columns
   const speedKey = pick("speed")!;
   const speed = cells.number(speedKey);
   const kmh = speedKey === "speed_kmh";
-  raw.speedMph = kmh ? speed / KMH_PER_MPH : speed;
+  const speedMph = kmh ? speed / KMH_PER_MPH : speed;
+  raw.speedMph = speedMph;
   // the pitch's own checks, with messages naming this row's columns
   const keyOfField = (field: string) => (field === "speedMph" ? speedKey : (FIELD_KEY[field] ?? field));
-  let built;
-  try {
-    built = buildPitch(raw, (field) => cells.where(keyOfField(field)), (field) => colName(keyOfField(field)));
-  } catch (err) {
-    if (kmh && err instanceof InputError && /speedMph .* is outside/.test(err.message)) {
-      const [lo, hi] = SPEED_RANGE_MPH.map((mph) => Math.round(mph * KMH_PER_MPH * 10) / 10);
-      throw new InputError(`${cells.where(speedKey)}: ${speed} km/h is out of range; expected ${lo} to ${hi} km/h`);
-    }
-    throw err;
+  if (kmh && !(speedMph >= SPEED_RANGE_MPH[0] && speedMph <= SPEED_RANGE_MPH[1])) {
+    const [lo, hi] = SPEED_RANGE_MPH.map((mph) => Math.round(mph * KMH_PER_MPH * 10) / 10);
+    throw new InputError(`${cells.where(speedKey)}: ${speed} km/h is out of range; expected ${lo} to ${hi} km/h`);
   }
+  const built = buildPitch(raw, (field) => cells.where(keyOfField(field)), (field) => colName(keyOfField(field)));
   const inches = (key: string) => {
     const x = cells.number(key);
     const cm = key.endsWith("_cm");

@@ -203,7 +203,7 @@ describe("seam-atlas calibrate", () => {
     ["a gyro of 90 deg, with --on-bad-row stop", () => ["--lab", writeLab("gyro.csv", ROWS.slice(0, 5), ["0.1,0.2,0.9,90,,80,2000,0.1,0.1"]), "--on-bad-row", "stop"], /column gyro_deg: 90 deg is out of range/],
     ["a sigma of 0", () => ["--lab", lab, "--sigma-n", "0"], /--sigma-n 0 N is out of range/],
     ["the output over the input", () => ["--lab", lab, "--fit", "scale", "--residuals", lab], /--residuals ".*lab.csv" is the same file as the input --lab/],
-    ["a tracked row with an unknown hand", () => tracked("hand.csv", TRACKED_HEADER, "middle,90,2200,1:30,1,0,0,1,1"), /line 3, column "hand": "hand" is "middle"; expected right, left, R or L/],
+    ["a tracked row with an unknown hand", () => tracked("hand.csv", TRACKED_HEADER, "middle,90,2200,1:30,1,0,0,1,1"), /line 3, column "hand": "middle" is not a throwing hand; expected right, left, R or L/],
     // the tracked file is read by explain's columns (README, Calibrating: tracked file), so its messages are explain's
     ["a tracked row with efficiency but no gyro sign", () => tracked("eff.csv", "hand,speed_mph,spin_rpm,tilt,efficiency_pct,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "R,90,2200,1:30,90,1,0,0,1,1"),
       /line 3, column "efficiency_pct": spin efficiency 90 % has no gyro sign; expected column "gyro_sign" pos .* or neg, or a signed column "gyro_deg" \(stopped there/],
@@ -216,7 +216,7 @@ describe("seam-atlas calibrate", () => {
     ["a tracked tilt that is no clock reading, under a mapped header", () => [...tracked("clock.csv", "hand,speed_mph,spin_rpm,Axis,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "right,90,2200,13:30,1,0,0,1,1"), "--columns", "tilt=Axis"],
       /line 3, column "Axis" \(tilt\): tilt "13:30" must have hours 0-12/],
     ["a tracked tilt_deg of 360", () => tracked("deg.csv", "hand,speed_mph,spin_rpm,tilt_deg,axis_x,axis_y,axis_z,seam_arm_in,seam_up_in", "right,90,2200,360,1,0,0,1,1"),
-      /line 3, column "tilt_deg": tiltDeg 360 is out of range; expected degrees clockwise from 12:00, at least 0 and below 360/],
+      /line 3, column "tilt_deg": 360 is out of range; expected degrees clockwise from 12:00, at least 0 and below 360/],
     ["a tracked axis cell that is not a number", () => tracked("axis.csv", TRACKED_HEADER, "right,90,2200,1:30,1,x,0,1,1"), /line 3, column "axis_y": "x" is not a decimal number/],
     ["a tracked zero axis", () => tracked("zero-axis.csv", TRACKED_HEADER, "right,90,2200,1:30,0,0,0,1,1"), /line 3: the axis \(0, 0, 0\) is a zero vector/],
     ["a tracked spin of 0", () => tracked("spin0.csv", TRACKED_HEADER, "right,90,0,1:30,1,0,0,1,1"), /line 3, column "spin_rpm": 0 rpm; expected a spin above 0/],

@@ -87,7 +87,7 @@ describe("seam-atlas screen", () => {
     ["wrong units", staff(`{ "name": "sinker", "speedKph": 148, "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedKph" is not read; give speedMph \(mph\)/],
     ["a number as text", staff(`{ "name": "sinker", "speedMph": "92 mph", "spinRpm": 2150, "tilt": "1:45" }`), /line 7 .*"speedMph" must be a number of mph/],
     ["a bad tilt", staff(`{ "name": "sinker", "speedMph": 92, "spinRpm": 2150, "tilt": "13:45" }`), /line 7 .*tilt "13:45"/],
-    ["an unknown hand", `{ "name": "x", "hand": "both", "speedMph": 92, "spinRpm": 2150, "tilt": "1:45" }`, /line 1 .*"hand" is "both"; expected right, left, R or L/],
+    ["an unknown hand", `{ "name": "x", "hand": "both", "speedMph": 92, "spinRpm": 2150, "tilt": "1:45" }`, /line 1 .*: "both" is not a throwing hand; expected right, left, R or L/],
   ];
   for (const [what, text, message] of badFiles) {
     it(`rejects a pitch file with ${what}: one line naming the field and line, exit 2`, () => {
@@ -102,8 +102,8 @@ describe("seam-atlas screen", () => {
 
   const badFlags: [string, string[], RegExp][] = [
     ["a missing spin", ["--hand", "right", "--speed", "92", "--tilt", "1:45"], /--spin is missing/],
-    ["an unknown hand", ["--hand", "both", "--speed", "92", "--spin", "2150", "--tilt", "1:45"], /"hand" is "both"/],
-    ["a speed out of range", ["--hand", "right", "--speed", "200", "--spin", "2150", "--tilt", "1:45"], /speedMph 200 is outside 30 to 110 mph/],
+    ["an unknown hand", ["--hand", "both", "--speed", "92", "--spin", "2150", "--tilt", "1:45"], /^seam-atlas: --hand "both" is not a throwing hand; expected right, left, R or L$/m],
+    ["a speed out of range", ["--hand", "right", "--speed", "200", "--spin", "2150", "--tilt", "1:45"], /^seam-atlas: --speed 200 is out of range; expected 30 to 110 mph$/m],
     ["gyro and efficiency together", [...SINKER, "--efficiency", "90"], /--gyro or --efficiency, not both/],
     ["an unknown pitch name", ["--demo", "--pitch-name", "knuckler"], /--pitch-name "knuckler" is not in .*expected one of/],
     ["a bad rank", [...SINKER, "--rank", "best"], /--rank "best" is not one of blend, strength, robust/],

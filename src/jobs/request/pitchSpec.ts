@@ -75,6 +75,8 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string, name
     if (OTHER_UNITS[key]) throw new InputError(`${where(key)}: field "${key}" is not read; give ${OTHER_UNITS[key]}`);
     throw new InputError(`${where(key)}: unknown field "${key}"; expected ${PITCH_FIELDS.join(", ")}`);
   }
+  // "--speed -92 is ..." for a flag; in a file or a CSV its place names the field: 'p.json line 4 (speedMph): 200 is ...', 'line 3, column "speed_mph": 200 is ...'
+  const bad = (field: string, rest: string) => new InputError(where(field) === named(field) ? `${named(field)} ${rest}` : `${where(field)}: ${rest}`);
   const text = (field: string, fallback?: string): string => {
     const v = raw[field];
     if (v === undefined) {
@@ -97,16 +99,16 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string, name
   };
   const oneOf = (field: string, allowed: readonly string[], fallback?: string): string => {
     const v = text(field, fallback);
-    if (!allowed.includes(v)) throw new InputError(`${where(field)}: "${field}" is "${v}"; expected one of ${allowed.join(", ")}`);
+    if (!allowed.includes(v)) throw bad(field, `${quote(v)} is not one of ${allowed.join(", ")}`);
     return v;
   };
   const speedMph = num("speedMph", "mph");
   if (!(speedMph >= SPEED_RANGE_MPH[0] && speedMph <= SPEED_RANGE_MPH[1])) {
-    throw new InputError(`${where("speedMph")}: speedMph ${speedMph} is outside ${SPEED_RANGE_MPH[0]} to ${SPEED_RANGE_MPH[1]} mph`);
+    throw bad("speedMph", `${speedMph} is out of range; expected ${SPEED_RANGE_MPH[0]} to ${SPEED_RANGE_MPH[1]} mph`);
   }
   const spinRpm = num("spinRpm", "rpm");
   if (!(spinRpm >= SPIN_RANGE_RPM[0] && spinRpm <= SPIN_RANGE_RPM[1])) {
-    throw new InputError(`${where("spinRpm")}: spinRpm ${spinRpm} is outside ${SPIN_RANGE_RPM[0]} to ${SPIN_RANGE_RPM[1]} rpm`);
+    throw bad("spinRpm", `${spinRpm} is out of range; expected ${SPIN_RANGE_RPM[0]} to ${SPIN_RANGE_RPM[1]} rpm`);
   }
   if (raw.tilt !== undefined && raw.tiltDeg !== undefined) throw new InputError(`${where("tiltDeg")}: give tilt (a clock reading) or tiltDeg (degrees), not both`);
   let tilt: string;
@@ -115,7 +117,7 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string, name
   if (raw.tiltDeg !== undefined) {
     tiltDeg = num("tiltDeg", "degrees clockwise from 12:00");
     if (!(tiltDeg >= 0 && tiltDeg < TILT_DEG_MAX)) {
-      throw new InputError(`${where("tiltDeg")}: tiltDeg ${tiltDeg} is out of range; expected degrees clockwise from 12:00, at least 0 and below ${TILT_DEG_MAX}`);
+      throw bad("tiltDeg", `${tiltDeg} is out of range; expected degrees clockwise from 12:00, at least 0 and below ${TILT_DEG_MAX}`);
     }
     tiltRad = tiltDeg * DEG;
     tilt = formatClock(angleToClock(tiltRad));
@@ -138,7 +140,7 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string, name
   let efficiencyPct: number;
   if (raw.efficiencyPct !== undefined) {
     efficiencyPct = num("efficiencyPct", "percent");
-    if (!(efficiencyPct > 0 && efficiencyPct <= 100)) throw new InputError(`${where("efficiencyPct")}: efficiencyPct ${efficiencyPct} must be above 0 and at most 100 percent`);
+    if (!(efficiencyPct > 0 && efficiencyPct <= 100)) throw bad("efficiencyPct", `${efficiencyPct} is out of range; expected above 0 and at most 100 percent`);
     let sign: 1 | -1 = 1;
     if (raw.gyroSign === undefined) {
       if (efficiencyPct < 100) {
@@ -149,19 +151,19 @@ export function buildPitch(raw: RawPitch, where: (field: string) => string, name
     } else {
       const word = text("gyroSign");
       const s = GYRO_SIGN_WORDS[word.trim().toLowerCase()];
-      if (s === undefined) throw new InputError(`${where("gyroSign")}: ${named("gyroSign")} ${quote(word)} is not a sign; expected pos or neg`);
+      if (s === undefined) throw bad("gyroSign", `${quote(word)} is not a sign; expected pos or neg`);
       sign = s;
     }
     gyroDeg = (sign * gyroFromEfficiency(efficiencyPct / 100)) / DEG;
-    if (!(Math.abs(gyroDeg) < 90)) throw new InputError(`${where("efficiencyPct")}: efficiencyPct ${efficiencyPct} gives a gyro of 90 degrees; expected above 0 percent`);
+    if (!(Math.abs(gyroDeg) < 90)) throw bad("efficiencyPct", `${efficiencyPct} gives a gyro of 90 degrees; expected above 0 percent`);
   } else {
     gyroDeg = num("gyroDeg", "degrees", 0);
-    if (!(gyroDeg > -90 && gyroDeg < 90)) throw new InputError(`${where("gyroDeg")}: gyroDeg ${gyroDeg} must be strictly between -90 and 90 degrees`);
+    if (!(gyroDeg > -90 && gyroDeg < 90)) throw bad("gyroDeg", `${gyroDeg} is out of range; expected strictly between -90 and 90 degrees`);
     efficiencyPct = 100 * Math.cos(gyroDeg * DEG);
   }
   const handText = text("hand");
   const hand = HAND_WORDS[handText.trim().toLowerCase()];
-  if (hand === undefined) throw new InputError(`${where("hand")}: "hand" is ${quote(handText)}; expected right, left, R or L`);
+  if (hand === undefined) throw bad("hand", `${quote(handText)} is not a throwing hand; expected right, left, R or L`);
   const echo = {
     name: text("name", "pitch"),
     pitcher: text("pitcher", ""),
