@@ -16,8 +16,11 @@
  *    the wanted direction as a share of the strongest seam movement anywhere.
  * 4. Candidates: cells that beat their neighbours, one per orbit of the four rotations
  *    (a mirror image is a different grip for this model: it reverses the Magnus part),
- *    refined off the grid by a pattern search, merged when a rotation maps one within
- *    MERGE_RAD of another, shown in one canonical image.
+ *    each kept only when no better one lies within the merge radius (a rotation
+ *    counted: the larger of MERGE_RAD, the grid spacing and the release scatter, since a
+ *    grip inside the delivery's own scatter of a better one is that grip), refined off
+ *    the grid by a pattern search and merged again the same way, shown in one
+ *    canonical image.
  * 5. Each listed grip (candidates and the reference holds) is flown in full
  *    (pitchFlight.ts flyPitch, the same flight `flight` makes): its seam movement and
  *    score are the flight's. Robustness: the linear score under release scatter of the
@@ -178,7 +181,7 @@ export interface ScreenResult {
   readonly scores: Float64Array;
   /** The sampler's occupancy map (seam occupancy, for the full sphere-map output), made on first use. */
   readonly occupancy: SphereMap;
-  /** Distinct local maxima found before the top-N cut. */
+  /** Local maxima of the map on the grid, one per orbit of the seam's rotations, none within the merge radius of a better one: the distinct best grips, whatever `top`. */
   readonly maximaFound: number;
 }
 
@@ -423,13 +426,20 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings, onProgress?:
     if (isMax) maxima.push(i);
   }
   maxima.sort((p, q) => scores[q] - scores[p]);
-  const seeds = maxima.slice(0, settings.top + 3);
+  const mergeRad = Math.max(MERGE_RAD, settings.gridSpacingRad, settings.spreadRad);
+  const cell = (i: number): Vec3 => [grid.points[3 * i], grid.points[3 * i + 1], grid.points[3 * i + 2]];
+  const distinct: number[] = [];
+  for (const i of maxima) if (!distinct.some((j) => symmetricAngle(cell(j), cell(i)) < mergeRad)) distinct.push(i);
+  // the pool ranked is the same for every --top up to the default, so a shorter list is the
+  // first grips of the default one (the atlas's four are the screen's first four)
+  const pool = Math.max(settings.top, DEFAULT_TOP);
+  const seeds = distinct.slice(0, pool + 3);
 
   const refined: { axis: Vec3; score: number }[] = [];
   for (const i of seeds) {
-    const r = refine(ctx, [grid.points[3 * i], grid.points[3 * i + 1], grid.points[3 * i + 2]], scores[i], settings.gridSpacingRad / 2);
+    const r = refine(ctx, cell(i), scores[i], settings.gridSpacingRad / 2);
     const axis = canonicalAxis(r.axis);
-    const twin = refined.find((x) => symmetricAngle(x.axis, axis) < Math.max(MERGE_RAD, settings.gridSpacingRad));
+    const twin = refined.find((x) => symmetricAngle(x.axis, axis) < mergeRad);
     if (twin) {
       if (r.score > twin.score) {
         twin.axis = axis;
@@ -440,12 +450,12 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings, onProgress?:
   refined.sort((p, q) => q.score - p.score);
   if (onProgress) {
     // one step for the sweep, one for each grip and classic hold flown
-    const total = 1 + Math.min(refined.length, settings.top + 2) + findReferenceAxes(seam).length;
+    const total = 1 + Math.min(refined.length, pool + 2) + findReferenceAxes(seam).length;
     let done = 1;
     onProgress(done, total, "sweep");
     ctx.flown = () => onProgress(++done, total, "grips");
   }
-  const described = refined.slice(0, settings.top + 2).map((r) => describe(ctx, r.axis));
+  const described = refined.slice(0, pool + 2).map((r) => describe(ctx, r.axis));
   described.sort((p, q) => q.rankScore - p.rankScore || q.score - p.score);
   const references = findReferenceAxes(seam).map((r) => describe(ctx, canonicalAxis(r.axis), r.name));
   const reach = reachOf(pitch.want, armSideM, verticalM, [...described, ...references]);
@@ -468,6 +478,6 @@ export function screenPitch(pitch: Pitch, settings: ScreenSettings, onProgress?:
     get occupancy(): SphereMap {
       return (occupancy ??= computeSphereMap(seam, pitch.gyroRad, settings.band, grid));
     },
-    maximaFound: refined.length,
+    maximaFound: distinct.length,
   };
 }

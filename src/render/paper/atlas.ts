@@ -166,7 +166,7 @@ function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: numbe
   const rows = [...(r.reach.outOfReach ? [] : r.candidates.map((o) => compareRow(`grip ${o.rank}`, o))), ...r.references.map((o) => compareRow(`${o.reference} hold`, o))];
   y += setText(s, COMPARE_CAPTION, { ...nb, y, h: f.sizePt * 3 }, { sizePt: f.sizePt - 1.5, fill: "#444444" }).heightPt + f.sizePt * 0.3;
   y += setTable(s, COMPARE_COLUMNS(pp.want), rows, { ...nb, y, h: nb.y + nb.h - y }, f.sizePt - 1) + f.sizePt * 0.4;
-  setText(s, `${r.grid.count.toLocaleString("en-US")} spin-axis positions ${r.input.settings.gridSpacingDeg}\u00b0 apart; ${r.maximaFound} distinct best grips found; ranked by ${RANK_WORDS[r.input.settings.rank]}.`, { ...nb, y, h: nb.y + nb.h - y }, { sizePt: f.sizePt - 1.5, fill: "#555555" });
+  setText(s, `${r.grid.count.toLocaleString("en-US")} spin-axis positions ${r.input.settings.gridSpacingDeg}\u00b0 apart; ${r.maximaFound} distinct local maxima on the map; ranked by ${RANK_WORDS[r.input.settings.rank]}.`, { ...nb, y, h: nb.y + nb.h - y }, { sizePt: f.sizePt - 1.5, fill: "#555555" });
   return page;
 }
 
