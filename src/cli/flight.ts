@@ -1,6 +1,6 @@
 /** `seam-atlas flight`: a pitch with a seam orientation flown to the plate, its movement split into Magnus and seam parts. */
 import type { Argv } from "yargs";
-import { textOption, withAirOptions, withPitchOptions, withSamplerOptions } from "./options.js";
+import { textOption, withAirOptions, withCacheOption, withPitchOptions, withSamplerOptions, withScreenChoiceOptions } from "./options.js";
 import { planRun, print, writeOutput } from "./output.js";
 
 export function registerFlight(y: Argv): Argv {
@@ -8,12 +8,13 @@ export function registerFlight(y: Argv): Argv {
     "flight",
     "fly a pitch with a seam orientation to the plate: plate location, time, approach angles, movement as the trade reads it (induced vertical and horizontal break) and from release, split into Magnus, seam and drag parts",
     (c) =>
-      withAirOptions(
+      withScreenChoiceOptions(withCacheOption(withAirOptions(
         withSamplerOptions(
           withPitchOptions(c)
             .option("axis", textOption("spin axis on the ball: X,Y,Z, a landmark name, or 12.5N,45E"))
             .option("candidate", textOption("use the screen's candidate N for this pitch instead of --axis"))
             .option("reference", textOption("use a reference hold instead of --axis: four-seam or two-seam"))
+
             .option("air", textOption("standard (the air options apply) or none (a vacuum check)", "standard"))
             .option("release-height-ft", textOption("release height above the ground, ft", "6"))
             .option("release-side-ft", textOption("release point toward the arm side of the rubber's middle, ft", "1.5"))
@@ -31,7 +32,7 @@ export function registerFlight(y: Argv): Argv {
             .example("$0 flight --hand right --speed 92 --spin 2150 --tilt 1:45 --gyro 10 --candidate 1", "the screen's best grip, in inches")
             .example("$0 flight --hand right --speed 94 --spin 2350 --tilt 12:45 --axis waist-A --elevation-ft 5200", "a four-seam hold at altitude"),
         ),
-      ),
+      ))),
     async (argv) => {
       const { parseFlight, runFlight } = await import("../jobs/flight.js");
       const { inputFiles } = await import("../jobs/request/inputs.js");

@@ -43,13 +43,29 @@ export function withSamplerOptions<T>(y: Argv<T>) {
 }
 
 /** The screen's grid, scatter, ranking and fingers. */
+/** The screen's own options: what each means and its default. */
+const SCREEN_OPTIONS: readonly (readonly [name: string, describe: string, fallback: string])[] = [
+  ["grid", `spacing of the axis-position grid on the ball, deg (${GRID_SPACING_RANGE_DEG[0]} to ${GRID_SPACING_RANGE_DEG[1]})`, String(DEFAULT_GRID_SPACING_DEG)],
+  ["spread", `release scatter of the axis on the ball, deg per direction (${SPREAD_RANGE_DEG[0]} to ${SPREAD_RANGE_DEG[1]})`, String(DEFAULT_SPREAD_DEG)],
+  ["rank", "rank by strength (score), robust (10th-percentile score) or blend (their mean)", "blend"],
+  ["finger-spacing", "centre-to-centre spacing of the index and middle pads, inches", String(DEFAULT_FINGER_SPACING_IN)],
+];
+
 export function withScreenOptions<T>(y: Argv<T>) {
-  return y
-    .option("grid", text(`spacing of the axis-position grid on the ball, deg (${GRID_SPACING_RANGE_DEG[0]} to ${GRID_SPACING_RANGE_DEG[1]})`, String(DEFAULT_GRID_SPACING_DEG)))
-    .option("spread", text(`release scatter of the axis on the ball, deg per direction (${SPREAD_RANGE_DEG[0]} to ${SPREAD_RANGE_DEG[1]})`, String(DEFAULT_SPREAD_DEG)))
-    .option("rank", text("rank by strength (score), robust (10th-percentile score) or blend (their mean)", "blend"))
-    .option("finger-spacing", text("centre-to-centre spacing of the index and middle pads, inches", String(DEFAULT_FINGER_SPACING_IN)))
-    .option("window-ft", text("where the trade's movement window starts, ft from home plate (10 to 55)", "50"));
+  let out = y;
+  for (const [name, describe, fallback] of SCREEN_OPTIONS) out = out.option(name, text(describe, fallback));
+  return out.option("window-ft", text("where the trade's movement window starts, ft from home plate (10 to 55)", "50"));
+}
+
+/**
+ * The screen's options for a command that screens only when asked (flight with
+ * --candidate or --reference): the same words, and no yargs default, so that a flag
+ * given where no screen is made can be refused.
+ */
+export function withScreenChoiceOptions<T>(y: Argv<T>) {
+  let out = y;
+  for (const [name, describe, fallback] of SCREEN_OPTIONS) out = out.option(name, text(`with --candidate or --reference, the screen's ${describe} [default: ${fallback}]`));
+  return out.option("top", text("with --candidate, how many candidates the screen lists, as screen takes it [default: 5]"));
 }
 
 /** The air. */

@@ -12,13 +12,15 @@ import type { DragModel } from "../physics/drag.js";
 import { flyPitch, tradeArmSide, type PitchFlight } from "../physics/pitchFlight.js";
 import type { SeamModel } from "../physics/seamModel/model.js";
 import type { TradeBreak } from "../physics/tradeMovement.js";
-import { DEFAULT_SCREEN_OPTIONS, DEFAULT_TOP, screenPitch, TOP_RANGE } from "../screening/screen.js";
+import { DEFAULT_TOP, screenPitch, TOP_RANGE, type CoefficientMapSource } from "../screening/screen.js";
 import type { PitchEcho } from "../screening/report.js";
 import type { Pitch } from "../screening/pitch.js";
 import { pitchesFromRequest } from "./request/pitch.js";
 import { jobScreenSettings } from "./screenJob.js";
 import { buildModel, modelChoice } from "./request/model.js";
-import { airConditions, dragModel, launchAngles, releasePoint, samplerSettings, spinDecay, windowStart, type SamplerSettings } from "./request/settings.js";
+import { cachedScreenMaps } from "./mapCache.js";
+import { cacheChoice } from "./request/runtime.js";
+import { airConditions, dragModel, launchAngles, releasePoint, samplerSettings, screenOptions, spinDecay, windowStart, type SamplerSettings, type ScreenOptions } from "./request/settings.js";
 import { oneOf, parseAxis, parseInteger, parseNumber, type Request } from "./request/values.js";
 
 export interface FlightJob {
@@ -39,7 +41,12 @@ export interface FlightJob {
   readonly phaseRad?: number;
   readonly windowStartM: number;
   readonly trajectory: boolean;
+  /** The screen --candidate and --reference read (its grid, scatter, ranking and finger spacing, as `screen` takes them), with its maps' cache. */
+  readonly screen: ScreenOptions & { readonly top: number; readonly maps?: CoefficientMapSource };
 }
+
+/** The screen's options flight takes for --candidate and --reference; with --axis there is no screen, so they are refused. */
+const SCREEN_FLAGS = ["grid", "spread", "rank", "finger-spacing", "top", "cache"] as const;
 
 export interface FlightOutcome {
   readonly job: FlightJob;
@@ -61,11 +68,17 @@ export function parseFlight(request: Request): FlightJob {
     const a = parseAxis("axis", request.axis, sampler.seamShape);
     axisRequest = { kind: "axis", vector: unit3(a.vector) };
     axisGiven = a.given;
+    const stray = SCREEN_FLAGS.find((k) => request[k] !== undefined);
+    if (stray) throw new InputError(`--${stray} goes with --candidate N or --reference (the screen they come from); with --axis there is no screen, so leave it out`);
   } else if (request.candidate !== undefined) {
     const n = parseInteger("candidate", request.candidate, "a candidate number from the screen, 1 or more");
     if (n < 1 || n > TOP_RANGE[1]) throw new InputError(`--candidate ${n} is out of range; expected 1 to ${TOP_RANGE[1]}`);
     axisRequest = { kind: "candidate", n };
     axisGiven = `candidate ${n}`;
+    if (request.top !== undefined) {
+      const top = parseInteger("top", request.top, "a whole number of candidates");
+      if (n > top) throw new InputError(`--candidate ${n} is beyond --top ${top}; expected a candidate from 1 to ${top}`);
+    }
   } else {
     const name = oneOf("reference", request.reference, ["four-seam", "two-seam"] as const);
     axisRequest = { kind: "reference", name };
@@ -87,7 +100,21 @@ export function parseFlight(request: Request): FlightJob {
     phaseRad: request.phase === undefined ? undefined : parseNumber("phase", request.phase, "degrees (the ball's phase at release)") * DEG,
     windowStartM: windowStart(request),
     trajectory: request.trajectory === true,
+    screen: { ...screenOptions(request), top: screenTop(request, axisRequest), ...mapsOf(request) },
   };
+}
+
+/** The screen's list length: --top as `screen` reads it (default 5), long enough for the candidate asked for. */
+function screenTop(request: Request, ask: FlightJob["axisRequest"]): number {
+  const given = request.top === undefined ? DEFAULT_TOP : parseInteger("top", request.top, "a whole number of candidates");
+  if (!(given >= TOP_RANGE[0] && given <= TOP_RANGE[1])) throw new InputError(`--top ${given} is out of range; expected ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
+  return ask.kind === "candidate" ? Math.max(ask.n, given) : given;
+}
+
+/** The screen's coefficient maps kept in the request's cache folder (--cache; none: computed each run). */
+function mapsOf(request: Request): { maps?: CoefficientMapSource } {
+  const folder = cacheChoice(request);
+  return folder === null ? {} : { maps: cachedScreenMaps(folder) };
 }
 
 export function runFlight(job: FlightJob): FlightOutcome {
@@ -95,12 +122,8 @@ export function runFlight(job: FlightJob): FlightOutcome {
   const ask = job.axisRequest;
   if (ask.kind === "axis") axis = ask.vector;
   else {
-    // the screen of this pitch as `screen` makes it (default settings; this flight's air and window)
-    const screen = screenPitch(job.pitch, {
-      ...DEFAULT_SCREEN_OPTIONS,
-      ...jobScreenSettings(job),
-      top: ask.kind === "candidate" ? Math.min(Math.max(ask.n, DEFAULT_TOP), TOP_RANGE[1]) : DEFAULT_TOP,
-    });
+    // the screen of this pitch as `screen` makes it with the same options (this flight's air and window)
+    const screen = screenPitch(job.pitch, { ...job.screen, ...jobScreenSettings(job) });
     if (ask.kind === "candidate") {
       if (ask.n > screen.candidates.length) throw new InputError(`--candidate ${ask.n} is out of range; the screen found ${screen.candidates.length} candidate(s)`);
       axis = screen.candidates[ask.n - 1].axis;

@@ -59,6 +59,15 @@ describe("seam-atlas flight", () => {
     expect(flight.movement.trade.seam.clock).toBe(c.seamMovement.clock);
   });
 
+  it("flies the candidate N of the screen the user ran: the same --rank, --grid and --top give the same axis as screen's #N (one model, one list)", () => {
+    const opts = ["--rank", "robust", "--grid", "3", "--top", "4"];
+    const screen = JSON.parse(runCli(["screen", ...SINKER, ...opts, "--json"]).stdout);
+    for (const n of [1, 3]) {
+      const flight = JSON.parse(runCli(["flight", ...SINKER, ...opts, "--candidate", String(n), "--json"]).stdout);
+      expect(flight.axis.latLon).toBe(screen.candidates[n - 1].latLon.text);
+    }
+  });
+
   it("turns the ball from a given release phase, reports the seam part's spread over phases, and adds the path at least every 5 ms with --trajectory", () => {
     const slow = ["--hand", "right", "--speed", "80", "--spin", "60", "--tilt", "12:00"];
     const a = JSON.parse(runCli(["flight", ...slow, "--axis", "20N,30E", "--phase", "0", "--json"]).stdout);
