@@ -2,7 +2,7 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { runCli } from "../support/cli.js";
+import { ROOT, runCli } from "../support/cli.js";
 
 const tmp = mkdtempSync(join(tmpdir(), "seam-atlas-screen-"));
 const SINKER = ["--hand", "right", "--speed", "92", "--spin", "2150", "--tilt", "1:45", "--gyro", "10", "--want", "arm"];
@@ -117,4 +117,23 @@ describe("seam-atlas screen", () => {
       expect(r.stderr.trim().split("\n")).toHaveLength(1);
     });
   }
+});
+
+describe("README's table of what the defaults give", () => {
+  it("prints the demo staff's numbers exactly as screen --demo --json rounds them: toward the wanted direction, the size in brackets [README, The seam-force model; one number in every output]", () => {
+    const readme = readFileSync(join(ROOT, "README.md"), "utf8");
+    const rows = readme.split("\n").filter((l) => /^\| [RL]HP /.test(l));
+    const j = JSON.parse(runCli(["screen", "--demo", "--json"]).stdout);
+    expect(rows).toHaveLength(j.pitches.length);
+    const signed = (x: number) => `${x >= 0 ? "+" : "-"}${Math.abs(x).toFixed(1)}`;
+    const cell = (o: { score: number; seamMovement: { armSideIn: number; verticalIn: number } }) => `${signed(o.score)} (${Math.hypot(o.seamMovement.armSideIn, o.seamMovement.verticalIn).toFixed(1)}`;
+    j.pitches.forEach((p: { input: { pitch: { name: string; want: string } }; candidates: never[]; references: { reference: string }[] }, i: number) => {
+      const cells = rows[i].split("|").map((c) => c.trim());
+      expect(cells[1]).toContain(p.input.pitch.name);
+      expect(cells[2]).toBe(p.input.pitch.want);
+      expect(cells[3].startsWith(cell(p.candidates[0]))).toBe(true);
+      expect(cells[4].startsWith(cell(p.references.find((r) => r.reference === "two-seam") as never))).toBe(true);
+      expect(cells[5].startsWith(cell(p.references.find((r) => r.reference === "four-seam") as never))).toBe(true);
+    });
+  });
 });
