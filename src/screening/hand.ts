@@ -9,7 +9,8 @@
  *   the point of that circle farthest behind the ball's centre, opposite the flight.
  *   Fingers lie side by side along the spin axis, `fingerSpacingIn` apart centre to
  *   centre along the surface (default 0.8 in, about one finger's width), fingertips
- *   pointing up the back of the ball (the field's up, as the hand is behind the ball).
+ *   pointing the way they pull the ball's back round (T x w: up the back of the ball
+ *   for backspin, across it for side spin, where the hand is on the ball's side).
  * - The pitch kind sets the pattern (`FINGER_PATTERNS`):
  *     fastball  index and middle straddle T; thumb beneath the ball
  *               (four-seam, two-seam, sinker, cutter)
@@ -209,7 +210,11 @@ export function placeFingers(
   const fieldToBall = transposeRotation(ballToField);
   const toBall = (f: Vec3) => applyRotation(fieldToBall, f);
   const halfWidthRad = SEAM_HALF_WIDTH_IN / BALL_RADIUS_IN;
-  const pad = (finger: Finger, p: Vec3, working: boolean, pointingField: Vec3 = [0, 0, 1]): FingerPad => {
+  // the working fingertips point the way they pull the ball's back round, against the
+  // surface's motion at T: T x w, up the back for backspin, sideways for side spin (so the
+  // fingers lying side by side along the spin axis never lie one over the other)
+  const pull = unit3(cross3(tf, wf));
+  const pad = (finger: Finger, p: Vec3, working: boolean, pointingField: Vec3 = pull): FingerPad => {
     const region = coverRegion(cover, p, halfWidthRad);
     const pointing = tangentToward(p, toBall(pointingField));
     return { finger, direction: p, pointing, seamDistanceIn: region.seamDistanceRad * BALL_RADIUS_IN, region, working };

@@ -66,7 +66,7 @@ describe("grip card", () => {
     if (turn.angleDeg >= 3) expect(text).toContain(`Start from the ${turn.hold} hold and turn the ball ${turn.angleDeg.toFixed(0)}°`);
     else expect(text).toContain(`This is the ${turn.hold} hold`);
     expect(text).toMatch(/Index: (on|in|inside|just)/);
-    expect(text).toMatch(/your view \(fingertips up\)/);
+    expect(text).toMatch(/your view, from behind the ball/);
     expect(text).toContain("the catcher's view");
   });
 

@@ -3,7 +3,8 @@ import { BALL_RADIUS_IN } from "../../geometry/ball.js";
 import { coverModel } from "../../geometry/coverRegions.js";
 import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { sampleSeam } from "../../geometry/seamSamples.js";
-import { angleBetween, dot3, rotateAbout, unit3, type Vec3 } from "../../geometry/vec.js";
+import { clockToAngle, parseClock } from "../../geometry/clock.js";
+import { angleBetween, cross3, dot3, rotateAbout, unit3, type Vec3 } from "../../geometry/vec.js";
 import { applyRotation, PAD_SIZE_IN, pitchKindFromName, placeFingers, transposeRotation } from "../../src/screening/hand.js";
 import { turnFromHold } from "../../src/screening/holdTurn.js";
 import { pitchFrame } from "../../src/screening/pitch.js";
@@ -27,6 +28,29 @@ describe("hand model: the finger pattern of each pitch kind (common practice, no
 
   it("takes the fastball pattern, and says so, for a name that names no kind", () => {
     expect(pitchKindFromName("the hard one")).toEqual({ kind: "fastball", fromName: false });
+  });
+
+  it("points the working fingertips the way they pull the ball round: against the surface's motion at the trailing point (omega x T), up the back for 12:00 backspin, across the back for 9:00 side spin, and always across the line of the pads (side by side, never one over the other) [rigid rotation: v = omega x r]", () => {
+    for (const [tilt, name] of [["12:00", "four-seam"], ["9:00", "slider"], ["1:45", "sinker"], ["4:30", "curveball"]] as const) {
+      for (const gyroDeg of [0, 25]) {
+        const f = pitchFrame(sinkerPitch({ name, tiltRad: clockToAngle(parseClock(tilt)), gyroRad: (gyroDeg * Math.PI) / 180 }));
+        const kind = pitchKindFromName(name).kind;
+        const g = placeFingers(AXIS, f, seam, cover, SPACING_IN, kind);
+        const toField = (v: Vec3) => applyRotation(g.ballToField, v);
+        const [a, b] = g.pads.filter((p) => p.working && p.finger !== "thumb");
+        const tField = toField(g.trailingPoint);
+        const surface = cross3(f.spinAxis, tField);
+        for (const p of [a, b]) {
+          // against the surface's motion: the fingertip's direction has a negative part along omega x T
+          expect(dot3(toField(p.pointing), surface)).toBeLessThan(-0.9);
+        }
+        // across the line joining the two pads (within 5 deg of square)
+        const line = unit3([b.direction[0] - a.direction[0], b.direction[1] - a.direction[1], b.direction[2] - a.direction[2]]);
+        expect(Math.abs(dot3(line, a.pointing))).toBeLessThan(Math.sin((5 * Math.PI) / 180));
+        if (gyroDeg === 0 && tilt === "12:00") expect(toField(a.pointing)[2]).toBeGreaterThan(0.99);
+        if (gyroDeg === 0 && tilt === "9:00") expect(Math.abs(toField(a.pointing)[2])).toBeLessThan(0.1);
+      }
+    }
   });
 
   it("puts a fastball's index and middle pads one spacing apart across the trailing point, index on the glove side, thumb at the bottom", () => {

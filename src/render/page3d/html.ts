@@ -159,7 +159,7 @@ ${team ? `<p class="team">${team}</p>\n` : ""}<p class="caution" role="note"><st
 <button type="button" id="${ids.release}">Ball at release</button>
 <label class="check"><input type="checkbox" id="${ids.showFingers}" checked> Finger pads</label>
 </div>
-<p class="hint">The band, the flight arrow, the spin axis and the push stay fixed to the air; the ball turns inside them, slowed down to a few turns a minute, carrying the finger pads of the grip where they sit at release. "Ball at release" stops the turn where the hand lets go; seen from behind the pitcher it is the ball in your hand, fingertips up. The push arrow's length is the push's size against the largest in the list.</p>
+<p class="hint">The band, the flight arrow, the spin axis and the push stay fixed to the air; the ball turns inside them, slowed down to a few turns a minute, carrying the finger pads of the grip where they sit at release. "Ball at release" stops the turn where the hand lets go; seen from behind the pitcher it is the ball in your hand at release. The push arrow's length is the push's size against the largest in the list.</p>
 <ul class="legend" aria-label="Key">
 <li><span class="swatch sw-cover"></span>cover</li>
 <li><span class="swatch sw-seam"></span>seam outside the band</li>

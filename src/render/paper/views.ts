@@ -2,9 +2,10 @@
  * The two ball drawings of a grip card, from a grip in the screen report
  * (src/screening/report.ts: its axis, release rotation and finger pads):
  *   "your view"       the pitcher's own view at release: behind the ball, looking
- *                     toward the plate, field up at the top, so the fingertips point
- *                     up the ball's back and the thumb is beneath; the fingers at their
- *                     real pad sizes (src/screening/hand.ts PAD_SIZE_IN);
+ *                     toward the plate, field up at the top; the fingertips point the
+ *                     way they pull the ball round (up its back for backspin) and the
+ *                     thumb is beneath; the fingers at their real pad sizes
+ *                     (src/screening/hand.ts PAD_SIZE_IN);
  *   "catcher's view"  from the plate, looking back at the pitcher: the face of the
  *                     ball that comes at the hitter, the fingers behind it.
  * Both show the spin axis, the seam push at the plate (its direction) and which side
@@ -47,7 +48,7 @@ export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: n
       seamShape,
       view: viewFromDirections(b([0, 1, 0]), up),
       overlays: { spinAxis: o.axis, fingers, ...pushOverlay("push") },
-      caption: "your view (fingertips up)",
+      caption: "your view, from behind the ball",
       sides: armOnPitchersRight ? { left: "glove side", right: "arm side" } : { left: "arm side", right: "glove side" },
     },
     { sizePx, seamPoints: CARD_SEAM_POINTS, legend: false, idPrefix: `${idPrefix}-p` },
