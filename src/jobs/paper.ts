@@ -13,7 +13,7 @@ import { figureScene, handoutFigures, renderHandoutPdf, type Clinic } from "../r
 import type { Layout } from "../render/paper/layouts.js";
 import { nearestReachable, WANT_WORDS } from "../render/paper/words.js";
 import { sceneToPng } from "../render/png.js";
-import { sphereMapScene } from "../render/sphereMapDrawing.js";
+import { mapMarksIn, scaleRange, sphereMapScene } from "../render/sphereMapDrawing.js";
 import { fixed } from "../render/numbers.js";
 import type { ScreenReport } from "../screening/report.js";
 import { TOP_RANGE } from "../screening/screen.js";
@@ -133,8 +133,10 @@ export async function runCard(job: CardJob): Promise<PaperOutput> {
 export function mapPng(p: ScreenedPitch, seamShape: number): Buffer {
   const r = p.report;
   const want = r.input.pitch.want;
-  const scene = sphereMapScene(mapValuesIn(p), p.result.grid, {
+  const values = mapValuesIn(p);
+  const scene = sphereMapScene(values, p.result.grid, {
     widthPx: 720,
+    range: scaleRange(values, mapMarksIn(r)),
     title: `${r.input.pitch.pitcher ? `${r.input.pitch.pitcher} \u2013 ` : ""}${r.input.pitch.name}: seam movement ${want === "any" ? "(its size)" : `toward ${WANT_WORDS[want]}`} at the plate`,
     valueLabel: want === "any" ? "seam movement, inches" : "seam movement toward the wanted direction, inches (negative: the other way)",
     seamShape,

@@ -14,7 +14,7 @@ import { equalAreaGrid, type SphereGrid } from "../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../screening/report.js";
 import { coreThreads, openPool } from "./pool.js";
 import type { Request } from "./request/values.js";
-import { sphereMapCellsPdf, type MapCells, type MapCellsOptions } from "../render/sphereMapDrawing.js";
+import { mapMarksIn, scaleRange, sphereMapCellsPdf, type MapCells, type MapCellsOptions } from "../render/sphereMapDrawing.js";
 import { mapValuesIn, parseScreen, screenOne, type ScreenJob } from "./screen.js";
 import type { TopChoice } from "./screenJob.js";
 
@@ -94,7 +94,7 @@ let built: { key: string; job: ScreenJob } | undefined;
 function pooledPitch(job: ScreenJob, i: number, mapCells: MapCellsOptions | undefined): PooledPitch {
   const s = screenOne(job, job.pitches[i]);
   const values = mapValuesIn(s);
-  const mapCellsPdf = mapCells ? sphereMapCellsPdf(values, s.result.grid, mapCells) : undefined;
+  const mapCellsPdf = mapCells ? sphereMapCellsPdf(values, s.result.grid, { ...mapCells, range: scaleRange(values, mapMarksIn(s.report)) }) : undefined;
   return { report: s.report, mapValuesIn: values, grid: s.result.grid, ...(mapCellsPdf ? { mapCellsPdf } : {}) };
 }
 

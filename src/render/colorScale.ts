@@ -8,8 +8,6 @@
 
 /** Anchors, low to high value. */
 export const VERDIGRIS_ANCHORS: readonly string[] = ["#10242b", "#1f4f5a", "#3f7f74", "#8aa86a", "#d8c37f", "#fbf3dc"];
-/** Name shown in legends. */
-export const VERDIGRIS_NAME = "verdigris";
 
 type Lab = [number, number, number];
 

@@ -19,7 +19,8 @@ import { DEFAULT_SEAM_SHAPE } from "../../geometry/seamCurve.js";
 import { seamFor } from "../sampling/measure.js";
 import type { SphereGrid } from "../../geometry/sphereGrid.js";
 import { unit3, type Vec3 } from "../../geometry/vec.js";
-import { rampColor, VERDIGRIS_NAME } from "./colorScale.js";
+import type { ScreenReport } from "../screening/report.js";
+import { rampColor } from "./colorScale.js";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject, lonLatOf } from "./hammer.js";
 import { addText, createScene, serializeScene, type SceneNode } from "./scene.js";
 import { pointsAttribute, polylinePath, relativePolygonPath } from "./svgPath.js";
@@ -290,6 +291,31 @@ export function sphereMapCellsPdf(values: Float64Array, grid: SphereGrid, option
   return { options, deflated: deflateSync(Buffer.from(out, "latin1")) };
 }
 
+/** The numbers (inches) of the grips a screen's sphere map marks: the listed grips unless out of reach, and the classic holds. */
+export function mapMarksIn(r: ScreenReport): number[] {
+  return [...(r.reach.outOfReach ? [] : r.candidates), ...r.references].map((o) => o.score);
+}
+
+/**
+ * The colour scale's ends for a map whose marked grips carry numbers of their own
+ * (`marks`: refined between the cells and flown in full, so a grip can beat every cell):
+ * the least and greatest of the cells and the marks, so no marked grip lies off the scale.
+ */
+export function scaleRange(values: Float64Array, marks: readonly number[]): [number, number] {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of values) {
+    if (!Number.isFinite(v)) continue;
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
+  for (const v of marks) {
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
+  return [lo, hi];
+}
+
 function valueRange(values: Float64Array, range?: readonly [number, number]): [number, number] {
   let lo = Infinity;
   let hi = -Infinity;
@@ -417,7 +443,7 @@ function drawLegend(draw: SceneNode, l: LegendLayout): void {
     g,
     l.widthPx / 2,
     l.top + 64,
-    `Hammer equal-area projection · longitude from ball +x toward +y · latitude from the seam's equator plane · graticule 30° · scale ${VERDIGRIS_NAME}`,
+    `Hammer equal-area projection · longitude from ball +x toward +y · latitude from the seam's equator plane · graticule 30° · colours dark (least) to light (most)`,
     { sizePx: 8, fill: "#4a4a4a", anchor: "middle", className: "sa-projection-note" },
   );
 }

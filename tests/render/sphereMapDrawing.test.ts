@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { equalAreaGrid } from "../../geometry/sphereGrid.js";
 import { rampColor } from "../../src/render/colorScale.js";
 import { HAMMER_HALF_HEIGHT, HAMMER_HALF_WIDTH, hammerProject } from "../../src/render/hammer.js";
-import { renderSphereMapSvg } from "../../src/render/sphereMapDrawing.js";
+import { renderSphereMapSvg, scaleRange } from "../../src/render/sphereMapDrawing.js";
 import { elements, shoelaceArea, subpaths, texts, xmlProblems } from "../support/svgCheck.js";
 import { DEG } from "../../geometry/units.js";
 
@@ -101,5 +101,18 @@ describe("sphere map drawing", () => {
   it("rejects values that do not match the grid, and an all-NaN field, with a RangeError", () => {
     expect(() => renderSphereMapSvg(new Float64Array(3), grid)).toThrow(RangeError);
     expect(() => renderSphereMapSvg(new Float64Array(grid.count).fill(Number.NaN), grid)).toThrow(RangeError);
+  });
+});
+
+describe("sphere map colour scale", () => {
+  it("reaches the numbers of the grips it marks, which are refined between the cells and can beat every cell (the legend's top is never below the best grip printed beside it)", () => {
+    const grid = equalAreaGrid(10 * DEG);
+    const values = new Float64Array(grid.count).map((_, i) => (i % 7) / 2);
+    const [lo, hi] = scaleRange(values, [3.4, -0.2]);
+    expect(lo).toBe(-0.2);
+    expect(hi).toBe(3.4);
+    expect(scaleRange(values, [])).toEqual([0, 3]);
+    const svg = renderSphereMapSvg(values, grid, { range: scaleRange(values, [3.4]), valueDigits: 1 });
+    expect(texts(svg)).toContain("3.4");
   });
 });

@@ -17,7 +17,7 @@ import type { SphereGrid } from "../../../geometry/sphereGrid.js";
 import type { ScreenReport } from "../../screening/report.js";
 import { TOOL_VERSION } from "../../version.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
-import { sphereMapScene, type MapCells } from "../sphereMapDrawing.js";
+import { mapMarksIn, scaleRange, sphereMapScene, type MapCells } from "../sphereMapDrawing.js";
 import { ATLAS_MAP_CELLS } from "./atlasMap.js";
 import { cardContent, cardScene, outOfReachContent, placeCards, type CardContent } from "./card.js";
 import { openPdf, type Page } from "./document.js";
@@ -148,6 +148,7 @@ function mapPage(input: Omit<AtlasInput, "pitches">, p: AtlasPitch, index: numbe
   const toward = pp.want === "any" ? "seam movement (its size) at every place the spin axis could go" : `seam movement toward the ${WANT_WORDS[pp.want].replace("-side", " side").replace("upward", "top").replace("downward", "ground")} at every place the spin axis could go`;
   const map = sphereMapScene(p.mapValuesIn, p.grid, {
     widthPx: ATLAS_MAP_CELLS.widthPx,
+    range: scaleRange(p.mapValuesIn, mapMarksIn(r)),
     cellsPdf: p.mapCellsPdf,
     title: toward,
     valueLabel: pp.want === "any" ? "seam movement at the plate, inches" : `seam movement ${pp.want === "arm" ? "toward the arm side" : pp.want === "glove" ? "toward the glove side" : `${pp.want}ward`}, inches at the plate (negative: the other way)`,
