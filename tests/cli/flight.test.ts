@@ -59,6 +59,20 @@ describe("seam-atlas flight", () => {
     expect(flight.movement.trade.seam.clock).toBe(c.seamMovement.clock);
   });
 
+  it("words directions in the text as a reader takes them: the plate's side as the catcher sees it with no minus sign, a launch below level as down, the seam's spread by phase in the same arm-side terms as the seam part [README, flight]", () => {
+    const slow = ["--hand", "right", "--speed", "70", "--spin", "60", "--tilt", "12:00", "--axis", "20N,30E", "--phase", "90"];
+    const text = runCli(["flight", ...slow]).stdout;
+    const j = JSON.parse(runCli(["flight", ...slow, "--json"]).stdout);
+    const side = j.plate.xIn < 0 ? "left" : "right";
+    expect(text).toContain(`${Math.abs(j.plate.xIn).toFixed(1)} in ${side} of centre as the catcher sees it`);
+    expect(text).toMatch(/deg (up|down), \d+\.\d\d deg (left|right) as the catcher sees it; aimed at the middle of the zone with the turn-averaged seam force/);
+    // a right-hander's arm side is the catcher's left: the spread's arm-side range is the horizontal one negated and reversed
+    const hb = j.movement.seamSpread.horizontalBreak;
+    const fmt = (x: number) => `${x >= 0 ? "+" : "-"}${Math.abs(x).toFixed(1)}`;
+    expect(text).toContain(`${fmt(-hb.p90In)} to ${fmt(-hb.p10In)} in arm side`);
+    expect(text).not.toMatch(/-\d+\.\d in (right|left) of centre/);
+  });
+
   it("flies the candidate N of the screen the user ran: the same --rank, --grid and --top give the same axis as screen's #N (one model, one list)", () => {
     const opts = ["--rank", "robust", "--grid", "3", "--top", "4"];
     const screen = JSON.parse(runCli(["screen", ...SINKER, ...opts, "--json"]).stdout);

@@ -138,6 +138,10 @@ export function flightText(o: FlightOutcome): string {
   const t = d.movement.trade;
   const fr = d.movement.fromRelease;
   const sp = d.movement.seamSpread;
+  // the catcher's right is the plate's +x; the arm side is the catcher's left for a right-hander
+  const side = (xIn: number, unit: string) => `${fixed(Math.abs(xIn), unit === "deg" ? 2 : 1)} ${unit} ${xIn < 0 ? "left" : "right"}`;
+  const armSign = echo.hand === "left" ? 1 : -1;
+  const armRange = (r: { p10In: number; p90In: number }) => (armSign > 0 ? [r.p10In, r.p90In] : [-r.p90In, -r.p10In]);
   const seamMode =
     d.seam.mode === "turn-average"
       ? `turn-averaged (${fixed(d.seam.turnsToPlate, 1)} turns to the plate)`
@@ -147,15 +151,19 @@ export function flightText(o: FlightOutcome): string {
     ["seam orientation", `${d.axis.latLon} (${o.job.axisGiven})`],
     ["seam model", `${o.job.model.profile.name} (${o.job.model.profile.hash}), ${seamMode}`],
     ["air", o.job.airMode === "none" ? "none (vacuum)" : `${fixed(d.air.densityKgM3, 4)} kg/m^3, Re ${fixed(d.air.reynolds / 1e5, 2)}e5, spin factor ${fixed(d.air.spinFactor, 3)}`],
-    ["launch", `${fixed(d.launch.verticalDeg, 2)} deg up, ${fixed(d.launch.horizontalDeg, 2)} deg right${d.launch.aimed ? " (aimed at the middle of the zone)" : ""}`],
+    [
+      "launch",
+      `${fixed(Math.abs(d.launch.verticalDeg), 2)} deg ${d.launch.verticalDeg < 0 ? "down" : "up"}, ${side(d.launch.horizontalDeg, "deg")} as the catcher sees it` +
+        (d.launch.aimed ? `; aimed at the middle of the zone${d.seam.mode === "turn-average" ? "" : " with the turn-averaged seam force (the force at this phase moves the ball off it)"}` : ""),
+    ],
     ["time to plate", `${fixed(d.timeToPlateS, 3)} s`],
-    ["at the plate", `${fixed(d.plate.xIn, 1)} in right of centre, ${fixed(d.plate.zIn, 1)} in high`],
+    ["at the plate", `${side(d.plate.xIn, "in")} of centre as the catcher sees it, ${fixed(d.plate.zIn, 1)} in high`],
     ["approach", `${fixed(d.approach.verticalDeg, 2)} deg vertical, ${fixed(d.approach.horizontalDeg, 2)} deg horizontal`],
     [`movement (last ${fixed(t.windowFt, 0)} ft)`, `${formatMovementIn(t.inducedVerticalBreakIn)} in induced vertical break, ${formatMovementIn(t.horizontalBreakIn)} in horizontal break (${formatMovementIn(t.armSideIn)} in arm side)`],
     ["  Magnus part", `${formatMovementIn(t.magnus.inducedVerticalBreakIn)} in up, ${formatMovementIn(t.magnus.armSideIn)} in arm side`],
     ["  seam part", `${formatMovementIn(t.seam.inducedVerticalBreakIn)} in up, ${formatMovementIn(t.seam.armSideIn)} in arm side, toward ${t.seam.clock ?? "-"} (${echo.view}'s view)`],
     ...(sp
-      ? ([["  seam, by release phase", `${formatMovementIn(sp.inducedVerticalBreak.p10In)} to ${formatMovementIn(sp.inducedVerticalBreak.p90In)} in up, ${formatMovementIn(sp.horizontalBreak.p10In)} to ${formatMovementIn(sp.horizontalBreak.p90In)} in horizontal (10th to 90th percentile of ${sp.releasePhases} phases)`]] as [string, string][])
+      ? ([["  seam, by release phase", `${formatMovementIn(sp.inducedVerticalBreak.p10In)} to ${formatMovementIn(sp.inducedVerticalBreak.p90In)} in up, ${armRange(sp.horizontalBreak).map(formatMovementIn).join(" to ")} in arm side (10th to 90th percentile of ${sp.releasePhases} phases)`]] as [string, string][])
       : []),
     ["  drag's own part", `${formatMovementIn(t.drag.inducedVerticalBreakIn)} in up, ${formatMovementIn(t.drag.armSideIn)} in arm side`],
     ["from release", `${formatMovementIn(fr.armSideIn)} in arm side, ${formatMovementIn(fr.verticalIn)} in up against the spinless flight (seam part ${formatMovementIn(fr.seam.armSideIn)} / ${formatMovementIn(fr.seam.verticalIn)})`],
