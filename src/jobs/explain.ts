@@ -29,7 +29,7 @@ import type { PitchEcho } from "../screening/report.js";
 import { autoThreads, BLOCK_ROWS, blockRunner, explainerFor, IN_FLIGHT_PER_THREAD, packRows, type BlockResult, type ExplainSettings, type PackedRow } from "./explainBatch.js";
 import { MOVEMENT_LIMIT_IN, parseColumnsOption, readRow, resolveColumns, type BatchRow, type ColumnMap } from "./explainColumns.js";
 import { modelChoice } from "./request/model.js";
-import { pitchesFromRequest, PITCH_FLAGS } from "./request/pitch.js";
+import { onePitch, pitchesFromRequest, PITCH_FLAGS } from "./request/pitch.js";
 import { cacheChoice, threadsChoice } from "./request/runtime.js";
 import { airConditions, samplerSettings, windowStart } from "./request/settings.js";
 import { oneOf, optionPath, parseInRange, parseIntegerInRange, parseNumber, type Request } from "./request/values.js";
@@ -156,14 +156,14 @@ export function parseExplain(request: Request): ExplainJob {
   }
   const settings = explainSettings(request);
   const { pitches, source } = pitchesFromRequest(request);
-  if (pitches.length !== 1) throw new InputError(`explain takes one pitch; the file has ${pitches.length} (choose one with --pitch-name, or use --csv-in)`);
+  const chosen = onePitch(request, pitches, "explain", "choose one with --pitch-name, or use --csv-in");
   const moveUpIn = parseNumber("move-up", request["move-up"], "inches");
   const horizontalOption = request["move-arm"] !== undefined ? "move-arm" : "move-right";
   const horizontal = parseNumber(horizontalOption, request[horizontalOption], "inches");
   for (const [option, x] of [["move-up", moveUpIn], [horizontalOption, horizontal]] as const) {
     if (!(Math.abs(x) <= MOVEMENT_LIMIT_IN)) throw new InputError(`--${option} ${x} in is out of range; expected at most ${MOVEMENT_LIMIT_IN} in either way`);
   }
-  const { pitch, echo } = pitches[0];
+  const { pitch, echo } = chosen;
   const moveArmIn = horizontalOption === "move-arm" ? horizontal : armSideSign(pitch.hand) * horizontal;
   return { kind: "one", settings, pitch, echo, source, moveArmIn, moveUpIn };
 }

@@ -15,7 +15,7 @@ import type { TradeBreak } from "../physics/tradeMovement.js";
 import { DEFAULT_TOP, screenPitch, TOP_RANGE, type CoefficientMapSource } from "../screening/screen.js";
 import type { PitchEcho } from "../screening/report.js";
 import type { Pitch } from "../screening/pitch.js";
-import { pitchesFromRequest } from "./request/pitch.js";
+import { onePitch, pitchesFromRequest } from "./request/pitch.js";
 import { jobScreenSettings } from "./screenJob.js";
 import { buildModel, modelChoice } from "./request/model.js";
 import { cachedScreenMaps } from "./mapCache.js";
@@ -58,8 +58,7 @@ export function parseFlight(request: Request): FlightJob {
   const choice = modelChoice(request);
   const sampler = samplerSettings(request, choice.profile);
   const { pitches } = pitchesFromRequest(request);
-  if (pitches.length !== 1) throw new InputError(`flight takes one pitch; the file has ${pitches.length} (choose one with --pitch-name)`);
-  const { pitch, echo } = pitches[0];
+  const { pitch, echo } = onePitch(request, pitches, "flight", "choose one with --pitch-name");
   const sources = ["axis", "candidate", "reference"].filter((k) => request[k] !== undefined);
   if (sources.length !== 1) throw new InputError(`give exactly one of --axis, --candidate N or --reference four-seam|two-seam`);
   let axisRequest: FlightJob["axisRequest"];

@@ -19,6 +19,7 @@ import type { ScreenReport } from "../screening/report.js";
 import { TOP_RANGE } from "../screening/screen.js";
 import { buildModel, modelChoice } from "./request/model.js";
 import { samplerSettings } from "./request/settings.js";
+import { onePitch } from "./request/pitch.js";
 import { threadsChoice } from "./request/runtime.js";
 import { parseInteger, type Request } from "./request/values.js";
 import { seamFor } from "../sampling/measure.js";
@@ -68,9 +69,7 @@ export function parseCard(request: Request): CardJob {
   const screenRequest: Request = { ...request, top: undefined };
   const top: TopChoice = { atLeast: Math.max(n, perPage) };
   const screen = parseScreen(screenRequest, top);
-  if (layout.kind === "card" && screen.pitches.length !== 1) {
-    throw new InputError(`card takes one pitch for a card layout; the file has ${screen.pitches.length} (choose one with --pitch-name, or give a sheet layout for a staff sheet, one card per pitch)`);
-  }
+  if (layout.kind === "card") onePitch(request, screen.pitches, "card", "a card layout prints one: choose one with --pitch-name, or give a sheet layout for a staff sheet, one card per pitch");
   checkNames(screen);
   return { screen, screenRequest, top, threads: threadsChoice(request), layout, format, candidate: n, reference };
 }

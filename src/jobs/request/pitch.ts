@@ -66,6 +66,19 @@ export function pitchesFromFile(path: string, label = `--pitch ${quote(path)}`):
   return { team: typeof obj.team === "string" ? obj.team : undefined, pitches };
 }
 
+/**
+ * The one pitch a command takes from what the request gives (`why`: how to choose, for
+ * the message): a --pitch-name that matches several pitches is named with their labels.
+ */
+export function onePitch<T extends { readonly echo: PitchInput["echo"] }>(request: Request, pitches: readonly T[], command: string, why: string): T {
+  if (pitches.length === 1) return pitches[0];
+  const label = (p: T) => (p.echo.pitcher ? `${p.echo.pitcher}/${p.echo.name}` : p.echo.name);
+  if (request["pitch-name"] !== undefined && pitches.length > 1) {
+    throw new InputError(`--pitch-name ${quote(String(request["pitch-name"]))} matches ${pitches.length} pitches (${pitches.map(label).join(", ")}); ${command} takes one: expected PITCHER/NAME`);
+  }
+  throw new InputError(`${command} takes one pitch; the file has ${pitches.length} (${why})`);
+}
+
 /** Picks pitches by name ("sinker" or "Iris Talvela/sinker"); throws listing the names when none match. */
 export function selectPitches(file: PitchFile, selector: string | undefined, source: string): PitchInput[] {
   if (selector === undefined) return file.pitches;
