@@ -41,7 +41,14 @@ export function pitchesFromFile(path: string, label = `--pitch ${quote(path)}`):
   const v = doc.value;
   if (typeof v !== "object" || v === null || Array.isArray(v)) throw new InputError(`${at("")}: expected a pitch or a staff object`);
   const obj = v as Record<string, unknown>;
-  if (!("pitchers" in obj)) return { pitches: [buildPitch(obj, (f) => at(f))] };
+  if (!("pitchers" in obj)) {
+    // a staff whose list is misspelled reads as a staff, not as one pitch with strange fields
+    const list = Object.keys(obj).find((k) => Array.isArray(obj[k]));
+    if (list !== undefined || "team" in obj) {
+      throw new InputError(`${at(list ?? "team")}: a staff file lists its pitchers under "pitchers"${list !== undefined ? `, not "${list}"` : ""}; expected team, pitchers (or one pitch's fields alone)`);
+    }
+    return { pitches: [buildPitch(obj, (f) => at(f))] };
+  }
   for (const key of Object.keys(obj)) {
     if (key !== "team" && key !== "pitchers") throw new InputError(`${at(key)}: unknown field "${key}" in a staff; expected team, pitchers`);
   }
