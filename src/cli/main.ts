@@ -20,14 +20,19 @@ import { registerCalibrate } from "./calibrate.js";
 /** The commands, in the order --help lists them in words. */
 export const COMMANDS = ["atlas", "card", "handout", "view", "screen", "measure", "flight", "force", "explain", "calibrate", "landmarks"] as const;
 
+/** The switches (yargs booleans) of every command: given alone, or as =true / =false. */
+const SWITCHES = ["csv", "demo", "json", "png", "svg", "trajectory"];
+
 export async function main(args: string[]): Promise<void> {
   refuseByteOrderMarks(args);
+  refuseSwitchValues(args);
   const command = args[0];
   if (command !== undefined && !command.startsWith("-") && !(COMMANDS as readonly string[]).includes(command)) throw unknownCommand(command);
   let cli = yargs(args)
     .scriptName("seam-atlas")
     .usage("$0 <command> [options]\n\nSeam orientation: where the spin axis pierces the ball, and the seam-shifted wake it makes. One seam-force model gives every push: its direction, the inches it adds at the plate, and the ranking of grips.")
     .version(TOOL_VERSION)
+    .alias("help", "h")
     .strict()
     .demandCommand(1, `give a command: ${COMMANDS.slice(0, -1).join(", ")} or ${COMMANDS.at(-1)} (see --help)`)
     .wrap(Math.min(110, process.stdout.columns || 100))
@@ -60,6 +65,16 @@ function refuseByteOrderMarks(args: readonly string[]): void {
     const what = inline ? `${inline[1]} ${quote(inline[2])}` : i > 0 && args[i - 1].startsWith("-") ? `${args[i - 1]} ${quote(a)}` : quote(a);
     throw new InputError(`${what} holds a byte-order mark (U+FEFF, invisible); expected the value without it`);
   });
+}
+
+/** A switch given a value other than true or false ("--json=yes") would be read as off: named instead. */
+function refuseSwitchValues(args: readonly string[]): void {
+  for (const a of args) {
+    const m = /^--([a-z-]+)=([\s\S]*)$/.exec(a);
+    if (m && SWITCHES.includes(m[1]) && m[2] !== "true" && m[2] !== "false") {
+      throw new InputError(`--${m[1]}=${m[2]}: --${m[1]} is a switch; expected --${m[1]} alone (or =true, =false)`);
+    }
+  }
 }
 
 /** "unknown command", with the nearest command when one is near (edit distance at most 2). */
