@@ -47,6 +47,8 @@ export interface FlightJob {
 
 /** The screen's options flight takes for --candidate and --reference; with --axis there is no screen, so they are refused. */
 const SCREEN_FLAGS = ["grid", "spread", "rank", "finger-spacing", "top", "cache"] as const;
+/** The air's options, which a vacuum (--air none) does not read. */
+const AIR_FLAGS = ["elevation-ft", "elevation-m", "temperature-f", "temperature-c", "humidity", "pressure-hpa"] as const;
 
 export interface FlightOutcome {
   readonly job: FlightJob;
@@ -83,6 +85,9 @@ export function parseFlight(request: Request): FlightJob {
     axisRequest = { kind: "reference", name };
     axisGiven = `${name} reference`;
   }
+  const airMode = oneOf("air", request.air ?? "standard", ["standard", "none"] as const);
+  const airFlag = AIR_FLAGS.find((k) => request[k] !== undefined);
+  if (airMode === "none" && airFlag) throw new InputError(`--${airFlag} goes with --air standard; --air none flies in a vacuum, so leave it out`);
   return {
     pitch,
     echo,
@@ -90,7 +95,7 @@ export function parseFlight(request: Request): FlightJob {
     model: buildModel(choice.profile, sampler.seamShape),
     axisGiven,
     axisRequest,
-    airMode: oneOf("air", request.air ?? "standard", ["standard", "none"] as const),
+    airMode,
     air: airConditions(request),
     release: releasePoint(request),
     launch: launchAngles(request),
