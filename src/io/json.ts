@@ -119,7 +119,8 @@ class StrictJsonParser {
         return v;
       }
     }
-    return this.fail(`unexpected ${this.describeHere()}`, "expected a value: an object, a list, a string in double quotes, a number, true, false or null");
+    const here = this.describeHere();
+    return this.fail(here === "the end of the file" ? "the file ends where a value should be" : `unexpected ${here}`, "expected a value: an object, a list, a string in double quotes, a number, true, false or null");
   }
 
   private parseObject(path: string, depth: number): Record<string, unknown> {

@@ -39,7 +39,7 @@ export function screenCsv(reports: readonly ScreenReport[]): string {
       const m = o.seamMovement;
       rows.push(
         csvRow([
-          p.pitcher, p.name, p.hand, p.want, o.reference ?? "candidate", o.rank ?? "", r1(o.latLon.latDeg), r1(o.latLon.lonDeg), o.landmark.name, r1(o.landmark.angleDeg),
+          p.pitcher, p.name, p.hand, p.want, o.reference ?? "candidate", o.rank ?? "", r1(o.latLon.latDeg), r1(o.latLon.lonDeg), o.landmark.name, Math.round(o.landmark.angleDeg),
           r1(m.armSideIn), r1(m.verticalIn), m.clock, r1(o.score), r1(o.robustness.meanIn), r1(o.robustness.p10In), r1(o.rankScore),
           o.crossingsPerRevolution, r1(100 * o.occupancy.seamInBand), rounded(o.seamForce.across, 4), rounded(o.seamForce.alongMagnus, 4), r.input.model.name, r.input.model.hash,
         ]),

@@ -6,6 +6,8 @@
  * profile's name and hash. Reading the file is this module's part; the rest is
  * request/profile.ts (pure, shared with the workbench page).
  */
+import { quote } from "../../io/quote.js";
+import { errnoWords } from "../../io/writeErrors.js";
 import { readFileSync } from "node:fs";
 import { InputError } from "../../io/errors.js";
 import { parseStrictJson } from "../../io/json.js";
@@ -27,9 +29,9 @@ export function readProfileFile(path: string): SeamModelProfile {
   try {
     bytes = readFileSync(path);
   } catch (err) {
-    throw new InputError(`--model "${path}": cannot read the file (${(err as NodeJS.ErrnoException).code ?? "error"})`);
+    throw new InputError(`--model ${quote(path)}: cannot read the file: ${errnoWords(err)}; expected a seam-force profile (JSON)`);
   }
-  const doc = parseStrictJson(bytes, path);
+  const doc = parseStrictJson(bytes, `--model ${quote(path)}`);
   try {
     return resolveProfile(doc.value, path);
   } catch (err) {
