@@ -21,7 +21,7 @@ export function registerScreen(y: Argv): Argv {
             .option("top", textOption("how many candidates to list (1 to 50)", String(DEFAULT_TOP)))
             .option("json", { type: "boolean", default: false, describe: "print JSON" })
             .option("csv", { type: "boolean", default: false, describe: "print CSV, one row per candidate or reference hold" })
-            .option("out", textOption("also write the JSON to this file (- for standard output)"))
+            .option("out", textOption("also write the JSON to this file, or the CSV with --csv (- for standard output)"))
             .option(
               "map",
               textOption(
@@ -42,9 +42,9 @@ export function registerScreen(y: Argv): Argv {
       const mapOutputs = mapsWanted(argv.map, job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name)));
       const labels = job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name));
       const pngOutputs = mapsWanted(argv["map-png"], labels, "--map-png", "png");
-      const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: "json" }, ...mapOutputs, ...pngOutputs];
-      // standard output carries one document: --out - may go with --json (the same JSON), nothing else
-      if (argv.csv) refuseSecondStdout(wanted, "--csv");
+      const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: argv.csv ? "csv" : "json" }, ...mapOutputs, ...pngOutputs];
+      // standard output carries one document: --out - may go with --json or --csv (the same document), nothing else
+      if (argv.csv) refuseSecondStdout([...mapOutputs, ...pngOutputs], "--csv");
       if (argv.json) refuseSecondStdout([...mapOutputs, ...pngOutputs], "--json");
       const [out, ...rest] = planRun(wanted, inputFiles(argv));
       const maps = rest.slice(0, mapOutputs.length);
@@ -53,16 +53,17 @@ export function registerScreen(y: Argv): Argv {
       const { jsonText, screenDocument, sphereMapDocument } = await import("../jobs/formats/json.js");
       const outcome = runScreen(job);
       const json = jsonText(screenDocument(outcome));
-      if (out) writeOutput(out, json);
+      const reports = outcome.screened.map((s) => s.report);
+      const csv = argv.csv ? (await import("../jobs/formats/csv.js")).screenCsv(reports) : undefined;
+      if (out) writeOutput(out, csv ?? json);
       maps.forEach((m, i) => m && writeOutput(m, JSON.stringify(sphereMapDocument(outcome.screened[i].result)) + "\n"));
       if (pngs.some((m) => m)) {
         const { mapPng } = await import("../jobs/paper.js");
         pngs.forEach((m, i) => m && writeOutput(m, mapPng(outcome.screened[i], job.sampler.seamShape)));
       }
       if (toStdout(planned)) return;
-      const reports = outcome.screened.map((s) => s.report);
       if (argv.json) print(json);
-      else if (argv.csv) print((await import("../jobs/formats/csv.js")).screenCsv(reports));
+      else if (csv !== undefined) print(csv);
       else print((await import("../jobs/formats/text.js")).screenText(outcome.job.team, reports) + wroteLines(planned));
     },
   );

@@ -119,6 +119,18 @@ describe("seam-atlas screen", () => {
   }
 });
 
+describe("screen --csv --out", () => {
+  it("writes the CSV it prints to the file, and --out - prints it once [README, screen: --out writes the JSON, or the CSV with --csv]", () => {
+    const file = join(tmp, "grips.csv");
+    const printed = runCli(["screen", ...SINKER, "--grid", "6", "--top", "2", "--csv", "--out", file]);
+    expect(printed.code, printed.stderr).toBe(0);
+    expect(readFileSync(file, "utf8")).toBe(printed.stdout);
+    const once = runCli(["screen", ...SINKER, "--grid", "6", "--top", "2", "--csv", "--out", "-"]);
+    expect(once.stdout).toBe(printed.stdout);
+    expect(printed.stdout.split("\n")[0]).toMatch(/^pitcher,pitch,hand,want,row,rank,/);
+  });
+});
+
 describe("README's table of what the defaults give", () => {
   it("prints the demo staff's numbers exactly as screen --demo --json rounds them: toward the wanted direction, the size in brackets [README, The seam-force model; one number in every output]", () => {
     const readme = readFileSync(join(ROOT, "README.md"), "utf8");
