@@ -320,6 +320,15 @@ describe("handout", () => {
     expect(inkSpread(img, 30, { ...h.blocks.figureAsymmetric, yIn: 7, hIn: 2 })).toBeGreaterThan(20);
   });
 
+  itWithPoppler("draws the two classic holds in the hand on page 2, with the fingers' letters and the sides (pdftotext; ink where the drawings go)", () => {
+    const t = flat(pdfText(pdf, 2));
+    for (const s of ["The two classic holds in your hand", "the four-seam hold, from behind the ball", "the two-seam hold, from behind the ball", "glove side", "arm side"]) expect(t).toContain(s);
+    const img = renderGray(pdf, 2, 30, join(tmp, "handout-2"));
+    // the lower third of the page, left and right halves: each a ball drawing
+    expect(inkSpread(img, 30, { xIn: 0.75, yIn: 7.5, wIn: 3.25, hIn: 2.5 })).toBeGreaterThan(20);
+    expect(inkSpread(img, 30, { xIn: 4.5, yIn: 7.5, wIn: 3.25, hIn: 2.5 })).toBeGreaterThan(20);
+  });
+
   itWithPoppler("says what the figures show in words built from the model's own numbers (forceTimeline), and never that the push can only be sideways", () => {
     const text = flat(pdfText(pdf));
     const words = figureWords(handoutFigures(seamModel(), sampleSeam(DEFAULT_SEAM_SHAPE, 2048)));

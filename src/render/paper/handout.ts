@@ -4,7 +4,8 @@
  * the seam-force model computes: the instantaneous seam push through one turn
  * (forceTimeline) for the four-seam hold and the two-seam hold, as a share of the
  * ball's weight at the handout's example speed. The sentences about the figures are
- * built from the same numbers. A header carries the clinic's name, date and contact.
+ * built from the same numbers. Page 2 draws the two holds in the hand (the cards' hand
+ * model and ball drawing). A header carries the clinic's name, date and contact.
  */
 import { BALL_MASS_KG, BALL_RADIUS_M } from "../../../geometry/ball.js";
 import type { SeamSamples } from "../../../geometry/seamSamples.js";
@@ -13,7 +14,12 @@ import type { SeamModel } from "../../physics/seamModel/model.js";
 import { seamForceNewtons } from "../../physics/seamModel/newtons.js";
 import type { SeamModelValues } from "../../physics/seamModel/parameters.js";
 import { forceTimeline } from "../../physics/seamModel/turn.js";
+import { coverModel } from "../../../geometry/coverRegions.js";
+import { applyRotation, PAD_SIZE_IN, placeFingers, transposeRotation, type Finger } from "../../screening/hand.js";
+import { pitchFrame } from "../../screening/pitch.js";
 import { findReferenceAxes } from "../../screening/references.js";
+import { ballScene } from "../ballDrawing.js";
+import { viewFromDirections } from "../projection.js";
 import { fixed } from "../numbers.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import { pdfOfPages, type Page } from "./document.js";
@@ -22,7 +28,7 @@ import { PT_PER_IN } from "./pdfScene.js";
 import { modelStory } from "./story.js";
 import { setText, textHeight, type BoxPt } from "./textLayout.js";
 import { timelineScene } from "./timelineChart.js";
-import { CAUTION_LONG, HOLD_WORDS, SEAM_PICTURE } from "./words.js";
+import { CAUTION_LONG, HOLD_GRIP, HOLD_WORDS, SEAM_PICTURE } from "./words.js";
 
 /** The clinic's own lines for the header (any may be left out). */
 export interface Clinic {
@@ -55,6 +61,36 @@ export interface HandoutFigure {
   readonly meanMagnusPct: number;
   /** Largest size of the push at any instant, %. */
   readonly peakPct: number;
+}
+
+/** The example pitch of the figures and the hold drawings: a right-hander's backspin fastball. */
+function examplePitch() {
+  return {
+    name: "fastball", pitcher: "", hand: "right" as const, speedMPerS: HANDOUT_SPEED_MPH * M_PER_S_PER_MPH, spinRadPerS: (2200 * 2 * Math.PI) / 60,
+    tiltRad: 0, view: "pitcher" as const, gyroRad: HANDOUT_GYRO_DEG * DEG, want: "any" as const,
+  };
+}
+
+const FINGER_LETTERS: Record<string, string> = { index: "I", middle: "M", thumb: "T" };
+
+/**
+ * A classic hold in the hand, from the pitcher's own view behind the ball (field up at
+ * the top): the cards' hand model (screening/hand.ts) on the hold's axis for the example
+ * fastball, the fingers at an adult's pad size, the seams, the arm and glove sides.
+ */
+export function holdScene(seam: SeamSamples, hold: "four-seam" | "two-seam", idPrefix: string): SceneNode {
+  const axis = findReferenceAxes(seam).find((r) => r.name === hold)!.axis;
+  const grip = placeFingers(axis, pitchFrame(examplePitch()), seam, coverModel(seam.shape), undefined, "fastball");
+  const toBall = transposeRotation(grip.ballToField);
+  const b = (v: [number, number, number]) => applyRotation(toBall, v);
+  const fingers = grip.pads.map((p) => {
+    const size = PAD_SIZE_IN[p.finger as Finger];
+    return { direction: p.direction, pointing: p.pointing, widthIn: size.widthIn, lengthIn: size.lengthIn, label: FINGER_LETTERS[p.finger] ?? p.finger, working: p.working };
+  });
+  return ballScene(
+    { seamShape: seam.shape, view: viewFromDirections(b([0, 1, 0]), b([0, 0, 1])), overlays: { fingers }, caption: `the ${hold} hold, from behind the ball`, sides: { left: "glove side", right: "arm side" } },
+    { sizePx: 300, seamPoints: 256, legend: false, idPrefix },
+  );
 }
 
 /** The two figures' numbers, from the model. */
@@ -177,7 +213,20 @@ export function handoutPages(input: HandoutInput): Page[] {
   const cw = w * PT_PER_IN;
   const cy = (y + 0.4) * PT_PER_IN;
   const text = CAUTION_LONG.join(" ");
-  setText(p2.scene, text, { x: m * PT_PER_IN, y: cy, w: cw, h: textHeight(text, cw, { sizePt: f.sizePt - 1 }) + f.sizePt }, { sizePt: f.sizePt - 1, fill: "#7a2f1d" });
+  const ch = textHeight(text, cw, { sizePt: f.sizePt - 1 }) + f.sizePt;
+  setText(p2.scene, text, { x: m * PT_PER_IN, y: cy, w: cw, h: ch }, { sizePt: f.sizePt - 1, fill: "#7a2f1d" });
+  // the two classic holds in the hand, where the page has room (a right-hander's; a left-hander's is the mirror image)
+  const top = (cy + ch) / PT_PER_IN + 0.25;
+  const room = L.page.heightIn - m - 0.3 - top;
+  if (room >= 2.7) {
+    setText(p2.scene, "The two classic holds in your hand", pt(m, top, w, 0.3), { sizePt: f.sizePt + 1, weight: "bold" });
+    setText(p2.scene, `A right-hander's hand seen from behind the ball (a left-hander's is the mirror image): I index, M middle, T thumb. ${HOLD_GRIP["four-seam"].replace(/^./, (c) => c.toUpperCase())}; ${HOLD_GRIP["two-seam"]}.`, pt(m, top + 0.3, w, 0.5), { sizePt: f.sizePt - 1, fill: "#333333" });
+    const size = Math.min(room - 0.85, w / 2 - 0.2, 3.2);
+    (["four-seam", "two-seam"] as const).forEach((hold, k) => {
+      const x = m + (k === 0 ? w / 4 : (3 * w) / 4) - size / 2;
+      nestScene(p2.scene, holdScene(input.seam, hold, `hold${k}`), x * PT_PER_IN, (top + 0.8) * PT_PER_IN, size * PT_PER_IN, size * PT_PER_IN);
+    });
+  }
   return [p1, p2];
 }
 
