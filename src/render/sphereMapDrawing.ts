@@ -133,10 +133,19 @@ export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: 
   draw.path().attr({ d: grat, fill: "none", stroke: "#3a3a3a", "stroke-opacity": 0.35, "stroke-width": 0.7, class: "sa-graticule" });
   draw.ellipse().attr({ cx, cy, rx: HAMMER_HALF_WIDTH * scale, ry: HAMMER_HALF_HEIGHT * scale, fill: "none", stroke: "#3a3a3a", "stroke-width": 1 });
   const labels = draw.group().attr({ class: "sa-graticule-labels" });
+  // where the markers go (drawn last): a longitude label they would cover moves under the
+  // equator, or is left out when it is covered there too (the graticule still shows the line)
+  const holdsPx = (options.referenceHolds ?? []).map((m) => markerPx(m.direction, toPx));
+  const candidatesPx = (options.candidates ?? []).map((m) => markerPx(m.direction, toPx));
+  const covered = (x: number, y: number, w: number) =>
+    [...holdsPx.map((p) => [p[0], p[1], 30] as const), ...candidatesPx.map((p) => [p[0], p[1], 8] as const)].some(([mx, my, reach]) => mx > x - 8 && mx < x + w + reach && my > y - 8 - 8 && my < y + 8);
   for (const lonDeg of [-120, -60, 0, 60, 120]) {
     const p: number[] = [];
     toPx(lonDeg * DEG, 0, p);
-    addText(labels, p[0] + 2, p[1] - 3, `${lonDeg}°`, { sizePx: 8, fill: "#2c2c2c", haloPx: 2 });
+    const text = `${lonDeg}°`;
+    const w = 4.6 * text.length; // about the width at 8 px (an overlap test, not a layout)
+    const y = [p[1] - 3, p[1] + 11].find((yy) => !covered(p[0] + 2, yy, w));
+    if (y !== undefined) addText(labels, p[0] + 2, y, text, { sizePx: 8, fill: "#2c2c2c", haloPx: 2 });
   }
   for (const latDeg of [-60, -30, 30, 60]) {
     const p: number[] = [];
@@ -153,13 +162,13 @@ export function sphereMapScene(values: Float64Array, grid: SphereGrid, options: 
   }
 
   const markers = draw.group().attr({ class: "sa-markers" });
-  for (const m of options.referenceHolds ?? []) {
-    const p = markerPx(m.direction, toPx);
+  for (const [k, m] of (options.referenceHolds ?? []).entries()) {
+    const p = holdsPx[k];
     drawHoldMarker(markers, p[0], p[1]);
     addText(markers, p[0] + 8, p[1] + 3.5, m.label, { sizePx: 10, fill: "#111111", haloPx: 2.5, className: "sa-hold-label" });
   }
-  for (const m of options.candidates ?? []) {
-    const p = markerPx(m.direction, toPx);
+  for (const [k, m] of (options.candidates ?? []).entries()) {
+    const p = candidatesPx[k];
     drawCandidateMarker(markers, p[0], p[1], digits);
     addText(markers, p[0], p[1] + 3, m.label, { sizePx: 8, fill: "#111111", anchor: "middle", weight: "bold", className: "sa-candidate-label" });
   }

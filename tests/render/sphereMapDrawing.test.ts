@@ -116,3 +116,22 @@ describe("sphere map colour scale", () => {
     expect(texts(svg)).toContain("3.4");
   });
 });
+
+describe("sphere map labels and markers", () => {
+  it("moves a longitude label that a grip's marker would cover under the equator, or leaves it out (the marker stays readable; the graticule line stays)", () => {
+    const grid = equalAreaGrid(10 * DEG);
+    const values = new Float64Array(grid.count).fill(1);
+    const plain = renderSphereMapSvg(values, grid, {});
+    const marked = renderSphereMapSvg(values, grid, { candidates: [{ direction: [1, 0, 0], label: "1" }] });
+    const zeroLabel = (svg: string) => {
+      const g = /<g class="sa-graticule-labels">([\s\S]*?)<\/g>/.exec(svg)![1];
+      const m = [...g.matchAll(/<text x="([\d.]+)" y="([\d.]+)"[^>]*>0°<\/text>/g)].map((x) => [Number(x[1]), Number(x[2])]);
+      return m.length ? m[m.length - 1] : undefined;
+    };
+    const before = zeroLabel(plain)!;
+    const after = zeroLabel(marked);
+    // lon 0, lat 0 is where the marker sits: the label is no longer just above it
+    if (after) expect(after[1]).toBeGreaterThan(before[1] + 8);
+    expect(marked).toContain('class="sa-candidate"');
+  });
+});
