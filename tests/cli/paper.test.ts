@@ -67,6 +67,8 @@ describe("grip card", () => {
     else expect(text).toContain(`This is the ${turn.hold} hold`);
     expect(text).toMatch(/Index: (on|in|inside|just)/);
     expect(text).toMatch(/your view, from behind the ball/);
+    // the key names the fingers this grip uses: a fastball's index, middle and thumb, no ring finger
+    expect(text).toContain("I M T: fingers and thumb");
     expect(text).toContain("the catcher's view");
   });
 

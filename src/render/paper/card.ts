@@ -19,6 +19,8 @@ export interface CardContent {
   readonly summary: string;
   /** The ball drawings, or none for a card that names no grip (out of reach). */
   readonly drawings?: CardDrawings;
+  /** What the marks on the drawings mean (cardKey). */
+  readonly key?: string;
   readonly howTo: readonly string[];
   readonly want: string;
   readonly compare: readonly (readonly string[])[];
@@ -33,6 +35,7 @@ export function cardContent(report: ScreenReport, o: OrientationReport, seamShap
     title: orientationTitle(report, o),
     summary: pitchSummary(report),
     drawings: cardDrawings(report, o, seamShape, 180, idPrefix),
+    key: cardKey(o),
     howTo: holdLines(report, o),
     want: report.input.pitch.want,
     compare: compareRows(report, o),
@@ -57,8 +60,11 @@ export function outOfReachContent(report: ScreenReport): CardContent {
 /** The smallest type on any printed page, points (common practice for fine print, no source). */
 export const MIN_TEXT_PT = 6;
 
-/** What the marks on the two drawings mean. */
-export const CARD_KEY = "I M R T: fingers and thumb \u00b7 dashed line: spin axis \u00b7 arrow: seam push";
+/** What the marks on a grip's two drawings mean: the letters of the fingers it uses (index, middle, ring, thumb), the axis, the push. */
+export function cardKey(o: OrientationReport): string {
+  const letters = (["index", "middle", "ring", "thumb"] as const).filter((f) => o.fingers.some((p) => p.finger === f)).map((f) => f[0].toUpperCase());
+  return `${letters.join(" ")}: fingers and thumb \u00b7 dashed line: spin axis \u00b7 arrow: seam push`;
+}
 
 const pt = (b: Box): BoxPt => ({ x: b.xIn * PT_PER_IN, y: b.yIn * PT_PER_IN, w: b.wIn * PT_PER_IN, h: b.hIn * PT_PER_IN });
 
@@ -79,7 +85,7 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
     const keyH = f.sizePt * 1.3;
     nestScene(card, c.drawings.pitcher, p.x, p.y, p.w, p.h - keyH);
     nestScene(card, c.drawings.catcher, q.x, q.y, q.w, q.h - keyH);
-    setText(card, CARD_KEY, { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: small, fill: "#333333" });
+    setText(card, c.key ?? "", { x: p.x + 4, y: p.y + p.h - keyH, w: q.x + q.w - p.x - 4, h: keyH }, { sizePt: small, fill: "#333333" });
     // every sentence, the type a point and a half smaller at most, before the last ones
     // (where the axis goes, which the technical line also says; then the thumb) give way
     const box = pt(b.howTo);
