@@ -14,7 +14,6 @@ export function registerFlight(y: Argv): Argv {
             .option("axis", textOption("spin axis on the ball: X,Y,Z, a landmark name, or 12.5N,45E"))
             .option("candidate", textOption("use the screen's candidate N for this pitch instead of --axis"))
             .option("reference", textOption("use a reference hold instead of --axis: four-seam or two-seam"))
-
             .option("air", textOption("standard (the air options apply) or none (a vacuum check)", "standard"))
             .option("release-height-ft", textOption("release height above the ground, ft", "6"))
             .option("release-side-ft", textOption("release point toward the arm side of the rubber's middle, ft", "1.5"))

@@ -42,8 +42,7 @@ export function withSamplerOptions<T>(y: Argv<T>) {
     .option("seam-points", text(`seam samples, a multiple of 4 from ${SEAM_POINTS_RANGE[0]} to ${SEAM_POINTS_RANGE[1]}`, String(DEFAULT_SEAM_POINTS)));
 }
 
-/** The screen's grid, scatter, ranking and fingers. */
-/** The screen's own options: what each means and its default. */
+/** The screen's own options (grid, scatter, ranking, fingers): what each means and its default. */
 const SCREEN_OPTIONS: readonly (readonly [name: string, describe: string, fallback: string])[] = [
   ["grid", `spacing of the axis-position grid on the ball, deg (${GRID_SPACING_RANGE_DEG[0]} to ${GRID_SPACING_RANGE_DEG[1]})`, String(DEFAULT_GRID_SPACING_DEG)],
   ["spread", `release scatter of the axis on the ball, deg per direction (${SPREAD_RANGE_DEG[0]} to ${SPREAD_RANGE_DEG[1]})`, String(DEFAULT_SPREAD_DEG)],
@@ -51,6 +50,7 @@ const SCREEN_OPTIONS: readonly (readonly [name: string, describe: string, fallba
   ["finger-spacing", "centre-to-centre spacing of the index and middle pads, inches", String(DEFAULT_FINGER_SPACING_IN)],
 ];
 
+/** The screen's options with their defaults, and the trade's window. */
 export function withScreenOptions<T>(y: Argv<T>) {
   let out = y;
   for (const [name, describe, fallback] of SCREEN_OPTIONS) out = out.option(name, text(describe, fallback));

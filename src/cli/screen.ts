@@ -39,8 +39,8 @@ export function registerScreen(y: Argv): Argv {
       const { parseScreen, runScreen } = await import("../jobs/screen.js");
       const { inputFiles } = await import("../jobs/request/inputs.js");
       const job = parseScreen(argv);
-      const mapOutputs = mapsWanted(argv.map, job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name)));
       const labels = job.pitches.map((p) => (p.echo.pitcher ? `${p.echo.pitcher}-${p.echo.name}` : p.echo.name));
+      const mapOutputs = mapsWanted(argv.map, labels);
       const pngOutputs = mapsWanted(argv["map-png"], labels, "--map-png", "png");
       const wanted: WantedOutput[] = [{ option: "--out", path: argv.out, format: argv.csv ? "csv" : "json" }, ...mapOutputs, ...pngOutputs];
       // standard output carries one document: --out - may go with --json or --csv (the same document), nothing else

@@ -76,10 +76,6 @@ export function parseFlight(request: Request): FlightJob {
     if (n < 1 || n > TOP_RANGE[1]) throw new InputError(`--candidate ${n} is out of range; expected 1 to ${TOP_RANGE[1]}`);
     axisRequest = { kind: "candidate", n };
     axisGiven = `candidate ${n}`;
-    if (request.top !== undefined) {
-      const top = parseInteger("top", request.top, "a whole number of candidates");
-      if (n > top) throw new InputError(`--candidate ${n} is beyond --top ${top}; expected a candidate from 1 to ${top}`);
-    }
   } else {
     const name = oneOf("reference", request.reference, ["four-seam", "two-seam"] as const);
     axisRequest = { kind: "reference", name };
@@ -108,11 +104,13 @@ export function parseFlight(request: Request): FlightJob {
   };
 }
 
-/** The screen's list length: --top as `screen` reads it (default 5), long enough for the candidate asked for. */
+/** The screen's list length: --top as `screen` reads it, which must reach the candidate asked for; without it the default 5, or the candidate's number when that is more. */
 function screenTop(request: Request, ask: FlightJob["axisRequest"]): number {
-  const given = request.top === undefined ? DEFAULT_TOP : parseInteger("top", request.top, "a whole number of candidates");
-  if (!(given >= TOP_RANGE[0] && given <= TOP_RANGE[1])) throw new InputError(`--top ${given} is out of range; expected ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
-  return ask.kind === "candidate" ? Math.max(ask.n, given) : given;
+  if (request.top === undefined) return ask.kind === "candidate" ? Math.max(ask.n, DEFAULT_TOP) : DEFAULT_TOP;
+  const top = parseInteger("top", request.top, "a whole number of candidates");
+  if (!(top >= TOP_RANGE[0] && top <= TOP_RANGE[1])) throw new InputError(`--top ${top} is out of range; expected ${TOP_RANGE[0]} to ${TOP_RANGE[1]}`);
+  if (ask.kind === "candidate" && ask.n > top) throw new InputError(`--candidate ${ask.n} is beyond --top ${top}; expected a candidate from 1 to ${top}`);
+  return top;
 }
 
 /** The screen's coefficient maps kept in the request's cache folder (--cache; none: computed each run). */

@@ -12,7 +12,7 @@ import type { SeamModelProfile } from "../physics/seamModel/parameters.js";
 import { screenReport, type ScreenReport } from "../screening/report.js";
 import { screenPitch, type CoefficientMapSource, type ScreenProgress, type ScreenResult } from "../screening/screen.js";
 import { InputError } from "../io/errors.js";
-import type { PitchInput } from "./request/pitchSpec.js";
+import { pitchPath, type PitchInput } from "./request/pitchSpec.js";
 import { buildModel } from "./request/profile.js";
 import { airConditions, samplerSettings, screenOptions, topOption, windowStart, type SamplerSettings, type ScreenOptions } from "./request/settings.js";
 import type { Request } from "./request/values.js";
@@ -74,10 +74,10 @@ export interface ScreenSources {
 export function screenJobOf(request: Request, sources: ScreenSources, top: TopChoice = {}): ScreenJob {
   const chosen = topOption(request, top.fallback, top.range);
   const { team, pitches } = sources.pitches();
+  const fromFile = request.demo === true || request.pitch !== undefined;
   for (const p of pitches) {
     if (p.pitch.spinRadPerS === 0) {
-      const fromFile = request.demo === true || request.pitch !== undefined;
-      const who = fromFile ? `${p.echo.pitcher ? `${p.echo.pitcher}/${p.echo.name}` : p.echo.name}: spin 0 rpm` : "--spin 0";
+      const who = fromFile ? `${pitchPath(p.echo)}: spin 0 rpm` : "--spin 0";
       throw new InputError(`${who} has no spin axis, so there is no seam orientation to screen; expected a spin above 0 rpm (a ball without spin flies with flight --axis AXIS --phase DEG)`);
     }
   }
@@ -92,7 +92,7 @@ export function screenJobOf(request: Request, sources: ScreenSources, top: TopCh
     air: airConditions(request),
     windowStartM: windowStart(request),
     top: Math.max(chosen, top.atLeast ?? 1),
-    fromFile: request.demo === true || request.pitch !== undefined,
+    fromFile,
   };
 }
 

@@ -10,7 +10,7 @@ import { parseStrictJson, type LocatedJson } from "../../io/json.js";
 import { quote } from "../../io/quote.js";
 import { errnoWords } from "../../io/writeErrors.js";
 import { projectRoot } from "../../version.js";
-import { buildPitch, PITCH_FLAGS, pitchFromFlags, type PitchFlags, type PitchInput, type RawPitch } from "./pitchSpec.js";
+import { buildPitch, PITCH_FLAGS, pitchFromFlags, pitchPath, type PitchFlags, type PitchInput, type RawPitch } from "./pitchSpec.js";
 import type { Request } from "./values.js";
 
 export * from "./pitchSpec.js";
@@ -79,9 +79,8 @@ export function pitchesFromFile(path: string, label = `--pitch ${quote(path)}`):
  */
 export function onePitch<T extends { readonly echo: PitchInput["echo"] }>(request: Request, pitches: readonly T[], command: string, why: string): T {
   if (pitches.length === 1) return pitches[0];
-  const label = (p: T) => (p.echo.pitcher ? `${p.echo.pitcher}/${p.echo.name}` : p.echo.name);
   if (request["pitch-name"] !== undefined && pitches.length > 1) {
-    throw new InputError(`--pitch-name ${quote(String(request["pitch-name"]))} matches ${pitches.length} pitches (${pitches.map(label).join(", ")}); ${command} takes one: expected PITCHER/NAME`);
+    throw new InputError(`--pitch-name ${quote(String(request["pitch-name"]))} matches ${pitches.length} pitches (${pitches.map((p) => pitchPath(p.echo)).join(", ")}); ${command} takes one: expected PITCHER/NAME`);
   }
   throw new InputError(`${command} takes one pitch; the file has ${pitches.length} (${why})`);
 }
@@ -90,7 +89,7 @@ export function onePitch<T extends { readonly echo: PitchInput["echo"] }>(reques
 export function selectPitches(file: PitchFile, selector: string | undefined, source: string): PitchInput[] {
   if (selector === undefined) return file.pitches;
   const key = selector.trim().toLowerCase();
-  const label = (p: PitchInput) => (p.echo.pitcher ? `${p.echo.pitcher}/${p.echo.name}` : p.echo.name);
+  const label = (p: PitchInput) => pitchPath(p.echo);
   const found = file.pitches.filter((p) => label(p).toLowerCase() === key || p.echo.name.toLowerCase() === key);
   if (found.length === 0) {
     throw new InputError(`--pitch-name ${quote(selector)} is not in ${quote(source)}; expected one of ${file.pitches.map(label).join(", ")}`);

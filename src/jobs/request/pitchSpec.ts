@@ -38,6 +38,11 @@ export interface PitchInput {
   readonly echo: PitchEcho;
 }
 
+/** How a pitch is named for --pitch-name and in messages: "PITCHER/NAME", or "NAME" with no pitcher. */
+export function pitchPath(echo: { readonly pitcher: string; readonly name: string }): string {
+  return echo.pitcher ? `${echo.pitcher}/${echo.name}` : echo.name;
+}
+
 const PITCH_FIELDS = ["name", "pitcher", "hand", "speedMph", "spinRpm", "tilt", "tiltDeg", "view", "gyroDeg", "efficiencyPct", "gyroSign", "want"];
 /** Hand words accepted (any case) and what each means. */
 const HAND_WORDS: Record<string, Pitch["hand"]> = { right: "right", left: "left", r: "right", l: "left" };

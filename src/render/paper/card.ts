@@ -11,7 +11,7 @@ import { fixed } from "../numbers.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import type { Box, Layout } from "./layouts.js";
 import { PT_PER_IN, setTable, setText, textHeight, type BoxPt } from "./textLayout.js";
-import { cardDrawings, type CardDrawings } from "./views.js";
+import { cardDrawings, FINGER_LETTERS, type CardDrawings } from "./views.js";
 import { CAUTION_SHORT, COMPARE_CAPTION, COMPARE_COLUMNS, compareOwnRow, compareRows, holdLines, orientationTitle, pitchLabel, pitchSummary, reachWords, technicalLine, WANT_WORDS } from "./words.js";
 
 export interface CardContent {
@@ -62,7 +62,7 @@ export const MIN_TEXT_PT = 6;
 
 /** What the marks on a grip's two drawings mean: the letters of the fingers it uses (index, middle, ring, thumb), the axis, the push. */
 export function cardKey(o: OrientationReport): string {
-  const letters = (["index", "middle", "ring", "thumb"] as const).filter((f) => o.fingers.some((p) => p.finger === f)).map((f) => f[0].toUpperCase());
+  const letters = (Object.keys(FINGER_LETTERS) as (keyof typeof FINGER_LETTERS)[]).filter((f) => o.fingers.some((p) => p.finger === f)).map((f) => FINGER_LETTERS[f]);
   return `${letters.join(" ")}: fingers and thumb \u00b7 dashed line: spin axis \u00b7 arrow: seam push`;
 }
 
@@ -92,7 +92,7 @@ export function cardScene(layout: Layout, c: CardContent): SceneNode {
     const fits = (lines: readonly string[], sizePt: number) => textHeight(lines.join("\n"), box.w, { sizePt, leading: 1.2, paragraphGap: 0.25 }) <= box.h;
     const smallest = Math.max(MIN_TEXT_PT, f.sizePt - 1.5);
     let lines = [...c.howTo];
-    let size = f.sizePt;
+    let size: number;
     for (;;) {
       size = f.sizePt;
       while (size > smallest && !fits(lines, size)) size = Math.max(smallest, size - 0.25);

@@ -15,11 +15,10 @@ import { seamForceNewtons } from "../../physics/seamModel/newtons.js";
 import type { SeamModelValues } from "../../physics/seamModel/parameters.js";
 import { forceTimeline } from "../../physics/seamModel/turn.js";
 import { coverModel } from "../../../geometry/coverRegions.js";
-import { applyRotation, PAD_SIZE_IN, placeFingers, transposeRotation, type Finger } from "../../screening/hand.js";
+import { placeFingers } from "../../screening/hand.js";
 import { pitchFrame } from "../../screening/pitch.js";
 import { findReferenceAxes } from "../../screening/references.js";
 import { ballScene } from "../ballDrawing.js";
-import { viewFromDirections } from "../projection.js";
 import { fixed } from "../numbers.js";
 import { createScene, nestScene, type SceneNode } from "../scene.js";
 import { pdfOfPages, type Page } from "./document.js";
@@ -28,6 +27,7 @@ import { PT_PER_IN } from "./pdfScene.js";
 import { modelStory } from "./story.js";
 import { setText, textHeight, type BoxPt } from "./textLayout.js";
 import { timelineScene } from "./timelineChart.js";
+import { fingerMarks, releaseViews } from "./views.js";
 import { CAUTION_LONG, HOLD_GRIP, HOLD_WORDS, SEAM_PICTURE } from "./words.js";
 
 /** The clinic's own lines for the header (any may be left out). */
@@ -66,12 +66,11 @@ export interface HandoutFigure {
 /** The example pitch of the figures and the hold drawings: a right-hander's backspin fastball. */
 function examplePitch() {
   return {
+    // the spin's rate sets nothing a hold drawing shows (its axis is the hold's, its tilt 12:00)
     name: "fastball", pitcher: "", hand: "right" as const, speedMPerS: HANDOUT_SPEED_MPH * M_PER_S_PER_MPH, spinRadPerS: (2200 * 2 * Math.PI) / 60,
     tiltRad: 0, view: "pitcher" as const, gyroRad: HANDOUT_GYRO_DEG * DEG, want: "any" as const,
   };
 }
-
-const FINGER_LETTERS: Record<string, string> = { index: "I", middle: "M", thumb: "T" };
 
 /**
  * A classic hold in the hand, from the pitcher's own view behind the ball (field up at
@@ -81,14 +80,8 @@ const FINGER_LETTERS: Record<string, string> = { index: "I", middle: "M", thumb:
 export function holdScene(seam: SeamSamples, hold: "four-seam" | "two-seam", idPrefix: string): SceneNode {
   const axis = findReferenceAxes(seam).find((r) => r.name === hold)!.axis;
   const grip = placeFingers(axis, pitchFrame(examplePitch()), seam, coverModel(seam.shape), undefined, "fastball");
-  const toBall = transposeRotation(grip.ballToField);
-  const b = (v: [number, number, number]) => applyRotation(toBall, v);
-  const fingers = grip.pads.map((p) => {
-    const size = PAD_SIZE_IN[p.finger as Finger];
-    return { direction: p.direction, pointing: p.pointing, widthIn: size.widthIn, lengthIn: size.lengthIn, label: FINGER_LETTERS[p.finger] ?? p.finger, working: p.working };
-  });
   return ballScene(
-    { seamShape: seam.shape, view: viewFromDirections(b([0, 1, 0]), b([0, 0, 1])), overlays: { fingers }, caption: `the ${hold} hold, from behind the ball`, sides: { left: "glove side", right: "arm side" } },
+    { seamShape: seam.shape, view: releaseViews(grip.ballToField).behind, overlays: { fingers: fingerMarks(grip.pads) }, caption: `the ${hold} hold, from behind the ball`, sides: { left: "glove side", right: "arm side" } },
     { sizePx: 300, seamPoints: 256, legend: false, idPrefix },
   );
 }

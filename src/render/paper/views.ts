@@ -20,7 +20,24 @@ import type { FingerMark } from "../ballOverlays.js";
 import { viewFromDirections } from "../projection.js";
 import type { SceneNode } from "../scene.js";
 
-const LABELS: Record<string, string> = { index: "I", middle: "M", ring: "R", thumb: "T" };
+/** The letter each finger is drawn with, in the order keys list them. */
+export const FINGER_LETTERS: Readonly<Record<Finger, string>> = { index: "I", middle: "M", ring: "R", thumb: "T" };
+
+/** A grip's pads as drawn: at an adult's pad size (src/screening/hand.ts PAD_SIZE_IN), lettered. */
+export function fingerMarks(pads: readonly { readonly finger: string; readonly direction: Vec3; readonly pointing: Vec3; readonly working: boolean }[]): FingerMark[] {
+  return pads.map((f) => {
+    const size = PAD_SIZE_IN[f.finger as Finger] ?? PAD_SIZE_IN.index;
+    return { direction: f.direction, pointing: f.pointing, widthIn: size.widthIn, lengthIn: size.lengthIn, label: FINGER_LETTERS[f.finger as Finger] ?? f.finger, working: f.working };
+  });
+}
+
+/** Field directions in the ball frame at release (the hand model's rotation), and the two views: from behind the ball (the pitcher's) and from the plate. */
+export function releaseViews(ballToField: readonly number[]) {
+  const toBall = transposeRotation(ballToField);
+  const b = (v: Vec3) => applyRotation(toBall, v);
+  const up = b([0, 0, 1]);
+  return { toBall: b, behind: viewFromDirections(b([0, 1, 0]), up), fromPlate: viewFromDirections(b([0, -1, 0]), up) };
+}
 /** Seam samples for a card's drawings: about 0.035 in apart on the ball, below a printed dot at a card's 1.5 in ball. */
 const CARD_SEAM_POINTS = 256;
 
@@ -30,13 +47,8 @@ export interface CardDrawings {
 }
 
 export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: number, sizePx = 300, idPrefix = "card"): CardDrawings {
-  const toBall = transposeRotation(o.release.ballToField);
-  const b = (v: Vec3) => applyRotation(toBall, v);
-  const up = b([0, 0, 1]);
-  const fingers: FingerMark[] = o.fingers.map((f) => {
-    const size = PAD_SIZE_IN[f.finger as Finger] ?? PAD_SIZE_IN.index;
-    return { direction: f.direction, pointing: f.pointing, widthIn: size.widthIn, lengthIn: size.lengthIn, label: LABELS[f.finger] ?? f.finger, working: f.working };
-  });
+  const { toBall: b, behind, fromPlate } = releaseViews(o.release.ballToField);
+  const fingers = fingerMarks(o.fingers);
   // the seam movement at the plate (plate plane: x toward the catcher's right, z up)
   const push: Vec3 = [o.seamMovement.horizontalIn, 0, o.seamMovement.verticalIn];
   const hasPush = Math.hypot(...push) > 0.05;
@@ -46,7 +58,7 @@ export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: n
   const pitcher = ballScene(
     {
       seamShape,
-      view: viewFromDirections(b([0, 1, 0]), up),
+      view: behind,
       overlays: { spinAxis: o.axis, fingers, ...pushOverlay("push") },
       caption: "your view, from behind the ball",
       sides: armOnPitchersRight ? { left: "glove side", right: "arm side" } : { left: "arm side", right: "glove side" },
@@ -56,7 +68,7 @@ export function cardDrawings(r: ScreenReport, o: OrientationReport, seamShape: n
   const catcher = ballScene(
     {
       seamShape,
-      view: viewFromDirections(b([0, -1, 0]), up),
+      view: fromPlate,
       overlays: { spinAxis: o.axis, fingers, ...pushOverlay() },
       caption: "the catcher's view",
       sides: armOnPitchersRight ? { left: "arm side", right: "glove side" } : { left: "glove side", right: "arm side" },
